@@ -1,0 +1,37 @@
+namespace PartForge.Design.Model;
+
+public sealed class Magnets
+{
+    [OneOf("disc", "block", "arc"), Doc("disc | block | arc (segment of an annulus).")]
+    public string Shape { get; init; } = "disc";
+
+    [Range(0, 500, MinExclusive = true), Doc("Disc magnet diameter, mm (shape: disc).")]
+    public double? Diameter { get; init; }
+
+    [Range(0, 500, MinExclusive = true), Doc("Block magnet radial length, mm (shape: block).")]
+    public double? Length { get; init; }
+
+    [Range(0, 500, MinExclusive = true), Doc("Block magnet tangential width, mm (shape: block).")]
+    public double? Width { get; init; }
+
+    [Range(0, 1000), Doc("Arc segment inner radius, mm (shape: arc).")]
+    public double? InnerRadius { get; init; }
+
+    [Range(0, 1000, MinExclusive = true), Doc("Arc segment outer radius, mm (shape: arc).")]
+    public double? OuterRadius { get; init; }
+
+    [Range(0, 360, MinExclusive = true), Doc("Arc segment angular span, degrees (shape: arc).")]
+    public double? Span { get; init; }
+
+    [Range(0, 100, MinExclusive = true), Doc("Magnet thickness along the axis, mm.")]
+    public double Thickness { get; init; } = 4;
+
+    [Pattern("^N(3[5-9]|4[0-9]|5[0-2])(M|H|SH|UH|EH)?$"), Doc("Sintered NdFeB grade N35 ... N52 (ignored when br is given).")]
+    public string Grade { get; init; } = "N42";
+
+    [Range(0, 2, MinExclusive = true), Doc("Remanence in tesla; overrides the grade's mid-range value.")]
+    public double? Br { get; init; }
+
+    [Range(0, 1000, MinExclusive = true), Doc("Radius of the magnet centres, mm (disc, block).")]
+    public double? PitchRadius { get; init; }
+}

@@ -1,0 +1,28 @@
+namespace PartForge.Design.Model;
+
+public sealed class Sensor
+{
+    [OneOf("hall", "reed", "none"), Doc("Timing sensor kind.")]
+    public string Kind { get; init; } = "hall";
+
+    [OneOf("1", "3"), Doc("Number of sensors: 1 or 3.")]
+    public int Count { get; init; } = 3;
+
+    [Range(-180, 180), Doc("Timing advance, electrical degrees.")]
+    public double AdvanceElec { get; init; }
+
+    [Doc("Sensor body size, mm.")]
+    public SensorBody Body { get; init; } = new();
+}
+
+public sealed class SensorBody
+{
+    [Range(0, 100, MinExclusive = true), Doc("Body length (radial), mm.")]
+    public double Length { get; init; } = 4.0;
+
+    [Range(0, 100, MinExclusive = true), Doc("Body width (tangential), mm.")]
+    public double Width { get; init; } = 3.0;
+
+    [Range(0, 100, MinExclusive = true), Doc("Body height (axial), mm.")]
+    public double Height { get; init; } = 1.6;
+}

@@ -1,0 +1,31 @@
+namespace PartForge.Design.Model;
+
+public sealed class Stator
+{
+    [Range(0, 2000), Doc("Stator ring inner diameter, mm.")]
+    public double InnerDiameter { get; init; } = 30;
+
+    [Range(0, 3000, MinExclusive = true), Doc("Stator ring outer diameter, mm.")]
+    public double OuterDiameter { get; init; } = 130;
+
+    [Range(0, 100, MinExclusive = true), Doc("Stator ring thickness, mm.")]
+    public double Thickness { get; init; } = 6;
+
+    [Doc("Mount holes on a circle; omit for none.")]
+    public Mount? Mount { get; init; }
+
+    [OneOf("PLA", "PETG", "ABS", "ASA", "PA", "aluminium", "steel", "acrylic", "plywood"), Doc("Stator ring material.")]
+    public string Material { get; init; } = "PLA";
+}
+
+public sealed class Mount
+{
+    [Range(0, 3000, MinExclusive = true), Doc("Mount hole circle diameter, mm.")]
+    public double CircleDiameter { get; init; } = 122;
+
+    [Range(1, 64), Doc("Number of mount holes.")]
+    public int Count { get; init; } = 4;
+
+    [Range(0, 100, MinExclusive = true), Doc("Mount hole diameter, mm.")]
+    public double Hole { get; init; } = 4.5;
+}
