@@ -1,0 +1,14 @@
+using PartForge.Geometry.Primitives;
+
+namespace PartForge.Formats.Png;
+
+/// <summary>
+/// One triangle mesh to draw, with a flat colour. <paramref name="Triangles"/> holds three vertex indices a
+/// triangle. The rasteriser lights both sides, so the winding order only matters for the mesh's own validity.
+/// </summary>
+public sealed record RenderItem(IReadOnlyList<Vec3> Positions, IReadOnlyList<int> Triangles, Rgb Colour)
+{
+    /// <summary>This item moved by an offset (the assembly places parts along the axis this way).</summary>
+    public RenderItem Translated(Vec3 offset) =>
+        this with { Positions = Positions.Select(p => p + offset).ToArray() };
+}
