@@ -5,7 +5,7 @@ public sealed class Sensor
     [OneOf("hall", "reed", "none"), Doc("Timing sensor kind.")]
     public string Kind { get; init; } = "hall";
 
-    [OneOf("1", "3"), Doc("Number of sensors: 1 or 3.")]
+    [OneOf("1", "3"), Doc("Number of sensors: 1 or 3 (default: one per phase).")]
     public int Count { get; init; } = 3;
 
     [Range(-180, 180), Doc("Timing advance, electrical degrees.")]

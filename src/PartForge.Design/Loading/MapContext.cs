@@ -1,0 +1,46 @@
+namespace PartForge.Design.Loading;
+
+/// <summary>State of one mapping run: errors and where each key path was found.</summary>
+internal sealed class MapContext(string file)
+{
+    public string File { get; } = file;
+    public List<DesignError> Errors { get; } = [];
+
+    /// <summary>Key path -> the key's node (position of the key in the file).</summary>
+    public Dictionary<string, YNode> Keys { get; } = new(StringComparer.Ordinal);
+
+    /// <summary>Key path -> the value's node.</summary>
+    public Dictionary<string, YNode> Values { get; } = new(StringComparer.Ordinal);
+
+    /// <summary>True when the key is in the file (or an override) with a non-null value.</summary>
+    public bool Has(string path) => Values.TryGetValue(path, out var v) && !(v is YScalar s && s.IsNull);
+
+    public void Add(DesignError e) => Errors.Add(e);
+
+    /// <summary>An error located at a node.</summary>
+    public DesignError At(YNode? node, string path, string message, string kind, string? value = null, string? allowed = null, string? suggestion = null) => new()
+    {
+        File = File,
+        Line = node == null || node.FromOverride ? 0 : node.Line,
+        Column = node == null || node.FromOverride ? 0 : node.Column,
+        FromOverride = node?.FromOverride ?? false,
+        KeyPath = path, Message = message, Kind = kind, Value = value, Allowed = allowed, Suggestion = suggestion,
+    };
+
+    /// <summary>
+    /// An error about a key path, placed at the first of the given paths (or their parents) that is in the file:
+    /// the value node if it came from an override, else the key.
+    /// </summary>
+    public DesignError AtKey(string path, string message, string? value = null, string? allowed = null, string? suggestion = null, params string[] fallbacks)
+    {
+        foreach (var p in new[] { path }.Concat(fallbacks))
+        {
+            for (string q = p; q.Length > 0; q = q.Contains('.') ? q[..q.LastIndexOf('.')] : "")
+            {
+                if (Values.TryGetValue(q, out var v) && v.FromOverride) return At(v, path, message, "rule", value, allowed, suggestion);
+                if (Keys.TryGetValue(q, out var k)) return At(k, path, message, "rule", value, allowed, suggestion);
+            }
+        }
+        return new DesignError { File = File, Line = 1, Column = 1, KeyPath = path, Message = message, Kind = "rule", Value = value, Allowed = allowed, Suggestion = suggestion };
+    }
+}

@@ -1,0 +1,183 @@
+using System.Globalization;
+using PartForge.Design.Keys;
+
+namespace PartForge.Design.Loading;
+
+/// <summary>
+/// Maps a YAML mapping onto a model class by reflection over its <see cref="SectionSpec"/>: every key checked
+/// for existence, type, range, word list and pattern; every problem recorded, none thrown.
+/// </summary>
+internal static class NodeMapper
+{
+    public static object MapSection(SectionSpec spec, YMapping map, string prefix, MapContext ctx)
+    {
+        var instance = Activator.CreateInstance(spec.Type)!;
+        var seen = new Dictionary<string, YNode>(StringComparer.Ordinal);
+        foreach (var entry in map.Entries)
+        {
+            if (entry.Key is not YScalar ks || ks.IsNull)
+            {
+                ctx.Add(ctx.At(entry.Key, prefix, "a key must be a plain word such as 'poles'", "type"));
+                continue;
+            }
+            string key = ks.Text;
+            string path = prefix.Length == 0 ? key : prefix + "." + key;
+            if (seen.TryGetValue(key, out var first))
+            {
+                ctx.Add(ctx.At(ks, path, $"is given twice (first on line {first.Line}); keep one", "duplicate"));
+                continue;
+            }
+            seen[key] = ks;
+            var spec1 = spec.Find(key);
+            if (spec1 == null)
+            {
+                ctx.Add(ctx.At(ks, path, "is not a known key", "unknown-key",
+                    allowed: "keys here: " + string.Join(", ", spec.Keys.Select(k => k.Key)),
+                    suggestion: KeySuggester.ForKey(key, spec, prefix)));
+                continue;
+            }
+            ctx.Keys[path] = ks;
+            ctx.Values[path] = entry.Value;
+            if (TryValue(spec1, entry.Value, path, ctx, out var value) && value != null)
+                spec1.Property.SetValue(instance, value);
+        }
+        foreach (var k in spec.Keys)
+        {
+            if (k.IsRequired && !seen.ContainsKey(k.Key))
+            {
+                string path = prefix.Length == 0 ? k.Key : prefix + "." + k.Key;
+                ctx.Add(ctx.At(map, path, "is missing; it is required", "missing", allowed: k.AllowedText()));
+            }
+        }
+        return instance;
+    }
+
+    /// <summary>Converts one value; false (with an error recorded) when it is not allowed. Null value = leave the default.</summary>
+    private static bool TryValue(KeySpec k, YNode node, string path, MapContext ctx, out object? value)
+    {
+        value = null;
+        if (k.Kind == ValueKind.Section)
+        {
+            switch (node)
+            {
+                case YMapping m:
+                    value = MapSection(k.Section!, m, path, ctx);
+                    return true;
+                case YScalar s when s.IsNull:
+                    // "back_iron:" with nothing: an optional section stays absent; a section with defaults keeps them.
+                    return true;
+                default:
+                    ctx.Add(ctx.At(node, path, $"{Describe(node)} is not allowed here", "type", allowed: "a section of keys (indented 'key: value' lines or { key: value })"));
+                    return false;
+            }
+        }
+        if (node is not YScalar sc)
+        {
+            ctx.Add(ctx.At(node, path, $"{Describe(node)} is not allowed here", "type", allowed: k.AllowedText()));
+            return false;
+        }
+        if (sc.IsNull)
+        {
+            if (k.IsOptional) return true;
+            ctx.Add(ctx.At(sc, path, "needs a value", "missing", allowed: k.AllowedText()));
+            return false;
+        }
+        switch (k.Kind)
+        {
+            case ValueKind.Integer:
+            {
+                if (sc.Quoted || !TryNumber(sc.Text, out double d))
+                {
+                    ctx.Add(ctx.At(sc, path, sc.Quoted ? "is text, not a number (leave out the quotes)" : "is not a number", "type", sc.Shown, k.AllowedText()));
+                    return false;
+                }
+                if (double.IsFinite(d) && d != Math.Floor(d))
+                {
+                    ctx.Add(ctx.At(sc, path, "is not a whole number", "type", sc.Shown, k.AllowedText()));
+                    return false;
+                }
+                if (!k.InRange(d) || d is > int.MaxValue or < int.MinValue)
+                {
+                    ctx.Add(ctx.At(sc, path, double.IsFinite(d) ? "is not allowed" : "is not a finite number", "range", sc.Shown, k.AllowedText()));
+                    return false;
+                }
+                int i = (int)d;
+                if (k.OneOf != null && !k.OneOf.Contains(i.ToString(CultureInfo.InvariantCulture)))
+                {
+                    ctx.Add(ctx.At(sc, path, "is not allowed", "range", sc.Shown, k.AllowedText()));
+                    return false;
+                }
+                value = i;
+                return true;
+            }
+            case ValueKind.Number:
+            {
+                if (sc.Quoted || !TryNumber(sc.Text, out double d))
+                {
+                    ctx.Add(ctx.At(sc, path, sc.Quoted ? "is text, not a number (leave out the quotes)" : "is not a number", "type", sc.Shown, k.AllowedText()));
+                    return false;
+                }
+                if (!k.InRange(d))
+                {
+                    ctx.Add(ctx.At(sc, path, double.IsFinite(d) ? "is not allowed" : "is not a finite number", "range", sc.Shown, k.AllowedText()));
+                    return false;
+                }
+                value = d;
+                return true;
+            }
+            case ValueKind.Boolean:
+            {
+                if (!sc.Quoted && sc.Text is "true" or "True" or "TRUE") { value = true; return true; }
+                if (!sc.Quoted && sc.Text is "false" or "False" or "FALSE") { value = false; return true; }
+                ctx.Add(ctx.At(sc, path, "is not true or false", "type", sc.Shown, k.AllowedText()));
+                return false;
+            }
+            default:
+            {
+                string text = sc.Text;
+                if (k.OneOf != null && !k.OneOf.Contains(text, StringComparer.Ordinal))
+                {
+                    var near = k.OneOf.FirstOrDefault(w => string.Equals(w, text, StringComparison.OrdinalIgnoreCase))
+                               ?? KeySuggester.Nearest(text, k.OneOf);
+                    ctx.Add(ctx.At(sc, path, "is not allowed", "range", sc.Shown, k.AllowedText(), near == null ? null : $"did you mean '{near}'?"));
+                    return false;
+                }
+                if (k.Pattern != null && !k.Pattern.IsMatch(text))
+                {
+                    ctx.Add(ctx.At(sc, path, "is not allowed", "pattern", sc.Shown, k.AllowedText()));
+                    return false;
+                }
+                value = text;
+                return true;
+            }
+        }
+    }
+
+    /// <summary>Parses a YAML 1.2 core-schema number (also .nan/.inf, which the ranges then refuse).</summary>
+    public static bool TryNumber(string text, out double value)
+    {
+        switch (text)
+        {
+            case ".nan" or ".NaN" or ".NAN" or "nan" or "NaN" or "NAN":
+                value = double.NaN; return true;
+            case ".inf" or ".Inf" or ".INF" or "+.inf" or "+.Inf" or "+.INF" or "inf" or "Infinity" or "+inf":
+                value = double.PositiveInfinity; return true;
+            case "-.inf" or "-.Inf" or "-.INF" or "-inf" or "-Infinity":
+                value = double.NegativeInfinity; return true;
+        }
+        if (text.Length == 0 || text.Length > 64 || text.Any(ch => !(char.IsAsciiDigit(ch) || ch is '.' or '-' or '+' or 'e' or 'E')))
+        {
+            value = 0;
+            return false;
+        }
+        return double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out value);
+    }
+
+    private static string Describe(YNode node) => node switch
+    {
+        YMapping => "a section",
+        YSequence => "a list",
+        YScalar s => s.Shown,
+        _ => "this value",
+    };
+}
