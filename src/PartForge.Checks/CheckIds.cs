@@ -1,0 +1,49 @@
+namespace PartForge.Checks;
+
+/// <summary>
+/// The stable check identifiers. They appear in the results document and scripts rely on them: add new
+/// ones, never rename.
+/// </summary>
+public static class CheckIds
+{
+    /// <summary>Worst-case axial running clearance on each rotating face (stack-up with every tolerance).</summary>
+    public const string RunningGap = "running-gap";
+    /// <summary>Rim deflection of a rotor disc under the magnetic pull (Roark annular plate).</summary>
+    public const string MagnetPullDeflection = "magnet-pull-deflection";
+    /// <summary>Bending stress at the clamped hub of a rotor disc under the magnetic pull (Roark annular plate).</summary>
+    public const string MagnetPullStress = "magnet-pull-stress";
+    /// <summary>Minimum 3D clearance between rotating and stationary bodies over one pole pitch.</summary>
+    public const string RotationClearance = "rotation-clearance";
+    /// <summary>Web between adjacent magnet pockets.</summary>
+    public const string PocketWeb = "pocket-web";
+    /// <summary>Wall between a magnet pocket and the rotor rim.</summary>
+    public const string PocketRimWall = "pocket-rim-wall";
+    /// <summary>Wall between a magnet pocket and the bore.</summary>
+    public const string PocketBoreWall = "pocket-bore-wall";
+    /// <summary>Wall between a magnet pocket and a bolt hole.</summary>
+    public const string PocketBoltWall = "pocket-bolt-wall";
+    /// <summary>Material under a blind magnet pocket, against the minimum wall and the layer count.</summary>
+    public const string PocketFloor = "pocket-floor";
+    /// <summary>Walls of the stator ring around the coil seats (between seats and to the ring edges).</summary>
+    public const string SeatWall = "seat-wall";
+    /// <summary>Material between a bolt or mount hole and the nearest edge.</summary>
+    public const string BoltEdgeDistance = "bolt-edge-distance";
+    /// <summary>Wall between a sensor pocket and the neighbouring coil seats.</summary>
+    public const string SensorSeatClearance = "sensor-seat-clearance";
+    /// <summary>Clearance between the windings (former flanges) of neighbouring coils in the ring.</summary>
+    public const string CoilCoilClearance = "coil-coil-clearance";
+    /// <summary>Copper fill factor the turns need, against hexagonal packing and the practical range.</summary>
+    public const string WindingFill = "winding-fill";
+    /// <summary>Hoop stress at the bore of a rotor spinning at max_rpm, magnets included (Timoshenko).</summary>
+    public const string RotorHoopStress = "rotor-hoop-stress";
+    /// <summary>Centrifugal force on a magnet at max_rpm against the pocket rim wall that holds it.</summary>
+    public const string MagnetRetention = "magnet-retention";
+    /// <summary>Axial magnetic pull on one magnet against the glue that holds it in its pocket.</summary>
+    public const string MagnetPullOut = "magnet-pull-out";
+    /// <summary>Current density in the coil wire at the operating point.</summary>
+    public const string CurrentDensity = "current-density";
+    /// <summary>Winding temperature against the softening point of the former and stator materials.</summary>
+    public const string CoilTemperature = "coil-temperature";
+    /// <summary>A diagnostic of the electrical engine (impossible combination, extra-low-voltage warning).</summary>
+    public const string Electrical = "electrical";
+}
