@@ -1,0 +1,43 @@
+using System.Diagnostics;
+using System.Text.Json;
+
+namespace PartForge.Formats.Tests.Golden;
+
+/// <summary>Runs an independent reader (Debian's python3-ezdxf, assimp-utils) on a written file.</summary>
+internal static class ExternalReader
+{
+    public const string Python = "/usr/bin/python3";
+
+    public static (int ExitCode, string Stdout, string Stderr) Run(string exe, params string[] args)
+    {
+        var psi = new ProcessStartInfo(exe) { RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false };
+        foreach (var a in args) psi.ArgumentList.Add(a);
+        using var p = Process.Start(psi) ?? throw new InvalidOperationException($"cannot start {exe}");
+        var stderr = p.StandardError.ReadToEndAsync();
+        string stdout = p.StandardOutput.ReadToEnd();
+        if (!p.WaitForExit(120_000))
+        {
+            p.Kill(entireProcessTree: true);
+            throw new TimeoutException($"{exe} did not finish");
+        }
+        return (p.ExitCode, stdout, stderr.Result);
+    }
+
+    /// <summary>Runs a python script (python3 -c) that prints one JSON document; returns it parsed.</summary>
+    public static JsonElement PythonJson(string script, params string[] args)
+    {
+        var all = new List<string> { "-c", script };
+        all.AddRange(args);
+        var (code, stdout, stderr) = Run(Python, all.ToArray());
+        Assert.True(code == 0, $"python reader failed ({code}): {stderr}");
+        using var doc = JsonDocument.Parse(stdout);
+        return doc.RootElement.Clone();
+    }
+
+    public static string TempFile(string extension)
+    {
+        string dir = Path.Combine(Path.GetTempPath(), "partforge-format-tests");
+        Directory.CreateDirectory(dir);
+        return Path.Combine(dir, $"{Guid.NewGuid():N}{extension}");
+    }
+}
