@@ -1,0 +1,147 @@
+using System.Globalization;
+using System.Text;
+using System.Text.Json;
+
+namespace PartForge.Cli.Sweep;
+
+/// <summary>The sweep's results as a plain text table, as RFC 4180 CSV and as a JSON document.</summary>
+public static class SweepOutput
+{
+    private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
+
+    public static string Cell(SweepRow r, string key, string format) =>
+        r.Outcome.Metrics.TryGetValue(key, out double v) && double.IsFinite(v) ? v.ToString(format, Inv) : "-";
+
+    public static string Value(SweepAxis a, double v) => a.WholeNumbers ? v.ToString("0", Inv) : v.ToString("0.####", Inv);
+
+    /// <summary>Headings and cells of the key-results table (no colour), shared by the plain and the terminal table.</summary>
+    public static (string[] Headings, List<string[]> Cells) TableCells(SweepPlan plan, IReadOnlyList<SweepRow> rows, SweepTarget? target)
+    {
+        var head = new List<string> { "#" };
+        head.AddRange(plan.Axes.Select(a => a.Key));
+        head.AddRange(SweepMetrics.TableColumns.Select(c => c.Heading));
+        if (target != null && SweepMetrics.TableColumns.All(c => c.Key != target.Key)) head.Add(target.Key);
+        head.Add("status");
+        head.Add("reason");
+        var cells = new List<string[]>();
+        foreach (var r in rows)
+        {
+            var c = new List<string> { (r.Index + 1).ToString(Inv) };
+            c.AddRange(plan.Axes.Select((a, k) => Value(a, r.Values[k])));
+            c.AddRange(SweepMetrics.TableColumns.Select(col => Cell(r, col.Key, col.Format)));
+            if (target != null && SweepMetrics.TableColumns.All(col => col.Key != target.Key)) c.Add(Cell(r, target.Key, "0.####"));
+            c.Add(r.Outcome.Status);
+            c.Add(r.Outcome.Reason);
+            cells.Add(c.ToArray());
+        }
+        return (head.ToArray(), cells);
+    }
+
+    public static string PlainTable(SweepPlan plan, IReadOnlyList<SweepRow> rows, SweepTarget? target)
+    {
+        var (head, cells) = TableCells(plan, rows, target);
+        var width = head.Select(h => h.Length).ToArray();
+        foreach (var c in cells)
+            for (int i = 0; i < c.Length - 1; i++) width[i] = Math.Max(width[i], c[i].Length);
+        var sb = new StringBuilder();
+        void Line(string[] c)
+        {
+            for (int i = 0; i < c.Length; i++)
+            {
+                if (i > 0) sb.Append("  ");
+                bool last = i == c.Length - 1;
+                sb.Append(last ? c[i] : (i == 0 || i > plan.Axes.Count ? c[i].PadLeft(width[i]) : c[i].PadLeft(width[i])));
+            }
+            sb.Append('\n');
+        }
+        Line(head);
+        foreach (var c in cells) Line(c);
+        return sb.ToString().Replace(" \n", "\n");
+    }
+
+    public static string Csv(SweepPlan plan, IReadOnlyList<SweepRow> rows)
+    {
+        var sb = new StringBuilder();
+        var head = new List<string> { "variant" };
+        head.AddRange(plan.Axes.Select(a => a.Key));
+        head.AddRange(SweepMetrics.All);
+        head.Add("status");
+        head.Add("reason");
+        CsvRow(sb, head);
+        foreach (var r in rows)
+        {
+            var c = new List<string> { (r.Index + 1).ToString(Inv) };
+            c.AddRange(plan.Axes.Select((a, k) => r.Values[k].ToString("R", Inv)));
+            c.AddRange(SweepMetrics.All.Select(k => r.Outcome.Metrics.TryGetValue(k, out double v) && double.IsFinite(v) ? v.ToString("R", Inv) : ""));
+            c.Add(r.Outcome.Status);
+            c.Add(r.Outcome.Reason);
+            CsvRow(sb, c);
+        }
+        return sb.ToString();
+    }
+
+    private static void CsvRow(StringBuilder sb, IReadOnlyList<string> fields)
+    {
+        for (int i = 0; i < fields.Count; i++)
+        {
+            if (i > 0) sb.Append(',');
+            string f = fields[i];
+            if (f.IndexOfAny([',', '"', '\r', '\n']) >= 0) sb.Append('"').Append(f.Replace("\"", "\"\"")).Append('"');
+            else sb.Append(f);
+        }
+        sb.Append("\r\n");
+    }
+
+    public static string Json(string designName, SweepPlan plan, IReadOnlyList<SweepRow> rows, SweepTarget? target)
+    {
+        using var ms = new MemoryStream();
+        using (var w = new Utf8JsonWriter(ms, new JsonWriterOptions { Indented = true }))
+        {
+            w.WriteStartObject();
+            w.WriteString("format", "partforge-sweep/1");
+            w.WriteString("design", designName);
+            w.WriteStartArray("vary");
+            foreach (var a in plan.Axes)
+            {
+                w.WriteStartObject();
+                w.WriteString("key", a.Key);
+                w.WriteNumber("from", a.From);
+                w.WriteNumber("to", a.To);
+                w.WriteNumber("step", a.Step);
+                w.WriteNumber("count", a.Count);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            if (target != null)
+            {
+                w.WriteStartObject("target");
+                w.WriteString("key", target.Key);
+                w.WriteNumber("value", target.Value);
+                w.WriteEndObject();
+            }
+            w.WriteStartObject("summary");
+            w.WriteNumber("variants", rows.Count);
+            foreach (var s in new[] { "pass", "warn", "fail", "invalid" }) w.WriteNumber(s, rows.Count(r => r.Outcome.Status == s));
+            w.WriteEndObject();
+            w.WriteStartArray("variants");
+            foreach (var r in rows)
+            {
+                w.WriteStartObject();
+                w.WriteNumber("variant", r.Index + 1);
+                w.WriteStartObject("values");
+                for (int k = 0; k < plan.Axes.Count; k++) w.WriteNumber(plan.Axes[k].Key, r.Values[k]);
+                w.WriteEndObject();
+                w.WriteString("status", r.Outcome.Status);
+                if (r.Outcome.Reason.Length > 0) w.WriteString("reason", r.Outcome.Reason);
+                w.WriteStartObject("results");
+                foreach (var k in SweepMetrics.All)
+                    if (r.Outcome.Metrics.TryGetValue(k, out double v) && double.IsFinite(v)) w.WriteNumber(k, v);
+                w.WriteEndObject();
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
+        return Encoding.UTF8.GetString(ms.ToArray()) + "\n";
+    }
+}
