@@ -1,0 +1,106 @@
+using PartForge.Design.Stack;
+
+namespace PartForge.Electrical.Field;
+
+/// <summary>
+/// The magnets of the machine as field sources, in the rotor frame at rotor angle 0: magnet k of every rotor
+/// is centred at k x 360/poles degrees and magnetised along +z for even k, -z for odd k. In a dual-rotor
+/// machine the back rotor's magnet k therefore shows the opposite pole to the front rotor's magnet k across
+/// the stator, so their fields in the copper add.
+///
+/// Back iron (`rotor.back_iron`) is modelled by the image method — an APPROXIMATION: ideal unsaturated iron of
+/// infinite permeability and infinite extent in its plane. Each magnet is mirrored in the iron face with the
+/// same magnetisation. In a dual-rotor machine with iron on both rotors only first-order images are used
+/// (each magnet mirrored once in each iron face), not the infinite series of images of images.
+/// Dual-stator machines carry no back iron (the rotor is between the stators); a back iron there is ignored.
+///
+/// Axial positions come from <see cref="AxialStack"/> (magnet slabs, back-iron slabs, copper slab), so the
+/// field and the geometry can never disagree.
+/// </summary>
+public sealed class RotorField
+{
+    /// <summary>Every source (magnets and images).</summary>
+    public IReadOnlyList<MagnetSource> Sources { get; }
+
+    /// <summary>
+    /// When the machine is mirror-symmetric about z = 0 (dual-rotor), the sources on the z &gt; 0 side: the
+    /// field of the whole machine at (x, y, z) is then Half(x, y, z) + Half(x, y, -z).
+    /// Null when there is no such symmetry.
+    /// </summary>
+    public IReadOnlyList<MagnetSource>? HalfSources { get; }
+
+    /// <summary>Axial range of the copper the flux is integrated over (the front stator's in dual-stator), mm.</summary>
+    public double CopperZMinMm { get; }
+    public double CopperZMaxMm { get; }
+
+    /// <summary>True when back-iron images are part of the sources.</summary>
+    public bool HasBackIron { get; }
+
+    public int Poles { get; }
+
+    /// <summary>Default distance factor beyond which magnets are replaced by dipoles (see MagnetSource).</summary>
+    public const double DefaultFarFactor = 4.0;
+
+    private RotorField(IReadOnlyList<MagnetSource> sources, IReadOnlyList<MagnetSource>? half, double c0, double c1, bool iron, int poles)
+    {
+        Sources = sources;
+        HalfSources = half;
+        CopperZMinMm = c0;
+        CopperZMaxMm = c1;
+        HasBackIron = iron;
+        Poles = poles;
+    }
+
+    /// <summary>Bz of all sources, tesla, at (x, y, z) in the rotor frame, mm.</summary>
+    public double Bz(double x, double y, double z)
+    {
+        double s = 0;
+        var src = Sources;
+        for (int i = 0; i < src.Count; i++) s += src[i].Bz(x, y, z);
+        return s;
+    }
+
+    /// <summary>Builds the sources for a design.</summary>
+    public static RotorField FromDesign(PartForge.Design.Model.Design d, MagnetGeometry g, double brTesla, AxialStack stack,
+        List<Diagnostic> diagnostics, double farFactor = DefaultFarFactor)
+    {
+        int poles = d.Machine.Poles;
+        string layout = d.Machine.Layout;
+        var magnets = stack.Slabs.Where(s => s.Kind == SlabKind.Magnet).ToList();
+        var irons = stack.Slabs.Where(s => s.Kind == SlabKind.BackIron).ToList();
+        var copper = stack.Slabs.Where(s => s.Kind == SlabKind.Copper).OrderByDescending(s => s.ZMax).First();
+        bool iron = d.Rotor.BackIron is not null && layout != "dual-stator" && irons.Count > 0;
+        if (d.Rotor.BackIron is not null && layout == "dual-stator")
+            diagnostics.Add(new Diagnostic("back-iron-ignored", DiagnosticSeverity.Warning, "rotor.back_iron",
+                "rotor.back_iron is ignored in a dual-stator layout (the rotor sits between the two stators); remove it."));
+
+        List<MagnetSource> Ring(double z0, double z1) =>
+            Enumerable.Range(0, poles).Select(k => new MagnetSource(g, k * 360.0 / poles, z0, z1, (k % 2 == 0 ? 1 : -1) * brTesla, farFactor)).ToList();
+
+        var rings = magnets.Select(m => (m, ring: Ring(m.ZMin, m.ZMax))).ToList();
+        var all = new List<MagnetSource>();
+        foreach (var r in rings) all.AddRange(r.ring);
+        var images = new List<(double zPlane, MagnetSource img)>();
+        if (iron)
+        {
+            foreach (var ib in irons)
+            {
+                // The iron face towards the magnets: the face nearer z = 0.
+                double plane = ib.ZMin > 0 ? ib.ZMin : ib.ZMax;
+                foreach (var r in rings)
+                    foreach (var m in r.ring) images.Add((plane, m.ImageIn(plane, farFactor)));
+            }
+            all.AddRange(images.Select(i => i.img));
+        }
+
+        IReadOnlyList<MagnetSource>? half = null;
+        if (layout == "dual-rotor" && Math.Abs(copper.ZMin + copper.ZMax) < 1e-9)
+        {
+            var h = new List<MagnetSource>();
+            foreach (var r in rings) if (r.m.ZMin > 0) h.AddRange(r.ring);
+            foreach (var i in images) if (i.zPlane > 0) h.Add(i.img);
+            half = h;
+        }
+        return new RotorField(all, half, copper.ZMin, copper.ZMax, iron, poles);
+    }
+}
