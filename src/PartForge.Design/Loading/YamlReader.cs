@@ -26,9 +26,10 @@ internal static class YamlReader
             return null;
         }
         var stream = new YamlStream();
+        var guarded = new GuardedParser(new Parser(new StringReader(text)));
         try
         {
-            stream.Load(new GuardedParser(new Parser(new StringReader(text))));
+            stream.Load(guarded);
         }
         catch (LimitExceeded ex)
         {
@@ -37,10 +38,23 @@ internal static class YamlReader
         }
         catch (YamlException ex)
         {
+            bool dup = ex.Message.Contains("Duplicate key", StringComparison.Ordinal);
             errors.Add(new DesignError
             {
                 File = file, Line = (int)Math.Max(1, ex.Start.Line), Column = (int)Math.Max(1, ex.Start.Column),
-                Message = "YAML syntax error: " + OneLine(ex.Message), Kind = "syntax",
+                Message = dup ? "this key is given twice in the same section; keep one" : "YAML syntax error: " + OneLine(ex.Message),
+                Kind = dup ? "duplicate" : "syntax",
+            });
+            return null;
+        }
+        catch (Exception ex) when (ex is InvalidOperationException or ArgumentException or IndexOutOfRangeException or FormatException or OverflowException)
+        {
+            // The YAML scanner occasionally fails with a non-YAML exception on malformed input; report it as
+            // a syntax error at the last position it reached.
+            errors.Add(new DesignError
+            {
+                File = file, Line = Math.Max(1, guarded.LastLine), Column = Math.Max(1, guarded.LastColumn),
+                Message = "YAML syntax error after this point (the text cannot be read as YAML)", Kind = "syntax",
             });
             return null;
         }
@@ -129,10 +143,15 @@ internal static class YamlReader
 
         public ParsingEvent? Current => inner.Current;
 
+        public int LastLine { get; private set; }
+        public int LastColumn { get; private set; }
+
         public bool MoveNext()
         {
             if (!inner.MoveNext()) return false;
             var e = inner.Current!;
+            LastLine = (int)e.End.Line;
+            LastColumn = (int)e.End.Column;
             switch (e)
             {
                 case MappingStart or SequenceStart:

@@ -33,7 +33,7 @@ public static class DesignTemplate
             if (k.Kind == ValueKind.Section)
             {
                 var child = entry?.Value as YMapping;
-                bool off = commented || (child == null && k.IsOptional);
+                bool off = commented || child == null; // a section the preset leaves out is written commented, header included
                 sb.Append(Prefix(indent, off)).Append(k.Key).Append(':').Append(doc).Append('\n');
                 Section(sb, k.Section!, child, indent + "  ", off);
                 continue;
