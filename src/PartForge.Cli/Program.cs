@@ -1,4 +1,4 @@
-using System.CommandLine;
+using PartForge.Cli.Hosting;
 
 namespace PartForge.Cli;
 
@@ -6,7 +6,16 @@ public static class Program
 {
     public static int Main(string[] args)
     {
-        var root = new RootCommand("PartForge: from an electrical design of a small axial-flux machine to parts that fit.");
-        return root.Parse(args).Invoke();
+        try
+        {
+            return CliApp.Run(args);
+        }
+        catch (Exception ex)
+        {
+            // Only reached if the command-line library itself fails; every action has its own handler.
+            Console.Error.WriteLine($"partforge: internal error ({ex.GetType().Name}): {ex.Message.ReplaceLineEndings(" ")}");
+            if (args.Contains("--verbose") || args.Contains("-v")) Console.Error.WriteLine(ex);
+            return ExitCodes.Internal;
+        }
     }
 }
