@@ -37,7 +37,8 @@ svg text { font-family:"DejaVu Sans", sans-serif; }
 .ext-line { stroke-width:0.15; }
 .dim-arrow, .dim-dot { fill:var(--dim); }
 .dim-text { fill:var(--dim); }
-.gap-line { stroke:var(--gap); stroke-width:0.25; } .gap-arrow { fill:var(--gap); } .gap-text { fill:var(--gap); font-weight:bold; }
+.gap-line { stroke:var(--gap); stroke-width:0.25; } .gap-arrow { fill:var(--gap); }
+.gap-text, .dim-text { paint-order:stroke; stroke:#fffdf8; stroke-width:0.5; stroke-linejoin:round; } .gap-text { fill:var(--gap); font-weight:bold; }
 .caption { fill:var(--soft); }
 .pole-badge-n { fill:#2c3e50; stroke:#fff; stroke-width:0.2; } .pole-badge-s { fill:#fff; stroke:#2c3e50; stroke-width:0.3; }
 .pole-text-n { fill:#fff; font-weight:bold; } .pole-text-s { fill:#2c3e50; font-weight:bold; }

@@ -1,3 +1,4 @@
+using PartForge.Geometry.Meshes;
 using PartForge.Geometry.Primitives;
 
 namespace PartForge.Formats.Png;
@@ -8,6 +9,9 @@ namespace PartForge.Formats.Png;
 /// </summary>
 public sealed record RenderItem(IReadOnlyList<Vec3> Positions, IReadOnlyList<int> Triangles, Rgb Colour)
 {
+    /// <summary>A kernel mesh in one colour.</summary>
+    public static RenderItem FromMesh(Mesh mesh, Rgb colour) => new(mesh.Vertices, mesh.Indices, colour);
+
     /// <summary>This item moved by an offset (the assembly places parts along the axis this way).</summary>
     public RenderItem Translated(Vec3 offset) =>
         this with { Positions = Positions.Select(p => p + offset).ToArray() };

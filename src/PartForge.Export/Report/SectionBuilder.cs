@@ -1,0 +1,131 @@
+using System.Globalization;
+using PartForge.Design.Stack;
+using PartForge.Export.Drawings;
+using PartForge.Geometry.Primitives;
+
+namespace PartForge.Export.Report;
+
+/// <summary>
+/// The bodies and dimensions of the axial half-section through a magnet and a coil, from the nominal axial
+/// stack (the same rule the part builders and the checker use) and the radial sizes of the design.
+/// </summary>
+public static class SectionBuilder
+{
+    public static (IReadOnlyList<SectionBody> Bodies, IReadOnlyList<LinearDimension> Dimensions) Build(
+        Design.Model.Design d, AxialStack stack, CoilSection coil, IReadOnlyDictionary<string, double> runningGapByPart)
+    {
+        var (magIn, magOut) = MagnetRadialExtent(d);
+        double rotIn = d.Rotor.Bore / 2, rotOut = d.Rotor.OuterDiameter / 2;
+        double statIn = d.Stator.InnerDiameter / 2, statOut = d.Stator.OuterDiameter / 2;
+        var bodies = new List<SectionBody>();
+        foreach (var s in stack.Slabs)
+        {
+            switch (s.Kind)
+            {
+                case SlabKind.Rotor:
+                {
+                    // The rotor disc is cut where the pocket is (the magnet is drawn in it); a blind pocket
+                    // keeps a floor on the side away from the stator.
+                    bodies.Add(new SectionBody("rotor", s.Owner, rotIn, Math.Max(rotIn, magIn), s.ZMin, s.ZMax, s.Owner));
+                    bodies.Add(new SectionBody("rotor", s.Owner, Math.Min(rotOut, magOut), rotOut, s.ZMin, s.ZMax, s.Owner));
+                    double floor = s.Thickness - stack.PocketDepthMm;
+                    if (floor > 1e-9 && d.Machine.Layout != "dual-stator")
+                    {
+                        bool backIsUp = Math.Abs(s.ZMax) > Math.Abs(s.ZMin);
+                        double fz0 = backIsUp ? s.ZMax - floor : s.ZMin;
+                        bodies.Add(new SectionBody("rotor", s.Owner, magIn, magOut, fz0, fz0 + floor, s.Owner + " pocket floor"));
+                    }
+                    break;
+                }
+                case SlabKind.Magnet:
+                    bodies.Add(new SectionBody("magnet", s.Owner, magIn, magOut, s.ZMin, s.ZMax, "magnet"));
+                    break;
+                case SlabKind.BackIron:
+                    bodies.Add(new SectionBody("back-iron", s.Owner, rotIn, rotOut, s.ZMin, s.ZMax, "back iron"));
+                    break;
+                case SlabKind.Stator:
+                    bodies.Add(new SectionBody("stator", s.Owner, statIn, Math.Max(statIn, coil.FormerRMin), s.ZMin, s.ZMax, s.Owner));
+                    bodies.Add(new SectionBody("stator", s.Owner, Math.Min(statOut, coil.FormerRMax), statOut, s.ZMin, s.ZMax, s.Owner));
+                    break;
+                case SlabKind.Former:
+                    double flange = d.Former.Flange;
+                    bodies.Add(new SectionBody("former", s.Owner, coil.FormerRMin, coil.FormerRMax, s.ZMin, s.ZMin + flange, "former flange"));
+                    bodies.Add(new SectionBody("former", s.Owner, coil.FormerRMin, coil.FormerRMax, s.ZMax - flange, s.ZMax, "former flange"));
+                    bodies.Add(new SectionBody("former", s.Owner, coil.WindowRMin, coil.WindowRMax, s.ZMin + flange, s.ZMax - flange, "former core"));
+                    break;
+                case SlabKind.Copper:
+                    bodies.Add(new SectionBody("copper", s.Owner, coil.CopperRMin, coil.WindowRMin, s.ZMin, s.ZMax, "winding"));
+                    bodies.Add(new SectionBody("copper", s.Owner, coil.WindowRMax, coil.CopperRMax, s.ZMin, s.ZMax, "winding"));
+                    break;
+            }
+        }
+
+        var dims = new List<LinearDimension>();
+        double right = Math.Max(rotOut, statOut);
+        double step = Math.Max(3, right * 0.08);
+        // Stack-up: the thickness of every slab, on two lanes to the right of the section (slabs on one lane
+        // never overlap in z, so their dimensions do not collide).
+        foreach (var s in stack.Slabs.Where(s => s.Kind is SlabKind.Stator or SlabKind.Rotor or SlabKind.Magnet or SlabKind.BackIron or SlabKind.Former))
+        {
+            string id = s.Kind switch
+            {
+                SlabKind.Stator => "stator_thickness", SlabKind.Rotor => "rotor_thickness", SlabKind.Magnet => "magnet_thickness",
+                SlabKind.BackIron => "back_iron_thickness", _ => "former_height",
+            };
+            double x = s.Kind switch
+            {
+                SlabKind.Magnet => magOut, SlabKind.Former => coil.FormerRMax, SlabKind.Stator => statOut, _ => rotOut,
+            };
+            int laneNo = s.Kind is SlabKind.Magnet or SlabKind.Former ? 2 : 1;
+            // Offset is measured to the left of From -> To; From is the top, so a negative offset goes right.
+            double off = -((right - x) + step * laneNo);
+            dims.Add(new LinearDimension(id + ":" + s.Owner, new Vec2(x, s.ZMax), new Vec2(x, s.ZMin), off, s.Thickness,
+                $"{id.Replace('_', ' ')} {F(s.Thickness)}"));
+        }
+
+        // Running gaps: from each stationary face to the nearest rotating surface, drawn at the magnet's mid
+        // radius. The drawn length is the nominal gap; data-value is the checker's worst case when it has one.
+        double rGap = (magIn + magOut) / 2;
+        foreach (var (owner, statFace, rotFace) in GapFaces(stack))
+        {
+            double nominal = Math.Abs(rotFace - statFace);
+            bool has = runningGapByPart.TryGetValue(owner, out double worst);
+            string text = has ? $"running gap {F(nominal)} nominal, {F(worst)} worst case ({owner})" : $"running gap {F(nominal)} nominal ({owner})";
+            var from = new Vec2(rGap, Math.Min(statFace, rotFace));
+            var to = new Vec2(rGap, Math.Max(statFace, rotFace));
+            dims.Add(new LinearDimension("running_gap:" + owner, from, to, 0, has ? worst : nominal, text, "gap"));
+        }
+        return (bodies, dims);
+    }
+
+    /// <summary>(rotating owner, stationary face z, nearest rotating surface z) for each running gap.</summary>
+    public static IEnumerable<(string Owner, double StationaryZ, double RotatingZ)> GapFaces(AxialStack stack)
+    {
+        var stationary = stack.Slabs.Where(s => s.Kind is SlabKind.Stator or SlabKind.Former).ToList();
+        var rotating = stack.Slabs.Where(s => s.Kind is SlabKind.Rotor or SlabKind.Magnet).GroupBy(s => s.Owner, StringComparer.Ordinal);
+        foreach (var g in rotating.OrderBy(g => g.Key, StringComparer.Ordinal))
+        {
+            double rMin = g.Min(s => s.ZMin), rMax = g.Max(s => s.ZMax);
+            // Nearest stationary face above or below this rotating body.
+            var above = stationary.Where(s => s.ZMin >= rMax - 1e-9).Select(s => s.ZMin).DefaultIfEmpty(double.NaN).Min();
+            var below = stationary.Where(s => s.ZMax <= rMin + 1e-9).Select(s => s.ZMax).DefaultIfEmpty(double.NaN).Max();
+            if (double.IsFinite(above)) yield return (g.Key, above, rMax);
+            if (double.IsFinite(below)) yield return (g.Key, below, rMin);
+        }
+    }
+
+    /// <summary>Radial extent of a magnet (and its pocket without clearance), mm from the axis.</summary>
+    public static (double RMin, double RMax) MagnetRadialExtent(Design.Model.Design d)
+    {
+        var m = d.Magnets;
+        double pitch = m.PitchRadius ?? 0;
+        return m.Shape switch
+        {
+            "disc" => (pitch - (m.Diameter ?? 0) / 2, pitch + (m.Diameter ?? 0) / 2),
+            "block" => (pitch - (m.Length ?? 0) / 2, pitch + (m.Length ?? 0) / 2),
+            _ => (m.InnerRadius ?? 0, m.OuterRadius ?? 0),
+        };
+    }
+
+    internal static string F(double v) => v.ToString("0.###", CultureInfo.InvariantCulture);
+}
