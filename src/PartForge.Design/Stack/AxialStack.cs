@@ -78,8 +78,8 @@ public sealed record AxialStack
             double proud = tm - depth;
             double half = s / 2;
             double nearest = half + gap;                  // nearest rotating surface
-            double rotFace = nearest - Math.Max(0, proud); // rotor's stator-side face
-            double magFace = rotFace + proud;             // magnet's stator-side face
+            double rotFace = nearest + Math.Max(0, proud); // rotor's stator-side face (set back by a proud magnet)
+            double magFace = rotFace - proud;             // magnet's stator-side face (nearer the stator when proud, set back when recessed)
             double magBack = magFace + tm;
             slabs.Add(new AxialSlab(SlabKind.Stator, "stator", -d.Stator.Thickness / 2, d.Stator.Thickness / 2));
             slabs.Add(new AxialSlab(SlabKind.Former, "stator", -formerH / 2, formerH / 2));
