@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text;
 using PartForge.Formats.Cutting;
+using PartForge.Formats.Io;
 using PartForge.Geometry.Primitives;
 using PartForge.Geometry.Profiles;
 
@@ -28,6 +29,14 @@ public static class DxfWriter
 
     /// <summary>Compensates the sheet for its kerf (<see cref="KerfCompensation.Apply"/>) and writes it.</summary>
     public static void Write(Stream stream, CutSheet sheet) => Write(stream, KerfCompensation.Apply(sheet));
+
+    /// <summary>Compensates and writes the sheet to a file atomically (temporary file, then rename); on an
+    /// error nothing is left under <paramref name="path"/>'s name.</summary>
+    public static void WriteFile(string path, CutSheet sheet)
+    {
+        var plan = KerfCompensation.Apply(sheet);
+        AtomicFile.Write(path, s => Write(s, plan));
+    }
 
     /// <summary>Writes an already compensated plan.</summary>
     public static void Write(Stream stream, CutPlan plan)

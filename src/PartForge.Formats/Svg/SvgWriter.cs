@@ -1,5 +1,6 @@
 using System.Text;
 using PartForge.Formats.Cutting;
+using PartForge.Formats.Io;
 using PartForge.Geometry.Primitives;
 using PartForge.Geometry.Profiles;
 
@@ -30,6 +31,13 @@ public static class SvgWriter
 
     /// <summary>Compensates the sheet for its kerf (<see cref="KerfCompensation.Apply"/>) and writes it.</summary>
     public static void Write(Stream stream, CutSheet sheet) => Write(stream, KerfCompensation.Apply(sheet));
+
+    /// <summary>Compensates and writes the sheet to a file atomically (temporary file, then rename).</summary>
+    public static void WriteFile(string path, CutSheet sheet)
+    {
+        var plan = KerfCompensation.Apply(sheet);
+        AtomicFile.Write(path, s => Write(s, plan));
+    }
 
     /// <summary>Writes an already compensated plan.</summary>
     public static void Write(Stream stream, CutPlan plan)

@@ -205,6 +205,19 @@ print(json.dumps(out))
     }
 
     [Fact]
+    public void FileIsWrittenAtomically()
+    {
+        string path = ExternalReader.TempFile(".dxf");
+        DxfWriter.WriteFile(path, SamplePlate.Sheet());
+        Assert.Equal(Write(SamplePlate.Sheet()), File.ReadAllBytes(path));
+        var bad = CutSheet.Of("p", Profile.Of(Contour.Rectangle(new Vec2(0, 0), 10, 10, 0), Contour.FullCircle(new Vec2(0, 0), 0.05)), 0.15);
+        Assert.Throws<KerfCompensationException>(() => DxfWriter.WriteFile(path, bad));
+        Assert.Equal(Write(SamplePlate.Sheet()), File.ReadAllBytes(path)); // the previous file is untouched
+        Assert.Empty(Directory.GetFiles(Path.GetDirectoryName(path)!, "*.partial"));
+        File.Delete(path);
+    }
+
+    [Fact]
     public void TooSmallHoleIsReportedNotWritten()
     {
         using var ms = new MemoryStream();

@@ -1,0 +1,239 @@
+using System.Globalization;
+using System.IO.Compression;
+using System.Text;
+using PartForge.Formats.Cutting;
+using PartForge.Formats.Io;
+using PartForge.Geometry.Meshes;
+using PartForge.Geometry.Primitives;
+
+namespace PartForge.Formats.ThreeMf;
+
+/// <summary>
+/// Writes a 3MF package following the 3MF Core Specification: an OPC (Open Packaging Conventions) ZIP with
+/// <c>[Content_Types].xml</c>, <c>_rels/.rels</c> (one relationship of the 3D model type to
+/// <c>/3D/3dmodel.model</c>) and the model part: unit millimetre, a Title metadata, one
+/// <c>&lt;object type="model"&gt;</c> per <see cref="ThreeMfObject"/> with its name and its mesh (shared
+/// vertices, triangles as vertex indices), and one build item per placement.
+/// </summary>
+/// <remarks>
+/// Deterministic: fixed entry order and ZIP timestamps (1980-01-01), one compression level, invariant
+/// numbers in shortest round-trip form without exponents, LF line ends, UTF-8 without byte-order mark; the many vertex and triangle lines carry no indentation.
+/// Each mesh is checked on the way (finite coordinates, no repeated vertex in a triangle, no zero-area
+/// triangle, positive enclosed volume) and each placement must keep orientation (positive determinant);
+/// a violation is an <see cref="ArgumentException"/> naming the object, and nothing is written.
+/// </remarks>
+public static class ThreeMfWriter
+{
+    public const string ModelNamespace = "http://schemas.microsoft.com/3dmanufacturing/core/2015/02";
+    public const string ModelContentType = "application/vnd.ms-package.3dmanufacturing-3dmodel+xml";
+    public const string RelationshipsContentType = "application/vnd.openxmlformats-package.relationships+xml";
+    public const string ModelRelationshipType = "http://schemas.microsoft.com/3dmanufacturing/2013/01/3dmodel";
+    public const string ContentTypesNamespace = "http://schemas.openxmlformats.org/package/2006/content-types";
+    public const string RelationshipsNamespace = "http://schemas.openxmlformats.org/package/2006/relationships";
+
+    /// <summary>ZIP entry names, in the order they are written.</summary>
+    public const string ContentTypesEntry = "[Content_Types].xml", RelationshipsEntry = "_rels/.rels", ModelEntry = "3D/3dmodel.model";
+
+    /// <summary>Deflate level of every entry (fixed, so the bytes are reproducible).</summary>
+    public const CompressionLevel Compression = CompressionLevel.Fastest;
+
+    /// <summary>Writes the package. <paramref name="title"/> becomes the Title metadata.</summary>
+    public static void Write(Stream stream, string title, IReadOnlyList<ThreeMfObject> objects)
+    {
+        ArgumentNullException.ThrowIfNull(stream);
+        WritePackage(stream, ModelXml(title, objects));
+    }
+
+    private static void WritePackage(Stream stream, byte[] model)
+    {
+        DeterministicZip.Write(stream, new[]
+        {
+            (ContentTypesEntry, (ReadOnlyMemory<byte>)ContentTypesXml()),
+            (RelationshipsEntry, RelationshipsXml()),
+            (ModelEntry, model),
+        }, Compression);
+    }
+
+    /// <summary>Writes the package to a file atomically (temporary file, then rename). The model is built
+    /// and checked before the file is touched.</summary>
+    public static void WriteFile(string path, string title, IReadOnlyList<ThreeMfObject> objects)
+    {
+        byte[] model = ModelXml(title, objects);
+        AtomicFile.Write(path, s => WritePackage(s, model));
+    }
+
+    /// <summary>The <c>[Content_Types].xml</c> part.</summary>
+    public static byte[] ContentTypesXml() => Utf8(
+        "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n" +
+        $"<Types xmlns=\"{ContentTypesNamespace}\">\n" +
+        $"  <Default Extension=\"rels\" ContentType=\"{RelationshipsContentType}\"/>\n" +
+        $"  <Default Extension=\"model\" ContentType=\"{ModelContentType}\"/>\n" +
+        "</Types>\n");
+
+    /// <summary>The <c>_rels/.rels</c> part: the package's start part is the 3D model.</summary>
+    public static byte[] RelationshipsXml() => Utf8(
+        "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n" +
+        $"<Relationships xmlns=\"{RelationshipsNamespace}\">\n" +
+        $"  <Relationship Target=\"/{ModelEntry}\" Id=\"rel0\" Type=\"{ModelRelationshipType}\"/>\n" +
+        "</Relationships>\n");
+
+    /// <summary>The model part <c>3D/3dmodel.model</c>.</summary>
+    public static byte[] ModelXml(string title, IReadOnlyList<ThreeMfObject> objects)
+    {
+        ArgumentNullException.ThrowIfNull(title);
+        ArgumentNullException.ThrowIfNull(objects);
+        if (objects.Count == 0) throw new ArgumentException("a 3MF model needs at least one object", nameof(objects));
+        for (int i = 0; i < objects.Count; i++)
+        {
+            var o = objects[i] ?? throw new ArgumentException($"object {i} is missing", nameof(objects));
+            if (o.Name is null || o.Mesh is null || o.Placements is null) throw new ArgumentException($"object {i} has no name, mesh or placement list", nameof(objects));
+            foreach (var t in o.Placements)
+            {
+                if (t.Values().Any(v => !double.IsFinite(v))) throw new ArgumentException($"object '{o.Name}': a placement has a value that is not finite", nameof(objects));
+                if (!(t.Determinant > 1e-12)) throw new ArgumentException($"object '{o.Name}': a placement is singular or mirrors (determinant {t.Determinant.ToString("R", CultureInfo.InvariantCulture)}); mirror the mesh instead", nameof(objects));
+            }
+        }
+
+        long estimate = objects.Sum(o => (long)o.Mesh.VertexCount * 48 + (long)o.Mesh.TriangleCount * 40) + 1024;
+        var w = new AsciiBuffer((int)Math.Min(estimate, 1 << 30));
+        w.Append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n"u8);
+        w.Append("<model unit=\"millimeter\" xml:lang=\"en-US\" xmlns=\""u8);
+        w.AppendText(ModelNamespace);
+        w.Append("\">\n  <metadata name=\"Title\">"u8);
+        w.AppendText(Escape(title));
+        w.Append("</metadata>\n  <metadata name=\"Application\">PartForge</metadata>\n  <resources>\n"u8);
+        for (int i = 0; i < objects.Count; i++) WriteObject(w, i + 1, objects[i]);
+        w.Append("  </resources>\n  <build>\n"u8);
+        for (int i = 0; i < objects.Count; i++)
+        {
+            var placements = objects[i].Placements;
+            if (placements.Count == 0)
+            {
+                w.Append("    <item objectid=\""u8);
+                w.Append(i + 1);
+                w.Append("\"/>\n"u8);
+                continue;
+            }
+            foreach (var t in placements)
+            {
+                w.Append("    <item objectid=\""u8);
+                w.Append(i + 1);
+                w.Append("\""u8);
+                if (!t.IsIdentity)
+                {
+                    w.Append(" transform=\""u8);
+                    bool first = true;
+                    foreach (double v in t.Values())
+                    {
+                        if (!first) w.Append(" "u8);
+                        first = false;
+                        w.Append(v);
+                    }
+                    w.Append("\""u8);
+                }
+                w.Append("/>\n"u8);
+            }
+        }
+        w.Append("  </build>\n</model>\n"u8);
+        return w.ToArray();
+    }
+
+    private static void WriteObject(AsciiBuffer w, int id, ThreeMfObject o)
+    {
+        var mesh = o.Mesh;
+        var verts = mesh.Vertices;
+        var idx = mesh.Indices;
+        if (mesh.TriangleCount == 0) throw new ArgumentException($"object '{o.Name}': the mesh has no triangles");
+
+        // Shared vertices: each distinct position once, numbered in order of first use by a triangle.
+        var remap = new int[verts.Count];
+        Array.Fill(remap, -1);
+        var byPosition = new Dictionary<Vec3, int>(verts.Count);
+        var order = new List<Vec3>(verts.Count);
+        var tris = new int[idx.Count];
+        double volume6 = 0;
+        Vec3 origin = verts[idx[0]];
+        for (int k = 0; k < idx.Count; k++)
+        {
+            int old = idx[k];
+            int n = remap[old];
+            if (n < 0)
+            {
+                var p = verts[old];
+                if (!double.IsFinite(p.X) || !double.IsFinite(p.Y) || !double.IsFinite(p.Z))
+                    throw new ArgumentException($"object '{o.Name}': vertex {old} is not finite");
+                if (!byPosition.TryGetValue(p, out n))
+                {
+                    n = order.Count;
+                    byPosition.Add(p, n);
+                    order.Add(p);
+                }
+                remap[old] = n;
+            }
+            tris[k] = n;
+        }
+        for (int t = 0; t < tris.Length; t += 3)
+        {
+            int a = tris[t], b = tris[t + 1], c = tris[t + 2];
+            if (a == b || b == c || a == c)
+                throw new ArgumentException($"object '{o.Name}': triangle {t / 3} uses one vertex twice");
+            Vec3 pa = order[a] - origin, pb = order[b] - origin, pc = order[c] - origin;
+            var cross = (order[b] - order[a]).Cross(order[c] - order[a]);
+            if (cross.X == 0 && cross.Y == 0 && cross.Z == 0)
+                throw new ArgumentException($"object '{o.Name}': triangle {t / 3} has zero area");
+            volume6 += pa.Dot(pb.Cross(pc));
+        }
+        if (!(volume6 > 0))
+            throw new ArgumentException($"object '{o.Name}': the mesh encloses no positive volume (open, or triangles facing inward)");
+
+        w.Append("    <object id=\""u8);
+        w.Append(id);
+        w.Append("\" type=\"model\" name=\""u8);
+        w.AppendText(Escape(o.Name));
+        w.Append("\">\n      <mesh>\n        <vertices>\n"u8);
+        foreach (var p in order)
+        {
+            w.Append("<vertex x=\""u8);
+            w.Append(p.X);
+            w.Append("\" y=\""u8);
+            w.Append(p.Y);
+            w.Append("\" z=\""u8);
+            w.Append(p.Z);
+            w.Append("\"/>\n"u8);
+        }
+        w.Append("        </vertices>\n        <triangles>\n"u8);
+        for (int t = 0; t < tris.Length; t += 3)
+        {
+            w.Append("<triangle v1=\""u8);
+            w.Append(tris[t]);
+            w.Append("\" v2=\""u8);
+            w.Append(tris[t + 1]);
+            w.Append("\" v3=\""u8);
+            w.Append(tris[t + 2]);
+            w.Append("\"/>\n"u8);
+        }
+        w.Append("        </triangles>\n      </mesh>\n    </object>\n"u8);
+    }
+
+    private static byte[] Utf8(string s) => new UTF8Encoding(false).GetBytes(s);
+
+    private static string Escape(string s)
+    {
+        var b = new StringBuilder(s.Length + 8);
+        foreach (char ch in s)
+        {
+            switch (ch)
+            {
+                case '<': b.Append("&lt;"); break;
+                case '>': b.Append("&gt;"); break;
+                case '&': b.Append("&amp;"); break;
+                case '"': b.Append("&quot;"); break;
+                default:
+                    if ((ch < 0x20 && ch != '\t') || ch == '\uFFFE' || ch == '\uFFFF') b.Append(' ');
+                    else b.Append(ch);
+                    break;
+            }
+        }
+        return b.ToString();
+    }
+}
