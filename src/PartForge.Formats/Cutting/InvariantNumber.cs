@@ -23,6 +23,45 @@ internal static class InvariantNumber
     {
         if (!double.IsFinite(v)) throw new ArgumentOutOfRangeException(nameof(v), "not a finite number");
         if (v == 0) { dest[0] = '0'; return 1; }
+        if (TryFormatGrid(v, dest, out int fast)) return fast;
+        return FormatRoundTrip(v, dest);
+    }
+
+    /// <summary>
+    /// Fast path for values on a 1e-4 grid (the kernel's snap grid): if v is exactly the double nearest to
+    /// k / 10^4 for an integer k, the decimal k / 10^4 with trailing zeros removed has at most 15
+    /// significant digits, so it is the unique shortest text that reads back as v: the same text as the
+    /// general path, produced without the round-trip search.
+    /// </summary>
+    internal static bool TryFormatGrid(double v, Span<char> dest, out int length)
+    {
+        length = 0;
+        if (!(Math.Abs(v) < 1e11)) return false;
+        double k = Math.Round(v * 10000.0);
+        if (k == 0 || k / 10000.0 != v) return false;
+        long n = (long)k;
+        int pos = 0;
+        if (n < 0) { dest[pos++] = '-'; n = -n; }
+        Span<char> digits = stackalloc char[20];
+        int count = 0;
+        for (long x = n; x > 0; x /= 10) digits[count++] = (char)('0' + (int)(x % 10)); // least significant first
+        int trailing = 0; // zeros dropped from the end of the 4 fraction digits
+        while (trailing < 4 && (trailing >= count || digits[trailing] == '0')) trailing++;
+        if (count <= 4) dest[pos++] = '0';
+        else for (int i = count - 1; i >= 4; i--) dest[pos++] = digits[i];
+        if (trailing < 4)
+        {
+            dest[pos++] = '.';
+            for (int i = 3; i >= trailing; i--) dest[pos++] = i < count ? digits[i] : '0';
+        }
+        length = pos;
+        return true;
+    }
+
+    /// <summary>General path: the runtime's shortest round-trip text, with any exponent expanded.</summary>
+    internal static int FormatRoundTrip(double v, Span<char> dest)
+    {
+        if (v == 0) { dest[0] = '0'; return 1; }
         Span<char> r = stackalloc char[32];
         if (!v.TryFormat(r, out int len, "R", CultureInfo.InvariantCulture)) throw new InvalidOperationException("number formatting failed");
         r = r[..len];

@@ -7,6 +7,7 @@ namespace PartForge.Formats.ThreeMf;
 internal sealed class AsciiBuffer
 {
     private byte[] _buf;
+    private readonly char[] _chars = new char[InvariantNumber.MaxChars];
     private int _len;
 
     public AsciiBuffer(int capacity) => _buf = new byte[Math.Max(256, capacity)];
@@ -38,16 +39,8 @@ internal sealed class AsciiBuffer
     public void Append(double v)
     {
         Ensure(InvariantNumber.MaxChars);
-        if (v == 0) { _buf[_len++] = (byte)'0'; return; } // also -0
-        if (double.IsFinite(v) && v.TryFormat(_buf.AsSpan(_len), out int direct, "R", CultureInfo.InvariantCulture)
-            && _buf.AsSpan(_len, direct).IndexOf((byte)'E') < 0)
-        {
-            _len += direct;
-            return;
-        }
-        Span<char> chars = stackalloc char[InvariantNumber.MaxChars];
+        var chars = _chars.AsSpan();
         int n = InvariantNumber.Format(v, chars);
-        Ensure(n);
         var dest = _buf.AsSpan(_len, n);
         for (int i = 0; i < n; i++) dest[i] = (byte)chars[i];
         _len += n;

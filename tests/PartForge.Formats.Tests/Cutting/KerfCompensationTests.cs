@@ -117,6 +117,28 @@ public class KerfCompensationTests
     public void NumbersHaveNoExponent(double v, string text) => Assert.Equal(text, InvariantNumber.Format(v));
 
     [Fact]
+    public void GridFastPathGivesTheSameTextAsTheGeneralPath()
+    {
+        Span<char> a = stackalloc char[InvariantNumber.MaxChars], b = stackalloc char[InvariantNumber.MaxChars];
+        foreach (double v in new[] { 0.0001, -0.0001, 0.1, 12.3456, -999.9999, 100, 1e10, 38.9711, 0.5 })
+        {
+            Assert.True(InvariantNumber.TryFormatGrid(v, a, out int n));
+            Assert.Equal(new string(b[..InvariantNumber.FormatRoundTrip(v, b)]), new string(a[..n]));
+        }
+        Gen.Long[-100_000_000_000L, 100_000_000_000L].Select(Gen.Double[-2000, 2000]).Sample((k, x) =>
+        {
+            Span<char> p = stackalloc char[InvariantNumber.MaxChars], q = stackalloc char[InvariantNumber.MaxChars];
+            foreach (double v in new[] { k / 10000.0, x, Math.Round(x * 1e4) / 1e4 })
+            {
+                if (v == 0) continue;
+                string general = new(q[..InvariantNumber.FormatRoundTrip(v, q)]);
+                if (InvariantNumber.TryFormatGrid(v, p, out int n)) Assert.Equal(general, new string(p[..n]));
+                Assert.Equal(general, InvariantNumber.Format(v));
+            }
+        }, iter: 20000);
+    }
+
+    [Fact]
     public void NumbersRoundTrip()
     {
         Gen.Double.Where(double.IsFinite).Sample(v =>

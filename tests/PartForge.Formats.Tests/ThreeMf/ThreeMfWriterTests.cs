@@ -4,7 +4,10 @@ using System.Text.RegularExpressions;
 using System.Xml;
 using PartForge.Formats.ThreeMf;
 using PartForge.Formats.Tests.Golden;
+using PartForge.Geometry;
 using PartForge.Geometry.Meshes;
+using PartForge.Geometry.Regions;
+using PartForge.Geometry.Solids;
 using PartForge.Geometry.Primitives;
 
 namespace PartForge.Formats.Tests.ThreeMf;
@@ -210,6 +213,35 @@ public class ThreeMfWriterTests
         // Info-ZIP checks every entry's CRC.
         Assert.True(zipCode == 0, zipOut);
         Assert.Contains("No errors detected", zipOut);
+    }
+
+    [Fact]
+    public void KernelPlateMeshReadsBackWithItsCountsAndVolume()
+    {
+        // The test plate (60 x 40, a hole and a slot) extruded 3 mm by the kernel, written as 3MF, read by assimp
+        // and by System.Xml: one mesh, the kernel's vertex and triangle counts, and the volume of the solid.
+        var prec = Precision.FromChordalTolerance(0.01);
+        var solid = LayeredSolid.Extrude(Region.FromProfile(Tests.Cutting.SamplePlate.Profile(), prec), 0, 3);
+        var mesh = Mesher.Build(solid, prec);
+        byte[] package = Package(new[] { ThreeMfObject.At("plate", mesh) });
+        var model = Xml(Entries(package, out _)["3D/3dmodel.model"]);
+        Assert.Equal(mesh.VertexCount, model.GetElementsByTagName("vertex").Count);
+        Assert.Equal(mesh.TriangleCount, model.GetElementsByTagName("triangle").Count);
+        var vs = model.GetElementsByTagName("vertex").Cast<XmlElement>().Select(v => new Vec3(D(v.GetAttribute("x")), D(v.GetAttribute("y")), D(v.GetAttribute("z")))).ToList();
+        double vol = model.GetElementsByTagName("triangle").Cast<XmlElement>().Sum(t =>
+        {
+            int a = int.Parse(t.GetAttribute("v1"), CultureInfo.InvariantCulture), b = int.Parse(t.GetAttribute("v2"), CultureInfo.InvariantCulture), c = int.Parse(t.GetAttribute("v3"), CultureInfo.InvariantCulture);
+            return vs[a].Dot(vs[b].Cross(vs[c])) / 6;
+        });
+        Assert.Equal(solid.AnalyticVolume, vol, 6);
+
+        string path = ExternalReader.TempFile(".3mf");
+        File.WriteAllBytes(path, package);
+        var (code, stdout, stderr) = ExternalReader.Run("assimp", "info", path);
+        File.Delete(path);
+        Assert.True(code == 0, $"assimp info failed ({code}): {stderr}\n{stdout}");
+        Assert.Equal(1, Count(stdout, "Meshes"));
+        Assert.Equal(mesh.TriangleCount, Count(stdout, "Faces"));
     }
 
     private static int Count(string assimpInfo, string label)
