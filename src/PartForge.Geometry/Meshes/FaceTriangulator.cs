@@ -2,8 +2,8 @@ namespace PartForge.Geometry.Meshes;
 
 /// <summary>
 /// Triangulates one planar face (an outer ring with holes, grid coordinates) without adding or dropping a
-/// boundary vertex, so that the face meets its walls edge for edge. Ear clipping with a z-order hash of the
-/// vertices and holes bridged to the outer ring by the leftmost-vertex method (after the well-known
+/// boundary vertex, so that the face meets its walls edge for edge. Ear clipping (shortest new diagonal first) with a uniform grid of
+/// the reflex vertices and holes bridged to the outer ring by the leftmost-vertex method (after the well-known
 /// "earcut" scheme), in exact integer arithmetic. Collinear vertices may be skipped while clipping; each is
 /// put back afterwards by splitting the one triangle whose edge it lies on, so no T-junction remains.
 /// Strictly convex rings without holes get a balanced recursive split instead (no long slivers).
@@ -16,14 +16,13 @@ internal sealed class FaceTriangulator
         public int I;           // mesh vertex id
         public double X, Y;     // exact integers stored as double (|v| < 2^31, products < 2^62 are not needed)
         public Node Prev = null!, Next = null!;
-        public int Z;
-        public bool HasZ;
-        public Node? PrevZ, NextZ;
+        public bool Removed;
+        public int Version;
     }
 
     private readonly List<int> _out;
     private readonly List<(int Prev, int V, int Next)> _removed = new();
-    private double _minX, _minY, _invSize;
+    private bool _useGrid;
     private int _start;
 
     private FaceTriangulator(List<int> output) => _out = output;
@@ -86,15 +85,7 @@ internal sealed class FaceTriangulator
             queue.Sort((a, b) => a.X != b.X ? a.X.CompareTo(b.X) : a.Y.CompareTo(b.Y));
             foreach (var h in queue) outerNode = EliminateHole(h, outerNode);
         }
-        if (total > 80)
-        {
-            double x0 = double.PositiveInfinity, y0 = x0, x1 = double.NegativeInfinity, y1 = x1;
-            var p = outerNode;
-            do { x0 = Math.Min(x0, p.X); y0 = Math.Min(y0, p.Y); x1 = Math.Max(x1, p.X); y1 = Math.Max(y1, p.Y); p = p.Next; } while (p != outerNode);
-            _minX = x0; _minY = y0;
-            double size = Math.Max(x1 - x0, y1 - y0);
-            _invSize = size != 0 ? 32767 / size : 0;
-        }
+        _useGrid = total > 64;
         EarcutLinked(outerNode, 0);
         PutBackRemoved();
     }
@@ -123,10 +114,9 @@ internal sealed class FaceTriangulator
 
     private static void Remove(Node p)
     {
+        p.Removed = true;
         p.Next.Prev = p.Prev;
         p.Prev.Next = p.Next;
-        if (p.PrevZ is not null) p.PrevZ.NextZ = p.NextZ;
-        if (p.NextZ is not null) p.NextZ.PrevZ = p.PrevZ;
     }
 
     private static bool Equal(Node a, Node b) => a.X == b.X && a.Y == b.Y;
@@ -179,28 +169,55 @@ internal sealed class FaceTriangulator
 
     // ---- ear clipping ----
 
+    /// <summary>
+    /// Clips the ear with the shortest new diagonal first (a priority queue of candidate convex vertices),
+    /// instead of walking round the ring. Only the two neighbours of a clipped ear change, so the many reflex
+    /// vertices of holes are not re-tested after every cut, and small ears keep the hash look-ups local and
+    /// the triangles compact. When the queue runs dry the ring is scanned again; a scan without a cut falls
+    /// back to filtering collinear vertices and then to splitting along a diagonal.
+    /// </summary>
     private void EarcutLinked(Node? ear, int pass)
     {
         if (ear is null) return;
-        if (pass == 0 && _invSize != 0) IndexCurve(ear);
-        Node stop = ear;
-        while (ear.Prev != ear.Next)
+        if (_useGrid) BuildGrid(ear);
+        var work = new PriorityQueue<(Node N, int Version), double>();
+        Node live = ear;
+        bool clippedSinceScan = true;
+        void Offer(Node n)
         {
-            Node prev = ear.Prev, next = ear.Next;
-            if (_invSize != 0 ? IsEarHashed(ear) : IsEar(ear))
+            n.Version++;
+            if (Area(n.Prev, n, n.Next) < 0)
             {
-                _out.Add(prev.I); _out.Add(ear.I); _out.Add(next.I);
-                Remove(ear);
-                ear = next.Next;
-                stop = next.Next;
-                continue;
+                double dx = n.Next.X - n.Prev.X, dy = n.Next.Y - n.Prev.Y;
+                work.Enqueue((n, n.Version), dx * dx + dy * dy);
             }
-            ear = next;
-            if (ear == stop)
+        }
+        while (live.Prev != live.Next)
+        {
+            if (work.Count == 0)
             {
-                if (pass == 0) EarcutLinked(FilterPoints(ear), 1);
-                else if (!SplitEarcut(ear)) throw new InvalidOperationException("face triangulation found no ear (invalid face boundary)");
-                break;
+                if (!clippedSinceScan)
+                {
+                    if (pass == 0) EarcutLinked(FilterPoints(live), 1);
+                    else if (!SplitEarcut(live)) throw new InvalidOperationException("face triangulation found no ear (invalid face boundary)");
+                    return;
+                }
+                clippedSinceScan = false;
+                Node p = live;
+                do { Offer(p); p = p.Next; } while (p != live);
+                if (work.Count == 0) continue;
+            }
+            var (e, version) = work.Dequeue();
+            if (e.Removed || version != e.Version) continue;
+            if (_useGrid ? IsEarGrid(e) : IsEar(e))
+            {
+                Node prev = e.Prev, next = e.Next;
+                _out.Add(prev.I); _out.Add(e.I); _out.Add(next.I);
+                Remove(e);
+                clippedSinceScan = true;
+                live = next;
+                Offer(prev);
+                Offer(next);
             }
         }
     }
@@ -216,32 +233,92 @@ internal sealed class FaceTriangulator
         return true;
     }
 
-    private bool IsEarHashed(Node ear)
+    // ---- uniform grid of the reflex (and straight) vertices: the only ones that can block an ear ----
+
+    private Node[] _cellNodes = Array.Empty<Node>();
+    private int[] _cellStart = Array.Empty<int>();
+    private int _gx, _gy;
+    private double _gx0, _gy0, _cell;
+
+    private void BuildGrid(Node start)
+    {
+        var reflex = new List<Node>();
+        double x0 = double.PositiveInfinity, y0 = x0, x1 = double.NegativeInfinity, y1 = x1;
+        Node p = start;
+        do
+        {
+            x0 = Math.Min(x0, p.X); y0 = Math.Min(y0, p.Y); x1 = Math.Max(x1, p.X); y1 = Math.Max(y1, p.Y);
+            if (Area(p.Prev, p, p.Next) >= 0) reflex.Add(p);
+            p = p.Next;
+        } while (p != start);
+        double w = Math.Max(x1 - x0, 1), h = Math.Max(y1 - y0, 1);
+        // About two reflex vertices per cell on average.
+        double cells = Math.Clamp(reflex.Count / 2.0, 1, 1 << 20);
+        _cell = Math.Max(Math.Sqrt(w * h / cells), 1);
+        _gx = Math.Min((int)(w / _cell) + 1, 4096);
+        _gy = Math.Min((int)(h / _cell) + 1, 4096);
+        _cell = Math.Max(w / (_gx - 0.5), h / (_gy - 0.5));
+        _gx0 = x0; _gy0 = y0;
+        var count = new int[_gx * _gy + 1];
+        foreach (var n in reflex) count[CellOf(n.X, n.Y) + 1]++;
+        for (int i = 1; i < count.Length; i++) count[i] += count[i - 1];
+        _cellStart = (int[])count.Clone();
+        _cellNodes = new Node[reflex.Count];
+        foreach (var n in reflex) _cellNodes[count[CellOf(n.X, n.Y)]++] = n;
+    }
+
+    private int CellOf(double x, double y)
+    {
+        int cx = Math.Clamp((int)((x - _gx0) / _cell), 0, _gx - 1);
+        int cy = Math.Clamp((int)((y - _gy0) / _cell), 0, _gy - 1);
+        return cy * _gx + cx;
+    }
+
+    private bool IsEarGrid(Node ear)
     {
         Node a = ear.Prev, b = ear, c = ear.Next;
         if (Area(a, b, c) >= 0) return false;
         double x0 = Math.Min(a.X, Math.Min(b.X, c.X)), y0 = Math.Min(a.Y, Math.Min(b.Y, c.Y));
         double x1 = Math.Max(a.X, Math.Max(b.X, c.X)), y1 = Math.Max(a.Y, Math.Max(b.Y, c.Y));
-        int minZ = ZOrder(x0, y0), maxZ = ZOrder(x1, y1);
-        Node? p = ear.PrevZ, n = ear.NextZ;
-        while (p is not null && p.Z >= minZ && n is not null && n.Z <= maxZ)
+        int cx0 = Math.Clamp((int)((x0 - _gx0) / _cell), 0, _gx - 1), cx1 = Math.Clamp((int)((x1 - _gx0) / _cell), 0, _gx - 1);
+        int cy0 = Math.Clamp((int)((y0 - _gy0) / _cell), 0, _gy - 1), cy1 = Math.Clamp((int)((y1 - _gy0) / _cell), 0, _gy - 1);
+        bool cull = (cx1 - cx0 + 1) * (cy1 - cy0 + 1) > 4;
+        for (int cy = cy0; cy <= cy1; cy++)
         {
-            if (p.X >= x0 && p.X <= x1 && p.Y >= y0 && p.Y <= y1 && p != a && p != c && Blocks(a, b, c, p)) return false;
-            p = p.PrevZ;
-            if (n.X >= x0 && n.X <= x1 && n.Y >= y0 && n.Y <= y1 && n != a && n != c && Blocks(a, b, c, n)) return false;
-            n = n.NextZ;
-        }
-        while (p is not null && p.Z >= minZ)
-        {
-            if (p.X >= x0 && p.X <= x1 && p.Y >= y0 && p.Y <= y1 && p != a && p != c && Blocks(a, b, c, p)) return false;
-            p = p.PrevZ;
-        }
-        while (n is not null && n.Z <= maxZ)
-        {
-            if (n.X >= x0 && n.X <= x1 && n.Y >= y0 && n.Y <= y1 && n != a && n != c && Blocks(a, b, c, n)) return false;
-            n = n.NextZ;
+            for (int cx = cx0; cx <= cx1; cx++)
+            {
+                int ci = cy * _gx + cx;
+                int s0 = _cellStart[ci], s1 = _cellStart[ci + 1];
+                if (s0 == s1) continue;
+                if (cull && CellOutside(a, b, c, _gx0 + cx * _cell, _gy0 + cy * _cell, _cell)) continue;
+                for (int k = s0; k < s1; k++)
+                {
+                    var p = _cellNodes[k];
+                    if (p.Removed || p == a || p == c) continue;
+                    if (p.X < x0 || p.X > x1 || p.Y < y0 || p.Y > y1) continue;
+                    if (Blocks(a, b, c, p)) return false;
+                }
+            }
         }
         return true;
+    }
+
+    /// <summary>True when the cell square lies wholly outside one edge of the counter-clockwise triangle.</summary>
+    private static bool CellOutside(Node a, Node b, Node c, double x, double y, double size)
+    {
+        return Right(a, b) || Right(b, c) || Right(c, a);
+
+        bool Right(Node p, Node q)
+        {
+            double ex = q.X - p.X, ey = q.Y - p.Y;
+            // left-of test: ex*(y - p.Y) - ey*(x - p.X) > 0 means left; the cell is outside if every corner is right.
+            double m = double.NegativeInfinity;
+            m = Math.Max(m, ex * (y - p.Y) - ey * (x - p.X));
+            m = Math.Max(m, ex * (y - p.Y) - ey * (x + size - p.X));
+            m = Math.Max(m, ex * (y + size - p.Y) - ey * (x - p.X));
+            m = Math.Max(m, ex * (y + size - p.Y) - ey * (x + size - p.X));
+            return m < 0;
+        }
     }
 
     /// <summary>
@@ -403,62 +480,6 @@ internal sealed class FaceTriangulator
     }
 
     private static bool SectorContainsSector(Node m, Node p) => Area(m.Prev, m, p.Prev) < 0 && Area(p.Next, m, m.Next) < 0;
-
-    // ---- z-order hash ----
-
-    private int ZOrder(double px, double py)
-    {
-        int x = (int)((px - _minX) * _invSize), y = (int)((py - _minY) * _invSize);
-        x = (x | (x << 8)) & 0x00FF00FF; x = (x | (x << 4)) & 0x0F0F0F0F; x = (x | (x << 2)) & 0x33333333; x = (x | (x << 1)) & 0x55555555;
-        y = (y | (y << 8)) & 0x00FF00FF; y = (y | (y << 4)) & 0x0F0F0F0F; y = (y | (y << 2)) & 0x33333333; y = (y | (y << 1)) & 0x55555555;
-        return x | (y << 1);
-    }
-
-    private void IndexCurve(Node start)
-    {
-        Node p = start;
-        do
-        {
-            if (!p.HasZ) { p.Z = ZOrder(p.X, p.Y); p.HasZ = true; }
-            p.PrevZ = p.Prev;
-            p.NextZ = p.Next;
-            p = p.Next;
-        } while (p != start);
-        p.PrevZ!.NextZ = null;
-        p.PrevZ = null;
-        SortLinked(p);
-    }
-
-    private static Node SortLinked(Node list)
-    {
-        int inSize = 1, numMerges;
-        do
-        {
-            Node? p = list, e, tail = null;
-            list = null!;
-            numMerges = 0;
-            while (p is not null)
-            {
-                numMerges++;
-                Node? q = p;
-                int pSize = 0;
-                for (int i = 0; i < inSize; i++) { pSize++; q = q.NextZ; if (q is null) break; }
-                int qSize = inSize;
-                while (pSize > 0 || (qSize > 0 && q is not null))
-                {
-                    if (pSize != 0 && (qSize == 0 || q is null || p!.Z <= q.Z)) { e = p!; p = p!.NextZ; pSize--; }
-                    else { e = q!; q = q!.NextZ; qSize--; }
-                    if (tail is not null) tail.NextZ = e; else list = e;
-                    e.PrevZ = tail;
-                    tail = e;
-                }
-                p = q;
-            }
-            tail!.NextZ = null;
-            inSize *= 2;
-        } while (numMerges > 1);
-        return list;
-    }
 
     // ---- T-junction repair ----
 

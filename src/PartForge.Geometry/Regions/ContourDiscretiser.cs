@@ -21,7 +21,10 @@ internal static class ContourDiscretiser
         double g = prec.GridMm;
         if (c.Circle is { } circle)
         {
-            int n = ArcSegmentation.FullCircle(circle.Radius, e, Math.Max(1, symmetry));
+            // Symmetry rounding only for circles about the origin; off-centre circles take their phase from
+            // the centre's polar angle, so a pattern of them repeats exactly around the origin anyway.
+            bool centred = circle.Center.X == 0 && circle.Center.Y == 0;
+            int n = ArcSegmentation.FullCircle(circle.Radius, e, centred ? Math.Max(1, symmetry) : 1);
             double r = asHole ? ArcSegmentation.CircumscribedRadius(circle.Radius, n) + g : circle.Radius;
             // Phase from the centre's polar angle, so that a circle pattern repeats exactly around the origin.
             double phase = circle.Center.X == 0 && circle.Center.Y == 0 ? 0 : Math.Atan2(circle.Center.Y, circle.Center.X);

@@ -70,8 +70,9 @@ public sealed class Region
 
     /// <summary>
     /// Discretises an exact profile: outers with vertices on the true arcs, holes with vertices on r/cos(pi/n)
-    /// (never undersize). n comes from the chordal tolerance; full circles round n up to a multiple of
-    /// <paramref name="symmetry"/>. Valid input (holes strictly inside one outer, nothing overlapping) is
+    /// (never undersize). n comes from the chordal tolerance; full circles about the origin round n up to a
+    /// multiple of <paramref name="symmetry"/> (off-centre circles start at their centre's polar angle, so a
+    /// pattern of them repeats exactly). Valid input (holes strictly inside one outer, nothing overlapping) is
     /// assembled directly; anything else goes through a boolean union/difference, so the result is always valid.
     /// </summary>
     [Pure]
