@@ -74,12 +74,14 @@ public static class PartDrawing
             var elbow = u * reach;
             c.BeginGroup(("class", "dim dim-note"), ("data-dim", n.CountId), ("data-value", n.Count.ToString(System.Globalization.CultureInfo.InvariantCulture)));
             c.BeginGroup(("class", "dim-size"), ("data-dim", n.SizeId), ("data-value", SvgCanvas.Num(n.Size)));
+            if (n.Size2Id != null) c.BeginGroup(("class", "dim-size2"), ("data-dim", n.Size2Id), ("data-value", SvgCanvas.Num(n.Size2)));
             c.Line(n.Target.X, n.Target.Y, elbow.X, elbow.Y, "dim-line");
             c.Circle(n.Target.X, n.Target.Y, text * 0.3, "dim-dot");
             bool rightSide = u.X >= 0;
             double sx = elbow.X + (rightSide ? text * 1.5 : -text * 1.5);
             c.Line(elbow.X, elbow.Y, sx, elbow.Y, "dim-line");
             c.Text(sx + (rightSide ? text * 0.4 : -text * 0.4), elbow.Y - text * 0.35, n.Label, text, "dim-text", rightSide ? "start" : "end");
+            if (n.Size2Id != null) c.EndGroup();
             c.EndGroup();
             c.EndGroup();
         }
