@@ -1,0 +1,70 @@
+using PartForge.Geometry.Meshes;
+using PartForge.Geometry.Profiles;
+using PartForge.Geometry.Solids;
+
+namespace PartForge.Parts;
+
+/// <summary>
+/// One distinct part of the machine, immutable. Identical copies are one model with a <see cref="Quantity"/>
+/// and one <see cref="PartInstance"/> each.
+/// </summary>
+public sealed record PartModel
+{
+    /// <summary>Contract part name: rotor | rotor-front | rotor-back | back-iron | former | stator | stator-front | stator-back | spacer.</summary>
+    public required string Name { get; init; }
+
+    /// <summary>Printed or cut.</summary>
+    public required PartProcess Process { get; init; }
+
+    /// <summary>How many copies the machine needs (= <see cref="Instances"/>.Count).</summary>
+    public int Quantity => Instances.Count;
+
+    /// <summary>Material, in the design file's spelling (PLA, steel, acrylic, ...).</summary>
+    public required string Material { get; init; }
+
+    /// <summary>Material density, g/cm^3 (<see cref="Materials"/>).</summary>
+    public double DensityGPerCm3 => Materials.DensityGPerCm3(Material);
+
+    /// <summary>Height of the part (its solid spans z = 0 .. HeightMm in part-local coordinates).</summary>
+    public required double HeightMm { get; init; }
+
+    /// <summary>The part in exact primitives, layer by layer (what the solid was made from).</summary>
+    public required IReadOnlyList<ExactLayer> ExactLayers { get; init; }
+
+    /// <summary>The layered solid in part-local coordinates (z from 0 at the bottom face).</summary>
+    public required LayeredSolid Solid { get; init; }
+
+    /// <summary>The solid's closed, outward-oriented triangle mesh (part-local).</summary>
+    public required Mesh Mesh { get; init; }
+
+    /// <summary>For cut parts: the exact profile to cut (outer boundary and through holes); null for printed parts.</summary>
+    public Profile? CutProfile { get; init; }
+
+    /// <summary>For cut parts: contours to engrave (polarity dots of a cut rotor); empty otherwise.</summary>
+    public IReadOnlyList<Contour> Marks { get; init; } = Array.Empty<Contour>();
+
+    /// <summary>Named features with exact primitives (pockets, seats, sensor pockets, holes, bore, rim, ...), part-local.</summary>
+    public required IReadOnlyList<PartFeature> Features { get; init; }
+
+    /// <summary>Every copy's nominal place in the machine.</summary>
+    public required IReadOnlyList<PartInstance> Instances { get; init; }
+
+    /// <summary>True for parts that turn with the shaft (rotors, their back irons, the dual-rotor hub spacer).</summary>
+    public required bool Rotating { get; init; }
+
+    /// <summary>Builder's instructions and the geometry choices worth telling the user (which way up magnets go, ...).</summary>
+    public IReadOnlyList<string> Notes { get; init; } = Array.Empty<string>();
+
+    /// <summary>Volume of one copy in mm^3: sum over the solid's layers of region area x height (the discretised solid,
+    /// within the chordal bound of the true-circle volume).</summary>
+    public double VolumeMm3 => Solid.AnalyticVolume;
+
+    /// <summary>Mass of one copy in grams from <see cref="VolumeMm3"/> and the material density (solid, 100% infill).</summary>
+    public double MassG => Materials.MassG(Material, VolumeMm3);
+
+    /// <summary>Features of one kind, in index order.</summary>
+    public IEnumerable<PartFeature> FeaturesOf(FeatureKind kind) => Features.Where(f => f.Kind == kind).OrderBy(f => f.Index);
+
+    /// <summary>The feature with this name (throws if absent).</summary>
+    public PartFeature Feature(string name) => Features.First(f => f.Name == name);
+}

@@ -1,0 +1,21 @@
+using PartForge.Geometry.Profiles;
+
+namespace PartForge.Parts;
+
+/// <summary>
+/// A part described in exact primitives only (no polygons yet): what the individual builders produce and
+/// <see cref="PartsBuilder"/> turns into a <see cref="PartModel"/> with its solid and mesh.
+/// </summary>
+internal sealed record PartSpec
+{
+    public required string Name { get; init; }
+    public required PartProcess Process { get; init; }
+    public required string Material { get; init; }
+    public required double HeightMm { get; init; }
+    public required IReadOnlyList<ExactLayer> Layers { get; init; }
+    public required IReadOnlyList<PartFeature> Features { get; init; }
+    public required IReadOnlyList<PartInstance> Instances { get; init; }
+    public Profile? CutProfile { get; init; }
+    public IReadOnlyList<Contour> Marks { get; init; } = Array.Empty<Contour>();
+    public IReadOnlyList<string> Notes { get; init; } = Array.Empty<string>();
+}

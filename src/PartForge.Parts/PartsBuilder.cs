@@ -1,0 +1,120 @@
+using PartForge.Design.Stack;
+using PartForge.Geometry;
+using PartForge.Geometry.Meshes;
+using PartForge.Geometry.Profiles;
+using PartForge.Geometry.Regions;
+using PartForge.Geometry.Solids;
+using PartForge.Parts.Discs;
+using PartForge.Parts.Formers;
+using PartForge.Parts.Rotors;
+using PartForge.Parts.Shapes;
+using PartForge.Parts.Stators;
+using D = PartForge.Design.Model;
+
+namespace PartForge.Parts;
+
+/// <summary>
+/// Builds every part of a design: rotor(s), back iron, the coil former, stator ring(s) and the spacer, each
+/// as exact layers, a layered solid on the precision grid and its mesh, placed in the machine by the
+/// nominal <see cref="AxialStack"/>. Identical parts are one model with several instances (formers:
+/// coils x stators; back iron: one per rotor).
+/// </summary>
+public static partial class PartsBuilder
+{
+    /// <summary>
+    /// Builds the parts from the design and the coil geometry the electrical engine computed.
+    /// Throws <see cref="PartsException"/> (one-line message) when the design cannot be made into parts.
+    /// </summary>
+    public static PartSet Build(D.Design design, CoilGeometry coil, Precision precision)
+    {
+        ArgumentNullException.ThrowIfNull(design);
+        ArgumentNullException.ThrowIfNull(coil);
+        ArgumentNullException.ThrowIfNull(precision);
+        var diags = new List<PartDiagnostic>();
+        var stack = AxialStack.From(design);
+        var specs = new List<PartSpec>();
+        string part = "rotor";
+        try
+        {
+            var rotors = RotorBuilder.Build(design, stack, diags);
+            specs.AddRange(rotors);
+            part = "back-iron";
+            if (BackIronBuilder.Build(design, stack, rotors, diags) is { } bi) specs.Add(bi);
+
+            part = "former";
+            var footprint = FormerBuilder.Footprint(design, coil);
+            var former = FormerBuilder.Build(design, coil, 1, diags);
+
+            part = "stator";
+            var stators = new List<(PartSpec Spec, StatorBuilder.Variant Variant)>();
+            foreach (var v in StatorBuilder.Variants(design))
+                stators.Add((StatorBuilder.Build(design, stack, coil, footprint, v, diags), v));
+
+            var formerInstances = new List<PartInstance>();
+            for (int si = 0; si < stators.Count; si++)
+            {
+                var (spec, v) = stators[si];
+                var slab = stack.Slabs.First(x => x.Kind == SlabKind.Former && x.Owner == v.Name);
+                for (int k = 0; k < design.Machine.Coils; k++)
+                    formerInstances.Add(new PartInstance(si * design.Machine.Coils + k, v.Name, slab.ZMin, former.HeightMm, v.Flipped,
+                        DesignGeometry.CoilAngleDeg(design, k), coil.PitchRadiusMm, v.ExplodeRank));
+            }
+            specs.Add(former with { Instances = formerInstances });
+            specs.AddRange(stators.Select(s => s.Spec));
+
+            part = "spacer";
+            var seatLocal = ContourOffset.Offset(footprint, DesignGeometry.SeatClearanceMm(design));
+            if (SpacerBuilder.Build(design, stack, coil, seatLocal, diags) is { } sp) specs.Add(sp);
+        }
+        catch (ArgumentException ex)
+        {
+            throw new PartsException($"{part}: the geometry cannot be made ({ex.Message})");
+        }
+
+        var models = new List<PartModel>(specs.Count);
+        foreach (var s in specs)
+        {
+            int symmetry = s.Name.StartsWith("rotor", StringComparison.Ordinal) ? design.Machine.Poles
+                : s.Name.StartsWith("stator", StringComparison.Ordinal) ? design.Machine.Coils : 1;
+            models.Add(ToModel(s, precision, symmetry, design.Machine.Layout));
+        }
+        return new PartSet { Parts = models, Stack = stack, Diagnostics = diags, ExplodeMm = design.Assembly.Explode };
+    }
+
+    /// <summary>The layered solid of exact layers on the precision grid (one region per layer).</summary>
+    public static LayeredSolid SolidOf(IReadOnlyList<ExactLayer> layers, Precision precision, int symmetry = 1) =>
+        new(layers.Select(l => new Layer(l.Z0Mm, l.Z1Mm, Region.FromProfile(new Profile(l.Outers, l.Cuts), precision, symmetry))));
+
+    private static PartModel ToModel(PartSpec s, Precision precision, int symmetry, string layout)
+    {
+        LayeredSolid solid;
+        Mesh mesh;
+        try
+        {
+            solid = SolidOf(s.Layers, precision, symmetry);
+            mesh = Mesher.Build(solid, precision);
+        }
+        catch (ArgumentException ex)
+        {
+            throw new PartsException($"{s.Name}: the solid cannot be made ({ex.Message})");
+        }
+        bool rotating = s.Name.StartsWith("rotor", StringComparison.Ordinal) || s.Name == "back-iron"
+            || (s.Name == "spacer" && layout == "dual-rotor");
+        return new PartModel
+        {
+            Name = s.Name,
+            Process = s.Process,
+            Material = s.Material,
+            HeightMm = s.HeightMm,
+            ExactLayers = s.Layers,
+            Solid = solid,
+            Mesh = mesh,
+            CutProfile = s.CutProfile,
+            Marks = s.Marks,
+            Features = s.Features,
+            Instances = s.Instances,
+            Rotating = rotating,
+            Notes = s.Notes,
+        };
+    }
+}

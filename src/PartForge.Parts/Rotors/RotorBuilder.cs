@@ -1,0 +1,214 @@
+using PartForge.Design.Stack;
+using PartForge.Geometry.Primitives;
+using PartForge.Geometry.Profiles;
+using PartForge.Parts.Shapes;
+using D = PartForge.Design.Model;
+
+namespace PartForge.Parts.Rotors;
+
+/// <summary>
+/// The rotor disc(s). Geometry decisions:
+/// <list type="bullet">
+/// <item>Part-local frame: z = 0 is the back face (away from the stator), z = thickness the stator-side face.
+/// Blind pockets (<c>rotor.pocket_floor</c> &gt; 0) open on the stator-side face, from z = floor to the top;
+/// through pockets go from 0 to the top. In <c>dual-stator</c> the single rotor always has through pockets
+/// (both faces face a stator).</item>
+/// <item>Pocket i is centred at i x 360 / poles (pocket 0 on +x), outline from <see cref="DesignGeometry.PocketOutline"/>.</item>
+/// <item>Polarity dots: a round dot, diameter max(1.5, 3 x nozzle), engraved 2 layers deep (at most a quarter of
+/// the thickness, at most half the pocket depth) into the top face beside every pocket that takes a magnet
+/// north pole up (toward the top face). The dot sits on the pocket's centre line, one minimum wall
+/// (min_wall_lines x nozzle) inside the pocket's inner edge; if it does not fit there (bore, bolt holes,
+/// neighbouring pockets), outside the outer edge; else it is left out with a note. Dots are their own layer,
+/// so the part stays a stack of prisms; a cut rotor gets them as engraving marks.</item>
+/// <item>Index notch: a semicircular bite in the rim on the +x axis (at pocket 0), radius 1 mm or less so that a
+/// minimum wall remains between it and pocket 0; left out (with a note) when less than 0.3 mm would remain.</item>
+/// <item>Magnets alternate: even pockets north-up on <c>rotor</c> and <c>rotor-front</c>. The back disc of a
+/// dual-rotor machine has the same pockets (the mirror of the front's pattern, which is symmetric) and its dots at
+/// the odd pockets: assembled with both index notches on the same side, every front magnet presents the opposite
+/// pole to the back magnet facing it, so they attract across the stator (the field runs straight through the coils).</item>
+/// <item>Bolt hole j at j x 360 / count on the bolt circle; bore centred.</item>
+/// </list>
+/// </summary>
+internal static class RotorBuilder
+{
+    public const double MinNotchRadiusMm = 0.3;
+    public const double MaxNotchRadiusMm = 1.0;
+
+    public static IReadOnlyList<PartSpec> Build(D.Design d, AxialStack stack, List<PartDiagnostic> diags)
+    {
+        string layout = d.Machine.Layout;
+        var parts = new List<PartSpec>();
+        if (layout == "dual-rotor")
+        {
+            parts.Add(BuildOne(d, stack, "rotor-front", evenNorthUp: true, diags));
+            parts.Add(BuildOne(d, stack, "rotor-back", evenNorthUp: false, diags));
+        }
+        else parts.Add(BuildOne(d, stack, "rotor", evenNorthUp: true, diags));
+        return parts;
+    }
+
+    /// <summary>The rim contour (outer circle, with the index notch bite on +x when notchRadius &gt; 0).</summary>
+    public static Contour Rim(double r, double notchRadius)
+    {
+        var o = new Vec2(0, 0);
+        if (!(notchRadius > 0)) return Contour.FullCircle(o, r);
+        double alpha = 2 * Math.Asin(notchRadius / (2 * r)) * 180.0 / Math.PI;
+        return Contour.FromSegments(new Segment[]
+        {
+            new ArcSegment(o, r, alpha, 360 - 2 * alpha),
+            new ArcSegment(new Vec2(r, 0), notchRadius, 270 - alpha / 2, -(180 - alpha)),
+        });
+    }
+
+    private static PartSpec BuildOne(D.Design d, AxialStack stack, string name, bool evenNorthUp, List<PartDiagnostic> diags)
+    {
+        var rd = d.Rotor;
+        double R = rd.OuterDiameter / 2, t = rd.Thickness;
+        bool dualStator = d.Machine.Layout == "dual-stator";
+        bool through = dualStator || !(rd.PocketFloor > 0);
+        double pocketZ0 = through ? 0 : rd.PocketFloor;
+        if (!through && !(pocketZ0 < t)) throw new PartsException("rotor.pocket_floor must be less than rotor.thickness");
+        double wall = DesignGeometry.MinWallMm(d);
+        int poles = d.Machine.Poles;
+        var notes = new List<string>();
+
+        var pocket0 = DesignGeometry.PocketOutline(d);
+        var (pIn, pOut) = ExactGeometry.RadialExtent(pocket0);
+        var pockets = Enumerable.Range(0, poles).Select(i => pocket0.RotatedDeg(DesignGeometry.PoleAngleDeg(d, i))).ToArray();
+
+        // Index notch on the rim at pocket 0.
+        double notch = Math.Min(MaxNotchRadiusMm, R - pOut - wall);
+        if (notch < MinNotchRadiusMm)
+        {
+            notch = 0;
+            notes.Add("no rim index notch: the web between pocket 0 and the rim is too thin for one; pocket 0 is the one on the part's +x axis");
+            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, name, "no-index-notch", $"{name}: the rim is too close to the pockets for an index notch; left out"));
+        }
+        var rim = Rim(R, notch);
+
+        Contour? bore = rd.Bore > 0 ? Contour.FullCircle(new Vec2(0, 0), rd.Bore / 2) : null;
+        var bolts = BoltHoles(rd.BoltCircle);
+
+        // Polarity dots.
+        double dotD = Math.Max(1.5, 3 * d.Process.Nozzle);
+        double dotDepth = Math.Min(2 * d.Process.Layer, Math.Min(t / 4, (t - pocketZ0) / 2));
+        var dotRadius = PlaceDots(d, R, notch, pocket0, pockets, bore, bolts, dotD / 2, wall, pIn, pOut);
+        var features = new List<PartFeature>
+        {
+            new("rim", FeatureKind.Rim, 0, rim, 0, t, 0, R),
+        };
+        if (bore is not null) features.Add(new("bore", FeatureKind.Bore, 0, bore, 0, t, 0, 0));
+        for (int j = 0; j < bolts.Count; j++)
+            features.Add(new($"bolt-{j}", FeatureKind.BoltHole, j, bolts[j], 0, t, BoltAngle(rd.BoltCircle!, j), rd.BoltCircle!.Diameter / 2));
+        if (notch > 0) features.Add(new("index-notch", FeatureKind.IndexNotch, 0, Contour.FullCircle(new Vec2(R, 0), notch), 0, t, 0, R));
+
+        double pitch = DesignGeometry.MagnetPitchRadiusMm(d);
+        var dots = new List<Contour>();
+        for (int i = 0; i < poles; i++)
+        {
+            double a = DesignGeometry.PoleAngleDeg(d, i);
+            bool northUp = (i % 2 == 0) == evenNorthUp;
+            features.Add(new($"pocket-{i}", FeatureKind.MagnetPocket, i, pockets[i], pocketZ0, t, a, pitch) { NorthUp = northUp });
+            if (northUp && dotRadius is { } rDot)
+            {
+                var dot = Contour.FullCircle(Vec2.FromAngleDeg(a) * rDot, dotD / 2);
+                dots.Add(dot);
+                features.Add(new($"mark-{i}", FeatureKind.PolarityMark, i, dot, t - dotDepth, t, a, rDot));
+            }
+        }
+        if (dotRadius is null)
+        {
+            notes.Add("no polarity dots: there is no room beside the pockets; count north-up magnets from pocket 0 (even pockets on the front rotor)");
+            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, name, "no-polarity-marks", $"{name}: no room beside the pockets for polarity dots; left out"));
+        }
+
+        string whyNot = through ? "" : "its magnet pockets are blind (rotor.pocket_floor > 0)";
+        var (process, material) = ProcessChoice.Resolve(name, d.Parts.Rotor, rd.Material, "PLA", through, whyNot, diags);
+
+        var st = new PrismaticStack(t).Outer(rim);
+        if (bore is not null) st.Through(bore);
+        foreach (var b in bolts) st.Through(b);
+        foreach (var p in pockets) st.Cut(p, pocketZ0, t);
+        IReadOnlyList<Contour> marks = Array.Empty<Contour>();
+        Profile? cutProfile = null;
+        if (process == PartProcess.Cut)
+        {
+            marks = dots;
+            var holes = new List<Contour>();
+            if (bore is not null) holes.Add(bore);
+            holes.AddRange(bolts);
+            holes.AddRange(pockets);
+            cutProfile = new Profile(new[] { rim }, holes);
+        }
+        else foreach (var dot in dots) st.Cut(dot, t - dotDepth, t);
+
+        notes.Insert(0, name switch
+        {
+            "rotor-back" => "rotor-back: magnets go in with the NORTH pole facing out of the pocket (toward the stator) in the dotted pockets (the odd ones, counting from the rim notch), south pole out in the others. Assembled with the two rim notches in line, each back magnet faces a front magnet of the opposite pole, so they attract across the stator.",
+            "rotor-front" => "rotor-front: magnets go in with the NORTH pole facing out of the pocket (toward the stator) in the dotted pockets (the even ones, pocket 0 at the rim notch), south pole out in the others.",
+            _ => through
+                ? "rotor: magnets go in with the NORTH pole toward the dotted face in the dotted pockets (the even ones, pocket 0 at the rim notch), south pole toward it in the others."
+                : "rotor: magnets go in with the NORTH pole facing out of the pocket (toward the stator) in the dotted pockets (the even ones, pocket 0 at the rim notch), south pole out in the others.",
+        });
+        notes.Add("Find a magnet's north pole with a marked reference magnet or a compass before pressing it in; magnets snap together hard, keep fingers clear.");
+
+        return new PartSpec
+        {
+            Name = name,
+            Process = process,
+            Material = material,
+            HeightMm = t,
+            Layers = st.Build(),
+            Features = features,
+            Instances = new[] { Instance(d, stack, name, t) },
+            CutProfile = cutProfile,
+            Marks = marks,
+            Notes = notes,
+        };
+    }
+
+    /// <summary>
+    /// Where the dots go: the radius of their centres, or null when there is no room. Inside the pocket's inner
+    /// edge first, else outside its outer edge.
+    /// </summary>
+    private static double? PlaceDots(D.Design d, double R, double notch, Contour pocket0, Contour[] pockets, Contour? bore,
+        IReadOnlyList<Contour> bolts, double rDot, double wall, double pIn, double pOut)
+    {
+        foreach (double r in new[] { pIn - wall - rDot, pOut + wall + rDot })
+        {
+            if (r - rDot < (bore is null ? 0 : d.Rotor.Bore / 2) + wall - 1e-9) continue;
+            if (r + rDot > R - wall + 1e-9) continue;
+            bool ok = true;
+            for (int i = 0; i < pockets.Length && ok; i++)
+            {
+                var c = Vec2.FromAngleDeg(DesignGeometry.PoleAngleDeg(d, i)) * r;
+                foreach (var b in bolts) if (ExactGeometry.Distance(b, c) < rDot + wall - 1e-9 || Inside(b, c)) ok = false;
+                foreach (var p in new[] { pockets[i], pockets[(i + 1) % pockets.Length], pockets[(i + pockets.Length - 1) % pockets.Length] })
+                    if (ExactGeometry.Distance(p, c) < rDot + wall - 1e-9) ok = false;
+                if (notch > 0 && (c - new Vec2(R, 0)).Length < notch + rDot + wall - 1e-9) ok = false;
+            }
+            if (ok) return r;
+        }
+        return null;
+    }
+
+    private static bool Inside(Contour circle, Vec2 p) => circle.Circle is { } c && (p - c.Center).Length < c.Radius;
+
+    public static double BoltAngle(D.BoltCircle bc, int j) => j * 360.0 / bc.Count;
+
+    public static IReadOnlyList<Contour> BoltHoles(D.BoltCircle? bc)
+    {
+        if (bc is null) return Array.Empty<Contour>();
+        return Enumerable.Range(0, bc.Count)
+            .Select(j => Contour.FullCircle(Vec2.FromAngleDeg(BoltAngle(bc, j)) * (bc.Diameter / 2), bc.Hole / 2)).ToArray();
+    }
+
+    private static PartInstance Instance(D.Design d, AxialStack stack, string name, double t)
+    {
+        var slab = stack.Slabs.First(s => s.Kind == SlabKind.Rotor && s.Owner == name);
+        // The stator-side face is the part's top: a rotor on the +z side of the stator faces -z (flipped).
+        bool flipped = d.Machine.Layout != "dual-stator" && slab.ZMin > 0;
+        double rank = d.Machine.Layout == "dual-stator" ? 0 : Math.Sign(slab.ZMin + slab.ZMax);
+        return new PartInstance(0, name, slab.ZMin, t, flipped, 0, 0, rank);
+    }
+}
