@@ -79,15 +79,15 @@ public class ExactDistanceTests
             Segment s2 = new ArcSegment(new Vec2(x2 * 0.3, y1 * 0.3), r, start, sweep);
             if (!lineFirst) s1 = new ArcSegment(new Vec2(y2 * 0.5, x1 * 0.5), r * 0.7 + 0.5, start * 0.5, -sweep * 0.8);
             double exact = ExactDistance.SegmentSegment(s1, s2);
-            var p1 = Sample(s1, 1500);
-            var p2 = Sample(s2, 1500);
+            var p1 = Sample(s1, 700);
+            var p2 = Sample(s2, 700);
             double brute = double.PositiveInfinity;
             foreach (var a in p1) foreach (var b in p2) brute = Math.Min(brute, (a - b).Length);
             // Sampling error bound: half the largest sample spacing on each segment.
-            double err = Spacing(s1, 1500) + Spacing(s2, 1500);
+            double err = Spacing(s1, 700) + Spacing(s2, 700);
             Assert.True(exact <= brute + 1e-9, $"exact {exact} > brute {brute}");
             Assert.True(brute - exact <= err + 1e-9, $"exact {exact}, brute {brute}, err {err}");
-        }, iter: 60);
+        }, iter: 40);
     }
 
     private static List<Vec2> Sample(Segment s, int n)

@@ -1,0 +1,57 @@
+using PartForge.Checks.Inputs;
+using PartForge.Checks.Rules;
+using PartForge.Design.Stack;
+
+namespace PartForge.Checks;
+
+/// <summary>
+/// Runs every check on a design, its electrical results and its parts, and returns the report. Never
+/// throws for a loadable design: a check that cannot be evaluated fails with a message saying why.
+/// </summary>
+public static partial class CheckRunner
+{
+    public static CheckReport Run(Design.Model.Design design, ElectricalFacts electrical, IReadOnlyList<PartView> parts, CheckOptions? options = null)
+    {
+        options ??= CheckOptions.Default;
+        var stack = AxialStack.From(design);
+        var c = new CheckContext(design, stack, electrical, parts, options.SweepStepDeg);
+        var results = new List<CheckResult>();
+        Collect(results, "stack-up", () => GapRules.Run(c));
+        Collect(results, "rotation sweep", () => SweepRules.Run(c));
+        Collect(results, "printability", () => PrintRules.Run(c));
+        Collect(results, "winding", () => WindingRules.Run(c));
+        Collect(results, "speed", () => SpeedRules.Run(c));
+        Collect(results, "electrical", () => ElectricalRules.Run(c));
+        return new CheckReport(results);
+    }
+
+    private static void Collect(List<CheckResult> into, string group, Func<IEnumerable<CheckResult>> rule)
+    {
+        try
+        {
+            foreach (var r in rule()) into.Add(Sanitise(r));
+        }
+        catch (Exception ex) when (ex is ArgumentException or InvalidOperationException or ArithmeticException or IndexOutOfRangeException)
+        {
+            into.Add(new CheckResult
+            {
+                Id = "check-error", Part = "machine", Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0,
+                Message = $"the {group} checks could not be evaluated for this design ({ex.Message}); treat it as failed",
+            });
+        }
+    }
+
+    /// <summary>Non-finite numbers never reach the results document: they become a failure with the value 0.</summary>
+    private static CheckResult Sanitise(CheckResult r)
+    {
+        if (double.IsFinite(r.Value) && double.IsFinite(r.Limit) && double.IsFinite(r.Margin)) return r;
+        return r with
+        {
+            Status = CheckStatus.Fail,
+            Value = double.IsFinite(r.Value) ? r.Value : 0,
+            Limit = double.IsFinite(r.Limit) ? r.Limit : 0,
+            Margin = double.IsFinite(r.Margin) ? r.Margin : 0,
+            Message = r.Message + " (a value was not finite)",
+        };
+    }
+}

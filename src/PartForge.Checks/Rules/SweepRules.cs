@@ -1,0 +1,123 @@
+using PartForge.Checks.Clearance;
+using PartForge.Checks.Inputs;
+using PartForge.Design.Stack;
+using PartForge.Geometry.Primitives;
+using PartForge.Geometry.Profiles;
+using PartForge.Parts;
+using static PartForge.Checks.Judge;
+
+namespace PartForge.Checks.Rules;
+
+/// <summary>rotation-clearance: the rotation sweep over the assembly at its nominal positions, coil bulge included.</summary>
+internal static class SweepRules
+{
+    public static IEnumerable<CheckResult> Run(CheckContext c)
+    {
+        var scene = BuildScene(c);
+        var r = RotationSweep.Run(scene, c.SweepStepDeg);
+        if (r.Rotating is null || r.Stationary is null) yield break;
+        double limit = c.D.Gap.MinRunningGap;
+        var (status, margin) = AtLeast(r.ClearanceMm, limit, MinBand(limit));
+        string where = $"{r.Rotating.Part} {r.Rotating.Feature} / {r.Stationary.Part} {r.Stationary.Feature}";
+        string msg = r.Interference
+            ? $"{where} interfere: they overlap {F(-r.ClearanceMm)} mm axially at rotor angle {F(r.AngleDeg)} degrees"
+            : $"minimum clearance {F(r.ClearanceMm)} mm ({F(r.AxialMm)} axial, {F(r.PlanarMm)} in plane) between {where} at rotor angle {F(r.AngleDeg)} degrees (sweep over {F(scene.PeriodDeg)} degrees, step {F(r.StepDeg)})";
+        if (status != CheckStatus.Pass)
+        {
+            double s = limit + MinBand(limit) - r.ClearanceMm;
+            msg += r.PlanarMm > r.AxialMm && !r.Interference
+                ? $"; move them {Up(s)} mm further apart in the plane (the parts' radial sizes or coils.pitch_radius)"
+                : $"; raise gap.air_gap to at least {Up(c.D.Gap.AirGap + s)}";
+        }
+        yield return new CheckResult
+        {
+            Id = CheckIds.RotationClearance, Part = r.Rotating.Part, Status = status, Value = r.ClearanceMm, Limit = limit, Unit = "mm", Margin = margin,
+            Message = msg, Where = new CheckLocation(where, r.AngleDeg),
+            Basis = "rotation sweep over one pole pitch on the layered solids: axial overlap plus exact 2D distance, sqrt(dz^2 + d2^2)",
+        };
+    }
+
+    /// <summary>The sweep scene: rotor layers and magnets turn; stator, formers and copper stand still.</summary>
+    public static SweepScene BuildScene(CheckContext c)
+    {
+        var rotating = new List<SweepPrism>();
+        var stationary = new List<SweepPrism>();
+        var slabs = c.Stack.Slabs;
+        foreach (var pv in c.Parts)
+        {
+            // The single-rotor gap gauge is an assembly tool, pulled out before the rotor turns.
+            if (pv.Name == "spacer" && c.D.Machine.Layout == "single-rotor") continue;
+            var into = pv.Rotating ? rotating : stationary;
+            if (pv.Name == "former")
+                foreach (var inst in pv.Instances) AddLayers(into, pv, new[] { inst }, $"coil {inst.Index} former");
+            else AddLayers(into, pv, pv.Instances, pv.Rotating ? "disc" : "ring");
+        }
+        foreach (var rotor in c.RotorNames)
+        {
+            var magnetSlab = slabs.First(s => s.Owner == rotor && s.Kind == SlabKind.Magnet);
+            if (c.Part(rotor) is { } pv && pv.OfKind(FeatureKind.MagnetPocket).Any())
+            {
+                foreach (var inst in pv.Instances)
+                    foreach (var pocket in pv.OfKind(FeatureKind.MagnetPocket))
+                    {
+                        var outline = inst.ToMachine(c.Magnet.OutlineAt(pocket.AngleDeg, pocket.RadiusMm));
+                        rotating.Add(new SweepPrism(rotor, $"magnet {pocket.Index}", magnetSlab.ZMin, magnetSlab.ZMax, new Shape2D(outline)));
+                    }
+                continue;
+            }
+            if (c.Part(rotor) is null)
+            {
+                var disc = slabs.First(s => s.Owner == rotor && s.Kind == SlabKind.Rotor);
+                rotating.Add(new SweepPrism(rotor, "disc", disc.ZMin, disc.ZMax, Shape2D.Annulus(c.D.Rotor.Bore / 2, c.D.Rotor.OuterDiameter / 2)));
+            }
+            for (int i = 0; i < c.D.Machine.Poles; i++)
+            {
+                double ang = i * 360.0 / c.D.Machine.Poles;
+                rotating.Add(new SweepPrism(rotor, $"magnet {i}", magnetSlab.ZMin, magnetSlab.ZMax, c.Magnet.ShapeAt(ang, c.Magnet.PitchRadiusMm)));
+            }
+        }
+
+        var stators = slabs.Where(s => s.Kind == SlabKind.Stator).Select(s => s.Owner).Distinct().ToList();
+        foreach (var stator in stators)
+        {
+            if (c.Part(stator) is null)
+            {
+                var ring = slabs.First(s => s.Owner == stator && s.Kind == SlabKind.Stator);
+                stationary.Add(new SweepPrism(stator, "ring", ring.ZMin, ring.ZMax, Shape2D.Annulus(c.D.Stator.InnerDiameter / 2, c.D.Stator.OuterDiameter / 2)));
+            }
+            var copper = slabs.First(s => s.Owner == stator && s.Kind == SlabKind.Copper);
+            double z0 = copper.ZMin - c.BulgePerFaceMm, z1 = copper.ZMax + c.BulgePerFaceMm;
+            for (int k = 0; k < c.D.Machine.Coils; k++)
+            {
+                double ang = k * 360.0 / c.D.Machine.Coils;
+                var outer = c.E.Outline.Outer.RotatedDeg(ang);
+                var window = c.E.Outline.Window.RotatedDeg(ang);
+                stationary.Add(new SweepPrism(stator, $"coil {k} copper", z0, z1, new Shape2D(outer, new[] { window })));
+            }
+        }
+        return new SweepScene(rotating, stationary, 360.0 / Math.Max(1, c.D.Machine.Poles));
+    }
+
+    private static void AddLayers(List<SweepPrism> into, PartView pv, IEnumerable<PartInstance> instances, string what)
+    {
+        foreach (var inst in instances)
+        {
+            for (int li = 0; li < pv.Layers.Count; li++)
+            {
+                var layer = pv.Layers[li];
+                double za = inst.ToMachineZ(layer.Z0Mm), zb = inst.ToMachineZ(layer.Z1Mm);
+                var cuts = layer.Cuts.Select(inst.ToMachine).ToList();
+                foreach (var outerLocal in layer.Outers)
+                {
+                    var outer = inst.ToMachine(outerLocal);
+                    var ob = Box2.Of(outer);
+                    var holes = cuts.Where(h => Inside(Box2.Of(h), ob)).ToArray();
+                    into.Add(new SweepPrism(pv.Name, $"{what} layer {li}", Math.Min(za, zb), Math.Max(za, zb), new Shape2D(outer, holes)));
+                }
+            }
+        }
+    }
+
+    private static bool Inside(Box2 inner, Box2 outer) =>
+        inner.MinX >= outer.MinX - 1e-9 && inner.MaxX <= outer.MaxX + 1e-9 && inner.MinY >= outer.MinY - 1e-9 && inner.MaxY <= outer.MaxY + 1e-9;
+}
