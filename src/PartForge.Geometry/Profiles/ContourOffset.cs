@@ -10,10 +10,10 @@ namespace PartForge.Geometry.Profiles;
 /// again lines and arcs, so writers keep true arcs (used for kerf compensation of cut parts).
 /// </summary>
 /// <remarks>
-/// The offset is local: it fails with an <see cref="ArgumentException"/> when a piece of the contour
-/// vanishes (an arc whose radius drops to zero, a segment trimmed away by its neighbours, a circle that
-/// shrinks to nothing) instead of silently returning a wrong outline. It does not detect a self-overlap
-/// between pieces that are far apart along the contour (a neck narrower than twice the offset).
+/// It fails with an <see cref="ArgumentException"/> instead of returning a wrong outline when a piece of
+/// the contour vanishes (an arc whose radius drops to zero, a segment trimmed away by its neighbours, a
+/// circle that shrinks to nothing) or when pieces far apart along the contour run into each other (a neck
+/// or gap narrower than twice the offset), found by testing every pair of non-neighbouring pieces.
 /// </remarks>
 public static class ContourOffset
 {
@@ -25,6 +25,13 @@ public static class ContourOffset
 
     /// <summary>Turns smaller than this (radians) are treated as tangent-continuous joints.</summary>
     private const double TangentTurnRad = 1e-9;
+
+    /// <summary>
+    /// A joint whose offset pieces would be less than this far apart (turn x offset, mm) is treated as
+    /// tangent: no joint arc, no trim; the writers join the pieces at the next piece's start, a shift of at
+    /// most this much (keeps finely polygonised input free of ill-conditioned sliver joints).
+    /// </summary>
+    public const double JointGapMm = 1e-5;
 
     /// <summary>
     /// The contour moved outward by <paramref name="distanceMm"/> (away from the area it encloses);
@@ -70,7 +77,7 @@ public static class ContourOffset
             Vec2 corner = Mid(segs[i].End, segs[j].Start);
             Vec2 t1 = EndTangent(segs[i]), t2 = StartTangent(segs[j]);
             double turn = Math.Atan2(t1.Cross(t2), t1.Dot(t2));
-            if (Math.Abs(turn) < TangentTurnRad) continue;
+            if (Math.Abs(turn) < TangentTurnRad || Math.Abs(turn * d) < JointGapMm) continue;
             if (Math.PI - Math.Abs(turn) < TangentTurnRad)
                 throw new ArgumentException(FormattableString.Invariant($"the contour turns back on itself at ({corner.X}, {corner.Y})"), nameof(contour));
             if (turn * d > 0)
@@ -101,6 +108,9 @@ public static class ContourOffset
         if (!sameSense || !rightSize)
             throw new ArgumentException(FormattableString.Invariant(
                 $"the contour turns inside out under an offset of {distanceMm} mm (a feature is smaller than the offset)"), nameof(contour));
+        if (FindSelfCrossing(offset) is { } hit)
+            throw new ArgumentException(FormattableString.Invariant(
+                $"the offset contour crosses itself near ({hit.X}, {hit.Y}): a neck or gap is narrower than twice the offset of {Math.Abs(distanceMm)} mm"), nameof(contour));
         return offset;
     }
 
@@ -143,6 +153,82 @@ public static class ContourOffset
             };
         }
         return Contour.FromSegments(segs);
+    }
+
+    /// <summary>A point where two pieces that do not follow each other cross or touch, if any (a sweep over the pieces' boxes sorted by x).</summary>
+    private static Vec2? FindSelfCrossing(Contour c)
+    {
+        var segs = c.Segments;
+        int n = segs.Count;
+        if (n < 3) return null;
+        var boxes = new (Vec2 Min, Vec2 Max)[n];
+        for (int i = 0; i < n; i++) boxes[i] = Box(segs[i]);
+        // Sweep over the boxes sorted by their left edge: only pairs whose x ranges overlap are tested.
+        var order = Enumerable.Range(0, n).OrderBy(k => boxes[k].Min.X).ToArray();
+        var hits = new List<Vec2>(2);
+        for (int oi = 0; oi < n; oi++)
+        {
+            int i = order[oi];
+            var (a0, a1) = boxes[i];
+            for (int oj = oi + 1; oj < n && boxes[order[oj]].Min.X <= a1.X + ClosureToleranceMm; oj++)
+            {
+                int j = order[oj];
+                int gap = Math.Abs(i - j);
+                if (gap <= 1 || gap == n - 1) continue; // neighbours share an end
+                var (b0, b1) = boxes[j];
+                if (a1.Y < b0.Y - ClosureToleranceMm || b1.Y < a0.Y - ClosureToleranceMm) continue;
+                hits.Clear();
+                Carriers(segs[i], segs[j], hits);
+                foreach (var p in hits)
+                    if (OnSegment(segs[i], p) && OnSegment(segs[j], p)) return p;
+            }
+        }
+        return null;
+    }
+
+    private static (Vec2 Min, Vec2 Max) Box(Segment s)
+    {
+        if (s is ArcSegment a)
+        {
+            // The circle's box: cheap and never too small.
+            var r = new Vec2(a.Radius, a.Radius);
+            return (a.Center - r, a.Center + r);
+        }
+        return (new Vec2(Math.Min(s.Start.X, s.End.X), Math.Min(s.Start.Y, s.End.Y)), new Vec2(Math.Max(s.Start.X, s.End.X), Math.Max(s.Start.Y, s.End.Y)));
+    }
+
+    private static void Carriers(Segment s, Segment t, List<Vec2> into)
+    {
+        switch (s, t)
+        {
+            case (LineSegment a, LineSegment b):
+            {
+                Vec2 da = a.To - a.From, db = b.To - b.From;
+                double den = da.Cross(db);
+                if (den != 0) into.Add(a.From + da * ((b.From - a.From).Cross(db) / den));
+                break;
+            }
+            case (LineSegment a, ArcSegment b): LineCircle(a.From, a.To, b.Center, b.Radius, into); break;
+            case (ArcSegment a, LineSegment b): LineCircle(b.From, b.To, a.Center, a.Radius, into); break;
+            case (ArcSegment a, ArcSegment b): CircleCircle(a.Center, a.Radius, b.Center, b.Radius, into); break;
+        }
+    }
+
+    private static bool OnSegment(Segment s, Vec2 p)
+    {
+        const double eps = ClosureToleranceMm;
+        if (s is LineSegment l)
+        {
+            Vec2 d = l.To - l.From;
+            double len = d.Length;
+            double t = (p - l.From).Dot(d) / len;
+            return t >= -eps && t <= len + eps && Math.Abs((p - l.From).Cross(d) / len) <= eps;
+        }
+        var a = (ArcSegment)s;
+        if (Math.Abs((p - a.Center).Length - a.Radius) > eps) return false;
+        double rel = Angle.Normalize360(Math.Sign(a.SweepDeg) * (AngleDeg(p - a.Center) - a.StartDeg));
+        double tolDeg = eps / a.Radius * 180.0 / Math.PI;
+        return rel <= Math.Abs(a.SweepDeg) + tolDeg || rel >= 360 - tolDeg;
     }
 
     private static bool IsNegligible(Segment s) => s switch

@@ -122,6 +122,41 @@ public class ContourOffsetTests
         Assert.Equal(d, arc.Radius, 12);
     }
 
+    [Theory]
+    [InlineData(2000)]
+    [InlineData(20000)]
+    public void FinelyPolygonisedCircleOffsetsExactly(int n)
+    {
+        // Regular n-gon of circumradius R. Outward: Steiner's formula A + P d + pi d^2 (every corner rounded,
+        // the corner arcs sum to a full turn). Inward: the n-gon with its inradius reduced by d, A (1 - d / r)^2.
+        double bigR = 50, d = 0.075;
+        var pts = Enumerable.Range(0, n).Select(i => Vec2.FromAngleDeg(360.0 * i / n) * bigR).ToArray();
+        var poly = Contour.Polygon(pts);
+        double a = ContourOffset.SignedArea(poly), p = Perimeter(poly), rIn = bigR * Math.Cos(Math.PI / n);
+        double tol = 1e-7 * a;
+        Assert.Equal(a + p * d + Math.PI * d * d, ContourOffset.SignedArea(ContourOffset.Offset(poly, d)), tol);
+        Assert.Equal(a * Math.Pow(1 - d / rIn, 2), ContourOffset.SignedArea(ContourOffset.Offset(poly, -d)), tol);
+    }
+
+    [Fact]
+    public void NarrowNeckIsAClearError()
+    {
+        // A keyhole notch cut into a 40 x 30 plate from the top: a neck 0.1 mm wide and 6 mm long opening into
+        // a 6 x 6 pocket. Growing by 0.075 mm makes the neck walls run into each other (0.1 < 2 x 0.075), while
+        // every piece on its own survives: only the pairwise test can see it.
+        var pts = new[]
+        {
+            new Vec2(0, 0), new Vec2(40, 0), new Vec2(40, 30), new Vec2(20.05, 30), new Vec2(20.05, 24), new Vec2(23, 24),
+            new Vec2(23, 18), new Vec2(17, 18), new Vec2(17, 24), new Vec2(19.95, 24), new Vec2(19.95, 30), new Vec2(0, 30),
+        };
+        var keyhole = Contour.Polygon(pts);
+        var ex = Assert.Throws<ArgumentException>(() => ContourOffset.Offset(keyhole, 0.075));
+        Assert.Contains("narrower", ex.Message);
+        // A wider neck is fine, and the same neck survives an inward offset (the walls move apart).
+        ContourOffset.Offset(keyhole, 0.04);
+        ContourOffset.Offset(keyhole, -0.075);
+    }
+
     [Fact]
     public void OpenContourIsRejected()
     {
