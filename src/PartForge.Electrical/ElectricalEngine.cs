@@ -1,0 +1,366 @@
+using System.Globalization;
+using System.Numerics;
+using PartForge.Design.Stack;
+using PartForge.Electrical.Coils;
+using PartForge.Electrical.Field;
+using PartForge.Electrical.Flux;
+using PartForge.Electrical.Operation;
+using PartForge.Electrical.Sensors;
+using PartForge.Electrical.Wire;
+using PartForge.Electrical.Winding;
+
+namespace PartForge.Electrical;
+
+/// <summary>
+/// The electrical engine: from magnets, coils and wire to flux linkage, back-EMF, resistance, winding layout,
+/// sensor angles and operating points. Pure and deterministic; never throws on a loadable design: problems
+/// come back as <see cref="ElectricalResult.Diagnostics"/>.
+///
+/// EMF: coil k at angle psi_k links lambda_0(theta - psi_k); phase X links Sum_k d_k lambda_0(theta - psi_k)
+/// over its coils with their directions d_k (from the winding table), so each harmonic n of the phase is
+/// C_n S_X,n with S_X,n = Sum_k d_k exp(-i n p psi_k); e = d lambda / dt at the speed (rotor counter-clockwise).
+/// The winding factor is not applied again: the coil's own pitch effect is inside the integrated flux.
+/// </summary>
+public static class ElectricalEngine
+{
+    /// <summary>Evaluates a design with the default quadrature.</summary>
+    public static ElectricalResult Evaluate(PartForge.Design.Model.Design d) => Evaluate(d, FluxQuadrature.Default);
+
+    /// <summary>Evaluates a design with the given quadrature (tests use <see cref="FluxQuadrature.Fine"/> to check convergence).</summary>
+    public static ElectricalResult Evaluate(PartForge.Design.Model.Design d, FluxQuadrature q)
+    {
+        var diags = new List<Diagnostic>();
+        try
+        {
+            return Core(d, q, diags);
+        }
+        catch (ArgumentException ex)
+        {
+            // A value outside what a kernel primitive accepts (e.g. a zero radius): report it, do not crash.
+            diags.Add(new Diagnostic("electrical-unsupported", DiagnosticSeverity.Error, "coils",
+                "the electrical model could not be built from these values (" + ex.Message + "); check coils and magnets sizes."));
+            return Empty(d, diags, WindingLayout.For(d.Machine.Coils, d.Machine.Poles, d.Machine.Phases), 0, null, null);
+        }
+    }
+
+    private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
+
+    private static ElectricalResult Core(PartForge.Design.Model.Design d, FluxQuadrature q, List<Diagnostic> diags)
+    {
+        var m = d.Machine;
+        int poles = m.Poles, coils = m.Coils, phases = m.Phases;
+        string conn = m.Connection ?? (phases == 3 ? "star" : "series");
+        if (phases == 3 && conn is not ("star" or "delta"))
+            diags.Add(new Diagnostic("connection-invalid", DiagnosticSeverity.Error, "machine.connection", $"machine.connection '{conn}' does not apply to 3 phases; use star or delta."));
+        if (phases == 1 && conn is not ("series" or "parallel"))
+            diags.Add(new Diagnostic("connection-invalid", DiagnosticSeverity.Error, "machine.connection", $"machine.connection '{conn}' does not apply to 1 phase; use series or parallel."));
+
+        var layout = WindingLayout.For(coils, poles, phases);
+        if (!layout.IsValid)
+            diags.Add(new Diagnostic("winding-invalid", DiagnosticSeverity.Error, "machine.coils", layout.Reason!));
+
+        var stack = AxialStack.From(d);
+        double gap = stack.MagneticGapMm;
+        if (!(gap > 0))
+            diags.Add(new Diagnostic("magnetic-gap", DiagnosticSeverity.Error, "gap.air_gap",
+                string.Format(Inv, "the magnet faces reach the copper (magnetic gap {0:0.###} mm); raise gap.air_gap or former.flange.", gap)));
+
+        double? br = MagnetGrades.FromDesign(d.Magnets, diags);
+        var mg = MagnetGeometry.FromDesign(d, diags);
+        var wire = WireSpec.FromDesign(d.Coils, diags);
+        var spec = wire is null ? null : CoilSpec.FromDesign(d, mg, wire, diags);
+        if (!(m.RatedRpm > 0))
+            diags.Add(new Diagnostic("rated-rpm", DiagnosticSeverity.Error, "machine.rated_rpm", "machine.rated_rpm must be positive."));
+
+        bool fieldOk = br is not null && mg is not null && gap > 0 && layout.IsValid && poles >= 2 && poles % 2 == 0 && m.RatedRpm > 0
+                       && !diags.Any(x => x.Severity == DiagnosticSeverity.Error && x.Id.StartsWith("magnet", StringComparison.Ordinal));
+        RotorField? field = fieldOk ? RotorField.FromDesign(d, mg!, br!.Value, stack, diags, q.FarFactor) : null;
+
+        if (spec is null) return Empty(d, diags, layout, gap, br, mg, field);
+
+        int p = Math.Max(1, poles / 2);
+        int statorFactor = m.Layout == "dual-stator" ? 2 : 1;
+        bool parallel = phases == 1 && conn == "parallel";
+        int inSeries = (phases == 3 ? coils / 3 : parallel ? 1 : coils) * statorFactor;
+        int paths = parallel ? coils : 1;
+        double mult = statorFactor * (parallel ? 1.0 / coils : 1.0);
+
+        // Turns.
+        int turns;
+        bool solved = false;
+        if (d.Coils.Turns is { } nGiven && nGiven >= 1) turns = nGiven;
+        else if (d.Coils.TargetEmf is { } target)
+        {
+            if (field is null || !layout.IsValid)
+            {
+                diags.Add(new Diagnostic("target-emf-unsolvable", DiagnosticSeverity.Error, "coils.target_emf",
+                    "coils.target_emf cannot be solved while the magnets, gap or winding have errors; fix those or give coils.turns."));
+                return Empty(d, diags, layout, gap, br, mg, field);
+            }
+            turns = SolveTurns(spec, field, layout, q, mult, target, diags);
+            solved = true;
+        }
+        else
+        {
+            diags.Add(new Diagnostic("coil-turns-missing", DiagnosticSeverity.Error, "coils.turns", "give coils.turns, or coils.target_emf to have the turns solved."));
+            return Empty(d, diags, layout, gap, br, mg, field);
+        }
+
+        var coil = spec.Wind(turns);
+        CheckCoil(coil, spec, diags);
+        var coilResult = MakeCoilResult(coil, spec, solved);
+
+        double ohmPh20 = parallel ? coil.Resistance20COhm / coils * statorFactor : coil.Resistance20COhm * inSeries;
+        double ohmPhHot = parallel ? coil.ResistanceHotOhm / coils * statorFactor : coil.ResistanceHotOhm * inSeries;
+        double lPh = parallel ? coil.InductanceUh / coils * statorFactor : coil.InductanceUh * inSeries;
+
+        if (field is null || !layout.IsValid)
+        {
+            var e = Empty(d, diags, layout, gap, br, mg, field);
+            return e with
+            {
+                Coil = coilResult,
+                Phase = new PhaseResult
+                {
+                    Connection = conn, CoilsInSeries = inSeries, ParallelPaths = paths, EmfPeakV = 0, EmfRmsV = 0, EmfFundamentalRmsV = 0,
+                    Resistance20COhm = ohmPh20, ResistanceHotOhm = ohmPhHot, InductanceUh = lPh, ThdPercent = 0,
+                },
+            };
+        }
+
+        var series = CoilFlux.Compute(field, coil.Outline, turns, q);
+        double w = 2 * Math.PI * m.RatedRpm / 60;
+        var phaseNames = phases == 3 ? new[] { 'A', 'B', 'C' } : new[] { 'A' };
+        var k = phaseNames.Select(x => PhaseHarmonics(series, layout, x, mult)).ToArray(); // per rad/s
+        Complex[] line = LineHarmonics(k, series.Orders, phases, conn);
+        Complex[] coilK = series.Orders.Select((n, i) => Complex.ImaginaryOne * n * p * series.CoefficientsWb[i]).ToArray();
+
+        double phaseRms = w * Rms(k[0]);
+        double phaseFund = w * k[0][0].Magnitude / Math.Sqrt(2);
+        double lineRmsPerW = Rms(line);
+        double lineRms = w * lineRmsPerW;
+        double linePeakPerW = Peak(line, series.Orders);
+        double phasePeak = w * Peak(k[0], series.Orders);
+        double coilRms = w * Rms(coilK);
+
+        var harmonics = series.Orders.Select((n, i) => new Harmonic(n, w * k[0][i].Magnitude,
+            k[0][0].Magnitude > 0 ? 100 * k[0][i].Magnitude / k[0][0].Magnitude : 0)).ToArray();
+        double thd = k[0][0].Magnitude > 0
+            ? 100 * Math.Sqrt(k[0].Skip(1).Sum(c => c.Magnitude * c.Magnitude)) / k[0][0].Magnitude : 0;
+
+        double ke = lineRmsPerW * 2 * Math.PI * 1000 / 60;
+        double kt = phases == 3 ? Math.Sqrt(3) * line[0].Magnitude / Math.Sqrt(2) : k[0][0].Magnitude / Math.Sqrt(2);
+        double wMax = 2 * Math.PI * m.MaxRpm / 60;
+        double lineRmsMax = lineRmsPerW * wMax, linePeakMax = linePeakPerW * wMax;
+        if (lineRmsMax > 50)
+            diags.Add(new Diagnostic("emf-above-elv-ac", DiagnosticSeverity.Warning, "machine.max_rpm",
+                string.Format(Inv, "at machine.max_rpm the line EMF reaches {0:0.#} V rms, above the 50 V AC extra-low-voltage limit (IEC 61140): treat the output as hazardous, insulate and enclose it, and follow local electrical codes; or lower machine.max_rpm or coils.turns.", lineRmsMax)));
+        if (linePeakMax > 120)
+            diags.Add(new Diagnostic("emf-above-elv-dc", DiagnosticSeverity.Warning, "machine.max_rpm",
+                string.Format(Inv, "at machine.max_rpm the rectified output can reach {0:0.#} V DC, above the 120 V ripple-free DC extra-low-voltage limit (IEC 61140): follow local electrical codes and licensed practice; or lower machine.max_rpm or coils.turns.", linePeakMax)));
+
+        // Waveforms.
+        int M = q.SamplesPerPeriod;
+        var thE = Enumerable.Range(0, M).Select(i => 360.0 * i / M).ToArray();
+        var thM = thE.Select(t => t / p).ToArray();
+        double[] Wave(Complex[] kk, double scale) => HarmonicSynth.Sample(kk, series.Orders, M).Select(v => v * scale).ToArray();
+        var waves = new Waveforms
+        {
+            ThetaElecDeg = thE,
+            ThetaMechDeg = thM,
+            CoilFluxLinkageWb = thM.Select(t => series.At(t * Math.PI / 180)).ToArray(),
+            CoilEmfV = Wave(coilK, w),
+            PhaseEmfV = k.Select(kk => (IReadOnlyList<double>)Wave(kk, w)).ToArray(),
+            LineEmfV = Wave(line, w),
+        };
+
+        // Sensor timing: the positive-going zero crossing of each phase's fundamental EMF: p theta + arg K = -90.
+        var zeroCross = k.Select(kk => Norm(-90 - kk[0].Phase * 180 / Math.PI)).ToArray();
+        var sensors = SensorPlanner.Plan(d.Sensor, poles, phases, coil.Outline, coils, zeroCross, diags);
+
+        // Operating points (hot winding).
+        var op = d.Operation;
+        GeneratorPoint gen;
+        MotorPoint mot;
+        int fine = 720;
+        if (phases == 3)
+        {
+            double ry = conn == "star" ? ohmPhHot : ohmPhHot / 3, ly = conn == "star" ? lPh : lPh / 3;
+            gen = OperatingPoints.Generator(3, lineRms / Math.Sqrt(3), ry, ly, op.LoadResistance, m.RatedRpm, p,
+                conn == "star" ? 1 : 1 / Math.Sqrt(3), wire!.CopperAreaMm2);
+            Complex[][] pairs = conn == "star"
+                ? new[] { Sub(k[0], k[1]), Sub(k[1], k[2]), Sub(k[2], k[0]) }
+                : new[] { NoTriplen(k[0], series.Orders), NoTriplen(k[1], series.Orders), NoTriplen(k[2], series.Orders) };
+            var pw = pairs.Select(pp => HarmonicSynth.Sample(pp, series.Orders, fine)).ToArray();
+            var kc = new double[fine];
+            for (int i = 0; i < fine; i++) kc[i] = Math.Max(Math.Abs(pw[0][i]), Math.Max(Math.Abs(pw[1][i]), Math.Abs(pw[2][i])));
+            mot = OperatingPoints.Motor("six-step", op.SupplyVoltage, 2 * op.SwitchDrop, conn == "star" ? 2 * ohmPhHot : 2 * ohmPhHot / 3,
+                kc, Enumerable.Repeat(true, fine).ToArray(), m.RatedRpm, conn == "star" ? 1 : 2.0 / 3, wire.CopperAreaMm2);
+        }
+        else
+        {
+            double ratio = parallel ? 1.0 / coils : 1;
+            gen = OperatingPoints.Generator(1, phaseRms, ohmPhHot, lPh, op.LoadResistance, m.RatedRpm, p, ratio, wire!.CopperAreaMm2);
+            double on = zeroCross[0] - d.Sensor.AdvanceElec;
+            var kc = HarmonicSynth.Sample(k[0], series.Orders, fine);
+            var cond = new bool[fine];
+            for (int i = 0; i < fine; i++) cond[i] = Norm(360.0 * i / fine - on) < 180;
+            mot = OperatingPoints.Motor("pulse", op.SupplyVoltage, op.SwitchDrop, ohmPhHot, kc, cond, m.RatedRpm, ratio, wire.CopperAreaMm2);
+        }
+
+        double peakLink = series.PeakWb();
+        return new ElectricalResult
+        {
+            PolePairs = p,
+            RatedRpm = m.RatedRpm,
+            ElectricalHz = p * m.RatedRpm / 60,
+            MagneticGapMm = gap,
+            WindingFactor = layout.WindingFactor,
+            Magnet = new MagnetResult { BrTesla = br!.Value, BrSource = d.Magnets.Br is null ? d.Magnets.Grade : "br", Geometry = mg, BackIronImageModel = field.HasBackIron },
+            Coil = coilResult,
+            CoilFluxLinkagePeakWb = peakLink,
+            FluxPerTurnPeakWb = peakLink / turns,
+            CoilEmfRmsV = coilRms,
+            Phase = new PhaseResult
+            {
+                Connection = conn, CoilsInSeries = inSeries, ParallelPaths = paths, EmfPeakV = phasePeak, EmfRmsV = phaseRms,
+                EmfFundamentalRmsV = phaseFund, Resistance20COhm = ohmPh20, ResistanceHotOhm = ohmPhHot, InductanceUh = lPh, ThdPercent = thd,
+            },
+            LineEmfRmsV = lineRms,
+            LineEmfPeakV = linePeakPerW * w,
+            KeVPerKrpm = ke,
+            KtNmPerA = kt,
+            LineEmfRmsAtMaxRpmV = lineRmsMax,
+            LineEmfPeakAtMaxRpmV = linePeakMax,
+            Harmonics = harmonics,
+            FluxLinkage = series,
+            Winding = layout,
+            Sensors = sensors,
+            Generator = gen,
+            Motor = mot,
+            Waveforms = waves,
+            Diagnostics = diags,
+        };
+    }
+
+    private static int SolveTurns(CoilSpec spec, RotorField field, WindingLayout layout, FluxQuadrature q, double mult,
+        PartForge.Design.Model.TargetEmf target, List<Diagnostic> diags)
+    {
+        double w = 2 * Math.PI * target.Rpm / 60;
+        double Emf(int n)
+        {
+            var s = CoilFlux.Compute(field, spec.Wind(n).Outline, n, q);
+            return w * Rms(PhaseHarmonics(s, layout, 'A', mult));
+        }
+        int nCur = 1;
+        double e1 = Emf(1);
+        if (!(e1 > 0))
+        {
+            diags.Add(new Diagnostic("target-emf-unsolvable", DiagnosticSeverity.Error, "coils.target_emf", "the coil links no flux, so no number of turns reaches coils.target_emf; check the magnets and the coil position."));
+            return 1;
+        }
+        nCur = (int)Math.Clamp(Math.Round(target.Rms / e1), 1, 100000);
+        var seen = new HashSet<int>();
+        int best = nCur;
+        double bestErr = double.MaxValue;
+        for (int it = 0; it < 30 && seen.Add(nCur); it++)
+        {
+            double e = Emf(nCur);
+            double err = Math.Abs(e - target.Rms);
+            if (err < bestErr) { bestErr = err; best = nCur; }
+            if (!(e > 0)) break;
+            int next = (int)Math.Clamp(Math.Round(nCur * target.Rms / e), 1, 100000);
+            if (next == nCur) break;
+            nCur = next;
+        }
+        if (best >= 100000)
+            diags.Add(new Diagnostic("target-emf-unreachable", DiagnosticSeverity.Error, "coils.target_emf", "coils.target_emf needs more than 100000 turns; lower the target or raise the speed."));
+        return best;
+    }
+
+    private static void CheckCoil(CoilWinding coil, CoilSpec spec, List<Diagnostic> diags)
+    {
+        if (coil.NeighbourGapMm is { } g && g < 0)
+        {
+            int? nMax = MaxTurns(spec);
+            diags.Add(new Diagnostic("coil-overlap", DiagnosticSeverity.Error, "coils.turns",
+                string.Format(Inv, "the coils overlap their neighbours by {0:0.###} mm: {1} turns need a {2:0.###} mm build; lower coils.turns to {3} or fewer, use thinner wire, or raise coils.pitch_radius.",
+                    -g, coil.Turns, coil.Outline.RadialBuildMm, nMax is { } nm ? nm.ToString(Inv) : "fewer")));
+        }
+        if (coil.Outline.OuterMinRadiusMm <= 0)
+            diags.Add(new Diagnostic("coil-crosses-axis", DiagnosticSeverity.Error, "coils.turns",
+                "the winding reaches the machine axis; lower coils.turns or raise coils.pitch_radius."));
+    }
+
+    private static int? MaxTurns(CoilSpec spec)
+    {
+        if (spec.MaxBuildMm() is not { } b) return null;
+        return (int)Math.Floor(Math.Max(0, b) * spec.FillFactor * spec.HeightMm / spec.Wire.CopperAreaMm2);
+    }
+
+    private static CoilResult MakeCoilResult(CoilWinding c, CoilSpec spec, bool solved)
+    {
+        int? awg = null;
+        if (solved && spec.MaxBuildMm() is { } b && b > 0)
+        {
+            double dMax = Math.Sqrt(b * spec.FillFactor * spec.HeightMm * 4 / (Math.PI * c.Turns));
+            awg = WireGauge.ThickestAwgWithin(dMax);
+        }
+        var o = c.Outline;
+        return new CoilResult
+        {
+            Shape = o.Shape, Turns = c.Turns, TurnsSolved = solved, WireAwg = c.Wire.Awg, WireBareMm = c.Wire.BareDiameterMm,
+            WireOverallMm = c.Wire.OverallDiameterMm, WireOverallIsApproximate = c.Wire.OverallIsApproximate, WireOhmPerM20C = c.Wire.OhmPerMetre20,
+            FillFactor = c.FillFactor, InnerDiameterMm = o.InnerDiameterMm, OuterDiameterMm = o.OuterDiameterMm, HeightMm = o.HeightMm,
+            PitchRadiusMm = o.PitchRadiusMm, RadialBuildMm = o.RadialBuildMm, MeanTurnMm = c.MeanTurnMm, LeadAllowanceMm = c.LeadAllowanceMm,
+            WireLengthM = c.WireLengthM, Resistance20COhm = c.Resistance20COhm, ResistanceHotOhm = c.ResistanceHotOhm, MaxTemperatureC = c.MaxTemperatureC,
+            InductanceUh = c.InductanceUh, InductanceIsApproximate = c.InductanceIsApproximate, CopperMassG = c.CopperMassG,
+            NeighbourGapMm = c.NeighbourGapMm, MaxTurnsForNeighbourGap = MaxTurns(spec), ThickestFittingAwg = awg, Outline = o,
+        };
+    }
+
+    private static ElectricalResult Empty(PartForge.Design.Model.Design d, List<Diagnostic> diags, WindingLayout layout, double gap, double? br, MagnetGeometry? mg, RotorField? field = null)
+    {
+        int p = Math.Max(0, d.Machine.Poles / 2);
+        return new ElectricalResult
+        {
+            PolePairs = p, RatedRpm = d.Machine.RatedRpm, ElectricalHz = p * d.Machine.RatedRpm / 60,
+            MagneticGapMm = double.IsFinite(gap) ? gap : 0, WindingFactor = layout.IsValid ? layout.WindingFactor : 0,
+            Magnet = new MagnetResult { BrTesla = br ?? 0, BrSource = d.Magnets.Br is null ? d.Magnets.Grade : "br", Geometry = mg, BackIronImageModel = field?.HasBackIron ?? false },
+            CoilFluxLinkagePeakWb = 0, FluxPerTurnPeakWb = 0, CoilEmfRmsV = 0, LineEmfRmsV = 0, LineEmfPeakV = 0, KeVPerKrpm = 0, KtNmPerA = 0,
+            LineEmfRmsAtMaxRpmV = 0, LineEmfPeakAtMaxRpmV = 0, Harmonics = Array.Empty<Harmonic>(), Winding = layout, Diagnostics = diags,
+        };
+    }
+
+    /// <summary>Phase harmonics per unit shaft speed (V per rad/s): K_n = i n p C_n S_n x mult.</summary>
+    private static Complex[] PhaseHarmonics(FluxLinkageSeries s, WindingLayout layout, char phase, double mult)
+    {
+        var r = new Complex[s.Orders.Count];
+        for (int i = 0; i < r.Length; i++)
+        {
+            int n = s.Orders[i];
+            r[i] = Complex.ImaginaryOne * n * s.PolePairs * s.CoefficientsWb[i] * layout.PhaseSum(phase, n) * mult;
+        }
+        return r;
+    }
+
+    private static Complex[] LineHarmonics(Complex[][] k, IReadOnlyList<int> orders, int phases, string conn)
+    {
+        if (phases != 3) return k[0];
+        return conn == "star" ? Sub(k[0], k[1]) : NoTriplen(k[0], orders);
+    }
+
+    private static Complex[] Sub(Complex[] a, Complex[] b) => a.Select((x, i) => x - b[i]).ToArray();
+
+    private static Complex[] NoTriplen(Complex[] a, IReadOnlyList<int> orders) => a.Select((x, i) => orders[i] % 3 == 0 ? Complex.Zero : x).ToArray();
+
+    private static double Rms(Complex[] k) => Math.Sqrt(k.Sum(c => c.Magnitude * c.Magnitude) / 2);
+
+    private static double Peak(Complex[] k, IReadOnlyList<int> orders) => HarmonicSynth.Peak(k, orders);
+
+    private static double Norm(double deg)
+    {
+        double x = deg % 360;
+        return x < 0 ? x + 360 : x;
+    }
+}

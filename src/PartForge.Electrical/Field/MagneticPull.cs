@@ -1,0 +1,173 @@
+using PartForge.Design.Stack;
+using PartForge.Electrical.Flux;
+
+namespace PartForge.Electrical.Field;
+
+/// <summary>
+/// Axial forces between magnets from the surface-charge model, exact for uniformly magnetised bodies with
+/// mu_r = 1: the force on an axially magnetised prism is F_z = (Br/mu0) [flux of the other bodies' Bz through
+/// its top face - through its bottom face], each flux integrated by composite Gauss-Legendre quadrature graded
+/// towards the face edges (where the field of a close neighbour varies fastest). Back iron by the image
+/// method (ideal iron; first-order images only when there are two irons) — an approximation.
+/// </summary>
+public static class MagneticPull
+{
+    /// <summary>Vacuum permeability, H/m.</summary>
+    public const double Mu0 = 4e-7 * Math.PI;
+
+    /// <summary>The simple estimate F = B^2 A / (2 mu0), N, for a flux density in tesla over an area in mm^2.</summary>
+    public static double SimpleEstimateN(double bTesla, double areaMm2) => bTesla * bTesla * areaMm2 * 1e-6 / (2 * Mu0);
+
+    /// <summary>
+    /// Axial force on <paramref name="target"/> from the field of <paramref name="sources"/>, N (positive: +z).
+    /// <paramref name="gapMm"/> is the smallest axial distance between the target's faces and the sources, used
+    /// to grade the face quadrature towards the edges.
+    /// </summary>
+    public static double AxialForceN(MagnetSource target, IReadOnlyList<MagnetSource> sources, double gapMm, int order = 6)
+    {
+        var (pts, wts) = FacePoints(target.Geometry, target.CentreDeg, gapMm, order);
+        double top = 0, bottom = 0;
+        for (int i = 0; i < pts.Length; i++)
+        {
+            var (x, y) = pts[i];
+            double bt = 0, bb = 0;
+            for (int s = 0; s < sources.Count; s++)
+            {
+                bt += sources[s].Bz(x, y, target.ZMaxMm);
+                bb += sources[s].Bz(x, y, target.ZMinMm);
+            }
+            top += wts[i] * bt;
+            bottom += wts[i] * bb;
+        }
+        return target.SignedBrTesla / Mu0 * (top - bottom) * 1e-6;
+    }
+
+    /// <summary>The forces of a design (see <see cref="MagneticPullResult"/>); null when the magnets or layout cannot be resolved.</summary>
+    public static MagneticPullResult? Compute(PartForge.Design.Model.Design d)
+    {
+        var diags = new List<Diagnostic>();
+        var g = MagnetGeometry.FromDesign(d, diags);
+        var br = MagnetGrades.FromDesign(d.Magnets, diags);
+        if (g is null || br is null || diags.Any(x => x.Severity == DiagnosticSeverity.Error) || d.Machine.Poles < 2) return null;
+        var stack = AxialStack.From(d);
+        int poles = d.Machine.Poles;
+        double far = RotorField.DefaultFarFactor;
+        var mags = stack.Slabs.Where(s => s.Kind == SlabKind.Magnet).OrderByDescending(s => s.ZMax).ToList();
+        var irons = stack.Slabs.Where(s => s.Kind == SlabKind.BackIron).OrderByDescending(s => s.ZMax).ToList();
+        bool iron = d.Rotor.BackIron is not null && d.Machine.Layout != "dual-stator" && irons.Count > 0;
+        List<MagnetSource> Ring(AxialSlab m) => Enumerable.Range(0, poles)
+            .Select(k => new MagnetSource(g, k * 360.0 / poles, m.ZMin, m.ZMax, (k % 2 == 0 ? 1 : -1) * br.Value, far)).ToList();
+        var front = Ring(mags[0]);
+        var target = front[0];
+        double frontIronPlane = iron ? irons[0].ZMin : 0;
+
+        double toIron = 0;
+        if (iron)
+        {
+            var imgs = front.Select(m => m.ImageIn(frontIronPlane, far)).ToList();
+            double gap = 2 * (frontIronPlane - target.ZMaxMm);
+            toIron = Math.Abs(AxialForceN(target, imgs, Math.Max(gap, 0), 8));
+        }
+
+        double perMagnet = 0, faceToFace = 0;
+        if (d.Machine.Layout == "dual-rotor" && mags.Count == 2)
+        {
+            var back = Ring(mags[1]);
+            var src = new List<MagnetSource>(back);
+            faceToFace = target.ZMinMm - back[0].ZMaxMm;
+            double pull = AxialForceN(target, src, faceToFace);
+            if (iron)
+            {
+                double backPlane = irons[^1].ZMax;
+                var backImgs = back.Select(m => m.ImageIn(backPlane, far)).ToList();
+                var ownImgs = front.Select(m => m.ImageIn(backPlane, far)).ToList();
+                pull += AxialForceN(target, backImgs, faceToFace);
+                // The magnets' pull on the opposite rotor's iron counts twice: on this rotor's magnets (here) and,
+                // by the mirror symmetry, the back magnets' pull on this rotor's iron.
+                pull += 2 * AxialForceN(target, ownImgs, faceToFace);
+            }
+            perMagnet = Math.Abs(pull);
+        }
+        return new MagneticPullResult
+        {
+            MagnetToBackIronN = toIron,
+            RotorToRotorPerMagnetN = perMagnet,
+            RotorToRotorN = perMagnet * poles,
+            FaceToFaceMm = faceToFace,
+            Method = iron
+                ? "surface-charge force between uniformly magnetised magnets; back iron by first-order images (ideal unsaturated iron, an approximation)."
+                : "surface-charge force between uniformly magnetised magnets (mu_r = 1, no iron).",
+        };
+    }
+
+    /// <summary>Quadrature points (rotor frame) and weights (mm^2) over a magnet's pole face.</summary>
+    public static ((double X, double Y)[] Points, double[] Weights) FacePoints(MagnetGeometry g, double centreDeg, double gapMm, int order)
+    {
+        double c = Math.Cos(centreDeg * Math.PI / 180), s = Math.Sin(centreDeg * Math.PI / 180);
+        var pts = new List<(double, double)>();
+        var wts = new List<double>();
+        void Add(double u, double v, double w)
+        {
+            pts.Add((u * c - v * s, u * s + v * c));
+            wts.Add(w);
+        }
+        switch (g.Shape)
+        {
+            case MagnetShape.Block:
+            {
+                var (xu, wu) = GaussLegendre.Composite(Graded(g.PitchRadiusMm - g.LengthMm / 2, g.PitchRadiusMm + g.LengthMm / 2, gapMm, true, true), order, false);
+                var (xv, wv) = GaussLegendre.Composite(Graded(-g.WidthMm / 2, g.WidthMm / 2, gapMm, true, true), order, false);
+                for (int i = 0; i < xu.Length; i++)
+                    for (int j = 0; j < xv.Length; j++) Add(xu[i], xv[j], wu[i] * wv[j]);
+                break;
+            }
+            case MagnetShape.Disc:
+            {
+                double a = g.DiameterMm / 2;
+                var (xr, wr) = GaussLegendre.Composite(Graded(0, a, gapMm, false, true), order, false);
+                int na = 48;
+                for (int i = 0; i < xr.Length; i++)
+                    for (int j = 0; j < na; j++)
+                    {
+                        double t = 2 * Math.PI * (j + 0.5) / na;
+                        Add(g.PitchRadiusMm + xr[i] * Math.Cos(t), xr[i] * Math.Sin(t), wr[i] * xr[i] * 2 * Math.PI / na);
+                    }
+                break;
+            }
+            default:
+            {
+                var (xr, wr) = GaussLegendre.Composite(Graded(g.InnerRadiusMm, g.OuterRadiusMm, gapMm, g.InnerRadiusMm > 0, true), order, false);
+                double half = g.SpanDeg * Math.PI / 360;
+                for (int i = 0; i < xr.Length; i++)
+                {
+                    double arcGap = gapMm / Math.Max(xr[i], 1e-9);
+                    var (xa, wa) = GaussLegendre.Composite(Graded(-half, half, arcGap, true, true), order, false);
+                    for (int j = 0; j < xa.Length; j++) Add(xr[i] * Math.Cos(xa[j]), xr[i] * Math.Sin(xa[j]), wr[i] * wa[j] * xr[i]);
+                }
+                break;
+            }
+        }
+        return (pts.ToArray(), wts.ToArray());
+    }
+
+    /// <summary>Breakpoints on [a, b] graded geometrically (ratio 2) towards the chosen ends, finest piece about gap/4.</summary>
+    private static List<double> Graded(double a, double b, double gapMm, bool atStart, bool atEnd)
+    {
+        double len = b - a;
+        double h = Math.Max(gapMm / 4, 1e-3 * len);
+        var offs = new List<double>();
+        for (double t = h; t < len / 2; t *= 2) offs.Add(t);
+        var pts = new SortedSet<double> { a, b, a + len / 2 };
+        foreach (var o in offs)
+        {
+            if (atStart) pts.Add(a + o);
+            if (atEnd) pts.Add(b - o);
+        }
+        if (!atStart || !atEnd)
+        {
+            // one-sided: also split the coarse side evenly so each piece stays short.
+            for (int i = 1; i < 4; i++) pts.Add(a + len * i / 4);
+        }
+        return pts.ToList();
+    }
+}

@@ -1,0 +1,42 @@
+namespace PartForge.Electrical.Flux;
+
+/// <summary>
+/// Flux linkage of coil 0 (centred on +x) against the mechanical rotor angle theta (rotor turning
+/// counter-clockwise seen from +z, magnet 0 over coil 0 at theta = 0), as a cosine series in the electrical
+/// angle: lambda(theta) = Sum_n C_n cos(n p theta), n odd (the rotor's alternating poles give half-wave
+/// symmetry; a coil centred on a symmetric pattern gives an even function).
+/// </summary>
+public sealed record FluxLinkageSeries
+{
+    /// <summary>Pole pairs p.</summary>
+    public required int PolePairs { get; init; }
+
+    /// <summary>Odd harmonic orders n (electrical), ascending.</summary>
+    public required IReadOnlyList<int> Orders { get; init; }
+
+    /// <summary>C_n, weber-turns, one per order.</summary>
+    public required IReadOnlyList<double> CoefficientsWb { get; init; }
+
+    /// <summary>lambda at a mechanical angle, Wb-turns.</summary>
+    public double At(double thetaMechRad)
+    {
+        double s = 0;
+        for (int i = 0; i < Orders.Count; i++) s += CoefficientsWb[i] * Math.Cos(Orders[i] * PolePairs * thetaMechRad);
+        return s;
+    }
+
+    /// <summary>d lambda / d theta (per mechanical radian), Wb-turns/rad.</summary>
+    public double Derivative(double thetaMechRad)
+    {
+        double s = 0;
+        for (int i = 0; i < Orders.Count; i++)
+        {
+            double k = Orders[i] * PolePairs;
+            s -= CoefficientsWb[i] * k * Math.Sin(k * thetaMechRad);
+        }
+        return s;
+    }
+
+    /// <summary>Largest |lambda| over one electrical period, Wb-turns (sampled, then refined; see HarmonicSynth.Peak).</summary>
+    public double PeakWb() => HarmonicSynth.Peak(CoefficientsWb.Select(c => new System.Numerics.Complex(c, 0)).ToArray(), Orders);
+}
