@@ -34,8 +34,16 @@ public sealed record PartModel
     /// <summary>The layered solid in part-local coordinates (z from 0 at the bottom face).</summary>
     public required LayeredSolid Solid { get; init; }
 
-    /// <summary>The solid's closed, outward-oriented triangle mesh (part-local).</summary>
-    public required Mesh Mesh { get; init; }
+    /// <summary>
+    /// The solid's closed, outward-oriented triangle mesh (part-local). Made on first use (thread-safe), so that
+    /// checking a design does not pay for meshing parts that are never written.
+    /// </summary>
+    public Mesh Mesh => (_mesh ?? throw new InvalidOperationException($"{Name}: no mesh source")).Value;
+
+    private Lazy<Mesh>? _mesh;
+
+    /// <summary>How the mesh is made (set by <see cref="PartsBuilder"/>).</summary>
+    internal Lazy<Mesh> MeshSource { init => _mesh = value; }
 
     /// <summary>For cut parts: the exact profile to cut (outer boundary and through holes); null for printed parts.</summary>
     public Profile? CutProfile { get; init; }

@@ -85,19 +85,35 @@ public static partial class PartsBuilder
     public static LayeredSolid SolidOf(IReadOnlyList<ExactLayer> layers, Precision precision, int symmetry = 1) =>
         new(layers.Select(l => new Layer(l.Z0Mm, l.Z1Mm, Region.FromProfile(new Profile(l.Outers, l.Cuts), precision, symmetry))));
 
+    private static Mesh MeshOf(string name, LayeredSolid solid, Precision precision)
+    {
+        try
+        {
+            return Mesher.Build(solid, precision);
+        }
+        catch (ArgumentException ex)
+        {
+            // Coordinates beyond what float32 output can hold: a design too large for the grid.
+            throw new PartsException($"{name}: the part cannot be meshed ({ex.Message})");
+        }
+        catch (InvalidOperationException ex)
+        {
+            throw new InvalidOperationException($"{name}: the mesher failed ({ex.Message})", ex);
+        }
+    }
+
     private static PartModel ToModel(PartSpec s, Precision precision, int symmetry, string layout)
     {
         LayeredSolid solid;
-        Mesh mesh;
         try
         {
             solid = SolidOf(s.Layers, precision, symmetry);
-            mesh = Mesher.Build(solid, precision);
         }
         catch (ArgumentException ex)
         {
             throw new PartsException($"{s.Name}: the solid cannot be made ({ex.Message})");
         }
+        var mesh = new Lazy<Mesh>(() => MeshOf(s.Name, solid, precision), LazyThreadSafetyMode.ExecutionAndPublication);
         bool rotating = s.Name.StartsWith("rotor", StringComparison.Ordinal) || s.Name == "back-iron"
             || (s.Name == "spacer" && layout == "dual-rotor");
         return new PartModel
@@ -108,7 +124,7 @@ public static partial class PartsBuilder
             HeightMm = s.HeightMm,
             ExactLayers = s.Layers,
             Solid = solid,
-            Mesh = mesh,
+            MeshSource = mesh,
             CutProfile = s.CutProfile,
             Marks = s.Marks,
             Features = s.Features,
