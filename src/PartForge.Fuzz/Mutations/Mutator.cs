@@ -87,7 +87,7 @@ public sealed class Mutator
         var baseSeed = _seeds[r.Next(_seeds.Count)];
         var y = new YamlLines(baseSeed.Text);
         var applied = new List<string>();
-        int count = r.NextDouble() switch { < 0.04 => 0, < 0.6 => 1, < 0.88 => 2, _ => 3 };
+        int count = r.NextDouble() switch { < 0.6 => 1, < 0.88 => 2, _ => 3 };
         for (int i = 0; i < count; i++)
         {
             var op = TextMutations[r.Next(TextMutations.Length)];
