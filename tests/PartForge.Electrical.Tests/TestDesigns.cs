@@ -68,3 +68,35 @@ public static class TestDesigns
         Sensor = new Sensor { Kind = "hall", Count = 3 },
     };
 }
+
+/// <summary>Copies of the (non-record) model sections with one change, for the tests.</summary>
+public static class Copy
+{
+    public static D With(D d, Machine? machine = null, Magnets? magnets = null, Rotor? rotor = null, M.Coils? coils = null,
+        Stator? stator = null, Sensor? sensor = null, Gap? gap = null, M.Operation? operation = null, Former? former = null) => new()
+    {
+        Name = d.Name, Machine = machine ?? d.Machine, Magnets = magnets ?? d.Magnets, Rotor = rotor ?? d.Rotor, Coils = coils ?? d.Coils,
+        Former = former ?? d.Former, Stator = stator ?? d.Stator, Sensor = sensor ?? d.Sensor, Gap = gap ?? d.Gap, Tolerances = d.Tolerances,
+        Process = d.Process, Mesh = d.Mesh, Operation = operation ?? d.Operation,
+    };
+
+    public static Machine Machine(Machine m, string? layout = null, int? poles = null, int? coils = null, int? phases = null, string? connection = null, double? rated = null, double? max = null) => new()
+    {
+        Layout = layout ?? m.Layout, Poles = poles ?? m.Poles, Coils = coils ?? m.Coils, Phases = phases ?? m.Phases,
+        Connection = connection ?? m.Connection, RatedRpm = rated ?? m.RatedRpm, MaxRpm = max ?? m.MaxRpm,
+    };
+
+    public static M.Coils Coils(M.Coils c, int? turns = null, bool clearTurns = false, TargetEmf? target = null, double? height = null, double? fill = null,
+        M.Wire? wire = null, string? shape = null, Core? core = null, string? enamel = null) => new()
+    {
+        Shape = shape ?? c.Shape, Wire = wire ?? c.Wire, Enamel = enamel ?? c.Enamel, Turns = clearTurns ? null : turns ?? c.Turns,
+        TargetEmf = target ?? c.TargetEmf, FillFactor = fill ?? c.FillFactor, Height = height ?? c.Height, PitchRadius = c.PitchRadius,
+        Core = core ?? c.Core, MaxTemperature = c.MaxTemperature,
+    };
+
+    public static Rotor Rotor(Rotor r, BackIron? backIron = null, bool clearIron = false) => new()
+    {
+        OuterDiameter = r.OuterDiameter, Thickness = r.Thickness, Bore = r.Bore, PocketClearance = r.PocketClearance, PocketFloor = r.PocketFloor,
+        BoltCircle = r.BoltCircle, BackIron = clearIron ? null : backIron ?? r.BackIron, Material = r.Material,
+    };
+}

@@ -54,7 +54,7 @@ public static class SensorPlanner
                 placed.Add(best!);
             }
             foreach (var s in placed.Where(s => !s.Fits))
-                diagnostics.Add(new Diagnostic("sensor-no-room", DiagnosticSeverity.Error, "sensor.body.width",
+                diagnostics.Add(new Diagnostic("sensor-no-room", DiagnosticSeverity.Warning, "sensor.body.width",
                     FormattableString.Invariant($"hall sensor {s.Label} at {s.AngleDeg:0.##} deg does not fit between the coils ({-s.ClearanceMm:0.###} mm short); use a narrower sensor body, fewer turns or a larger coils.pitch_radius.")));
             return new SensorLayout
             {
@@ -77,7 +77,7 @@ public static class SensorPlanner
             if (b1 is null || Better(cand, b1, 0)) b1 = cand;
         }
         if (!b1!.Fits)
-            diagnostics.Add(new Diagnostic("sensor-no-room", DiagnosticSeverity.Error, "sensor.body.width",
+            diagnostics.Add(new Diagnostic("sensor-no-room", DiagnosticSeverity.Warning, "sensor.body.width",
                 FormattableString.Invariant($"the timing sensor at {b1.AngleDeg:0.##} deg does not fit between the coils ({-b1.ClearanceMm:0.###} mm short); use a narrower sensor body, fewer turns or a larger coils.pitch_radius.")));
         return new SensorLayout
         {

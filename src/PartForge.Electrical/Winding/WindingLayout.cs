@@ -102,7 +102,7 @@ public sealed record WindingLayout
         var sc = tmp.PhaseSum('C', 1);
         int na = rows.Count(r => r.Phase == 'A'), nb = rows.Count(r => r.Phase == 'B'), nc = rows.Count(r => r.Phase == 'C');
         int t = Gcd(coils, p);
-        string rule = string.Format(inv, "{0} coils with {1} poles give no balanced 3-phase winding (coils / (3 x gcd(coils, pole pairs)) = {0}/{2} must be a whole number); choose e.g. 9 coils with 12 poles, 12 with 10 or 14, or 9 with 8 or 10.", coils, poles, 3 * t);
+        string rule = string.Format(inv, "machine.coils {0} with machine.poles {1} give no balanced 3-phase winding (coils / (3 x gcd(coils, pole pairs)) = {0}/{2} must be a whole number); choose e.g. 9 coils with 12 poles, 12 with 10 or 14, or 9 with 8 or 10.", coils, poles, 3 * t);
         if (na != coils / 3 || nb != coils / 3 || nc != coils / 3 || sa.Magnitude < 1e-9 * coils) return Bad(rule);
         double tol = 1e-6 * Math.Max(1, sa.Magnitude);
         // B lags A by 120: (phasor convention exp(-i n p psi)) sb = sa * exp(-i 120 deg)
