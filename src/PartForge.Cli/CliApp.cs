@@ -14,9 +14,12 @@ public static class CliApp
         var root = new RootCommand("PartForge: from the design of a small axial-flux machine to printable, checked parts.");
         root.Options.Add(GlobalOptions.Verbose);
         root.Options.Add(GlobalOptions.Quiet);
+        root.Subcommands.Add(CheckCommand.Create());
+        root.Subcommands.Add(BuildCommand.Create());
         root.Subcommands.Add(InitCommand.Create());
         root.Subcommands.Add(PresetsCommand.Create());
         root.Subcommands.Add(SchemaCommand.Create());
+        root.Subcommands.Add(SweepCommand.Create());
         root.SetAction(pr =>
         {
             CommandAction.Err.WriteLine("partforge: give a command: check, build, init, presets, schema (see partforge --help)");

@@ -72,7 +72,10 @@ public sealed record CoilSection
     public required double CopperMassG { get; init; }
 }
 
-/// <summary>Keystone coil outline: radial extent and tangential widths of the outer boundary, mm.</summary>
-public sealed record KeystoneOutline(double InnerRadius, double OuterRadius, double InnerWidth, double OuterWidth);
+/// <summary>
+/// Keystone coil outline, mm: radial extent of the winding's outer boundary, the inner window's width at the
+/// pitch radius (coils.core.width) and the winding's overall width there (window + 2 x radial build).
+/// </summary>
+public sealed record KeystoneOutline(double InnerRadius, double OuterRadius, double WindowWidth, double Width, double RadialBuild);
 
 public sealed record PhaseSection(int CoilsInSeries, double EmfPeakV, double EmfRmsV, double Resistance20cOhm);

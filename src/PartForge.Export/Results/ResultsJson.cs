@@ -87,8 +87,9 @@ public static class ResultsJson
             w.WriteStartObject("outline");
             Num(w, "inner_radius", o.InnerRadius, "coil.outline.inner_radius");
             Num(w, "outer_radius", o.OuterRadius, "coil.outline.outer_radius");
-            Num(w, "inner_width", o.InnerWidth, "coil.outline.inner_width");
-            Num(w, "outer_width", o.OuterWidth, "coil.outline.outer_width");
+            Num(w, "window_width", o.WindowWidth, "coil.outline.window_width");
+            Num(w, "width", o.Width, "coil.outline.width");
+            Num(w, "radial_build", o.RadialBuild, "coil.outline.radial_build");
             w.WriteEndObject();
         }
         Num(w, "height", c.Height, "coil.height");

@@ -1,0 +1,196 @@
+using PartForge.Checks;
+using PartForge.Design.Loading;
+using PartForge.Electrical;
+using PartForge.Export.Bom;
+using PartForge.Export.Report;
+using PartForge.Export.Results;
+using PartForge.Formats.Cutting;
+using PartForge.Formats.Dxf;
+using PartForge.Formats.Stl;
+using PartForge.Formats.Svg;
+using PartForge.Formats.ThreeMf;
+using PartForge.Geometry;
+using PartForge.Parts;
+
+namespace PartForge.Export.Pipeline;
+
+/// <summary>
+/// The whole job: load -> electrical -> parts -> checks -> gate -> export. The gate: if any check fails,
+/// nothing is written (unless forced, and then the results and report say so). Outputs go only into the
+/// output folder, each through an atomic write, in a fixed order, so two builds give identical files.
+/// </summary>
+public static class BuildPipeline
+{
+    /// <summary>Electrical results, parts and checks of a loaded design (no files). Thread-safe; used by sweeps.</summary>
+    public static Evaluation Evaluate(Design.Model.Design design, CheckOptions? options = null)
+    {
+        var electrical = ElectricalEngine.Evaluate(design);
+        if (electrical.Coil?.Outline == null)
+        {
+            // Without a resolved coil there is nothing to build or measure: the electrical errors are the checks.
+            var fails = electrical.Diagnostics.Where(x => x.Severity == Electrical.DiagnosticSeverity.Error).Select(x => new CheckResult
+            {
+                Id = x.Id, Part = "former", Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0,
+                Message = x.Key.Length > 0 ? $"{x.Key}: {x.Message}" : x.Message,
+            }).ToList();
+            if (fails.Count == 0)
+                fails.Add(new CheckResult
+                {
+                    Id = "coil-unresolved", Part = "former", Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0,
+                    Message = "the coil could not be resolved from the coils section, so no parts can be made",
+                });
+            return new Evaluation(design, electrical, null, new CheckReport(fails));
+        }
+        var parts = PartsBuilder.Build(design, electrical, Precision.FromChordalTolerance(design.Mesh.ChordalTolerance));
+        var checks = CheckRunner.Run(design, electrical, parts, options);
+        return new Evaluation(design, electrical, parts, checks);
+    }
+
+    /// <summary><c>partforge check</c>: load, evaluate, results document; writes nothing.</summary>
+    public static PipelineResult Check(string designPath)
+    {
+        var loaded = DesignLoader.Load(designPath);
+        if (!loaded.Success) return Bad(loaded.Errors.Select(e => e.ToString()));
+        var (ev, problem) = TryEvaluate(loaded.Design!, designPath);
+        if (ev == null) return Bad([problem!]);
+        var doc = ResultsBuilder.Build(ev);
+        return new PipelineResult
+        {
+            Status = ev.Checks.HasFailures ? PipelineStatus.ChecksFailed : PipelineStatus.Ok,
+            Problems = FailLines(ev.Checks),
+            Evaluation = ev,
+            Results = doc,
+        };
+    }
+
+    /// <summary><c>partforge build</c>.</summary>
+    public static PipelineResult Build(BuildRequest request)
+    {
+        var problems = new List<string>();
+        var formats = ExportFormats.ParseList(request.Formats, ExportFormats.All, "--formats", problems) ?? ExportFormats.All.ToHashSet();
+        var partFilter = ExportFormats.ParseList(request.Parts, ExportFormats.PartNames, "--parts", problems);
+        var folder = OutputFolder.Prepare(request.OutputDir, out var folderProblem);
+        if (folderProblem != null) problems.Add(folderProblem);
+        var loaded = DesignLoader.Load(request.DesignPath);
+        if (!loaded.Success) problems.InsertRange(0, loaded.Errors.Select(e => e.ToString()));
+        if (problems.Count > 0) return Bad(problems);
+
+        var (ev, problem) = TryEvaluate(loaded.Design!, request.DesignPath);
+        if (ev == null) return Bad([problem!]);
+        if (partFilter != null && ev.Parts != null)
+        {
+            var names = ev.Parts.Parts.Select(p => p.Name).ToArray();
+            foreach (var n in partFilter.Where(n => !names.Contains(n)))
+                problems.Add($"--parts: this design has no part '{n}'; its parts: {string.Join(", ", names)}");
+            if (problems.Count > 0) return Bad(problems);
+        }
+        bool failed = ev.Checks.HasFailures;
+        if ((failed && !request.Force) || ev.Parts == null)
+        {
+            return new PipelineResult
+            {
+                Status = failed ? PipelineStatus.ChecksFailed : PipelineStatus.BadInput,
+                Problems = failed ? FailLines(ev.Checks) : ["no parts could be made from this design"],
+                Evaluation = ev,
+                Results = ResultsBuilder.Build(ev),
+            };
+        }
+
+        var plan = ExportPlan.For(ev, formats, partFilter);
+        var doc = ResultsBuilder.Build(ev, plan.FilesByPart, forced: failed);
+        var written = new List<string>();
+        try
+        {
+            foreach (var f in plan.Files) folder.PathOf(f.Name); // refuse links or folders at any output name before writing anything
+            folder.Create();
+            foreach (var f in plan.Files)
+            {
+                WriteOne(folder, f, ev, doc, failed);
+                written.Add(f.Name);
+            }
+        }
+        catch (OutputRefusedException ex)
+        {
+            return new PipelineResult { Status = PipelineStatus.BadInput, Problems = [ex.Message], Evaluation = ev, Results = doc, Written = written, OutputFolder = folder.FullPath };
+        }
+        catch (UnauthorizedAccessException)
+        {
+            return new PipelineResult { Status = PipelineStatus.BadInput, Problems = [$"{request.OutputDir}: permission denied"], Evaluation = ev, Results = doc, Written = written, OutputFolder = folder.FullPath };
+        }
+        return new PipelineResult
+        {
+            Status = failed ? PipelineStatus.ChecksFailed : PipelineStatus.Ok,
+            Problems = failed ? FailLines(ev.Checks) : [],
+            Evaluation = ev,
+            Results = doc,
+            Written = written,
+            OutputFolder = folder.FullPath,
+        };
+    }
+
+    private static void WriteOne(OutputFolder folder, ExportPlan.FileSpec f, Evaluation ev, ResultsDocument doc, bool forced)
+    {
+        var d = ev.Design;
+        var parts = ev.Parts!;
+        switch (f.Format)
+        {
+            case "stl":
+                folder.Write(f.Name, s => StlWriter.WriteBinary(s, f.Part!.Mesh, StlWriter.SafeName(d.Name + "-" + f.Part.Name)));
+                break;
+            case "3mf":
+                var objects = f.Parts.Select(p => ThreeMfObject.At(p.Name, p.Mesh)).ToArray();
+                folder.Write(f.Name, s => ThreeMfWriter.Write(s, d.Name, objects));
+                break;
+            case "dxf":
+                folder.Write(f.Name, s => DxfWriter.Write(s, CutSheetOf(d, f.Part!)));
+                break;
+            case "svg":
+                folder.Write(f.Name, s => SvgWriter.Write(s, CutSheetOf(d, f.Part!)));
+                break;
+            case "png":
+                folder.Write(f.Name, f.Part != null ? Previews.Part(f.Part) : Previews.Assembly(parts));
+                break;
+            case "json":
+                folder.Write(f.Name, ResultsJson.ToUtf8(doc));
+                break;
+            case "csv":
+            {
+                var e = ElectricalView.From(d, ev.Electrical);
+                folder.Write(f.Name, BomCsv.WriteUtf8(BomBuilder.Build(d, e.TotalWireM, e.WireGramsPerMetre, ReportBuilder.BomParts(parts))));
+                break;
+            }
+            case "html":
+            {
+                var e = ElectricalView.From(d, ev.Electrical);
+                var previews = parts.Parts.Where(p => p.Process == PartProcess.Print).Select(p => (p.Name, Previews.Part(p))).ToArray();
+                folder.WriteText(f.Name, HtmlReport.Render(ReportBuilder.Build(d, e, parts, ev.Checks, forced, previews)));
+                break;
+            }
+            default:
+                throw new InvalidOperationException($"no writer for format {f.Format}");
+        }
+    }
+
+    private static CutSheet CutSheetOf(Design.Model.Design d, PartModel p) =>
+        new(p.Name, p.CutProfile ?? throw new InvalidOperationException($"cut part {p.Name} has no cut profile"), p.Marks, d.Process.Kerf);
+
+    private static (Evaluation? Ev, string? Problem) TryEvaluate(Design.Model.Design d, string file)
+    {
+        try
+        {
+            var ev = Evaluate(d);
+            if (ev.Parts is { HasErrors: true } ps)
+                return (null, string.Join("; ", ps.Diagnostics.Where(x => x.Severity == Parts.DiagnosticSeverity.Error).Select(x => $"{file}: {x.Part}: {x.Message}")));
+            return (ev, null);
+        }
+        catch (PartsException ex)
+        {
+            return (null, $"{file}: {ex.Message}");
+        }
+    }
+
+    private static IReadOnlyList<string> FailLines(CheckReport r) =>
+        r.Checks.Where(c => c.Status == CheckStatus.Fail).Select(c => $"check {c.Id} failed on {c.Part}: {c.Message}").ToArray();
+
+    private static PipelineResult Bad(IEnumerable<string> problems) => new() { Status = PipelineStatus.BadInput, Problems = problems.ToArray() };
+}

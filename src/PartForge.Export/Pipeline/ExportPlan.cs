@@ -1,0 +1,50 @@
+using PartForge.Parts;
+
+namespace PartForge.Export.Pipeline;
+
+/// <summary>
+/// Which files a build writes, decided before anything is written: per printed part an STL and a PNG
+/// preview, one 3MF of all printed parts, per cut part a DXF and an SVG, then the results, report, BOM and an
+/// assembly preview. Filtered by --formats and --parts; in a fixed order.
+/// </summary>
+public sealed class ExportPlan
+{
+    public sealed record FileSpec(string Name, string Format, PartModel? Part, IReadOnlyList<PartModel> Parts);
+
+    private ExportPlan(IReadOnlyList<FileSpec> files, IReadOnlyDictionary<string, IReadOnlyList<string>> byPart)
+    {
+        Files = files;
+        FilesByPart = byPart;
+    }
+
+    public IReadOnlyList<FileSpec> Files { get; }
+
+    /// <summary>File names per part name (for the results document's parts list).</summary>
+    public IReadOnlyDictionary<string, IReadOnlyList<string>> FilesByPart { get; }
+
+    public static ExportPlan For(Evaluation ev, IReadOnlySet<string> formats, IReadOnlySet<string>? partFilter)
+    {
+        string name = ev.Design.Name;
+        var parts = ev.Parts!.Parts.Where(p => partFilter == null || partFilter.Contains(p.Name)).ToArray();
+        var files = new List<FileSpec>();
+        var byPart = parts.ToDictionary(p => p.Name, _ => new List<string>(), StringComparer.Ordinal);
+        void Add(string file, string format, PartModel? part, IReadOnlyList<PartModel>? many = null)
+        {
+            files.Add(new FileSpec(file, format, part, many ?? []));
+            if (part != null) byPart[part.Name].Add(file);
+            foreach (var p in many ?? []) byPart[p.Name].Add(file);
+        }
+        var printed = parts.Where(p => p.Process == PartProcess.Print).ToArray();
+        var cut = parts.Where(p => p.Process == PartProcess.Cut).ToArray();
+        if (formats.Contains("stl")) foreach (var p in printed) Add(OutputNames.PartFile(name, p.Name, "stl"), "stl", p);
+        if (formats.Contains("3mf") && printed.Length > 0) Add(OutputNames.ThreeMf(name), "3mf", null, printed);
+        if (formats.Contains("dxf")) foreach (var p in cut) Add(OutputNames.PartFile(name, p.Name, "dxf"), "dxf", p);
+        if (formats.Contains("svg")) foreach (var p in cut) Add(OutputNames.PartFile(name, p.Name, "svg"), "svg", p);
+        if (formats.Contains("png")) foreach (var p in printed) Add(OutputNames.PartFile(name, p.Name, "png"), "png", p);
+        if (formats.Contains("png")) Add(OutputNames.PartFile(name, "assembly", "png"), "png", null);
+        if (formats.Contains("csv")) Add(OutputNames.Bom(name), "csv", null);
+        if (formats.Contains("html")) Add(OutputNames.Report(name), "html", null);
+        if (formats.Contains("json")) Add(OutputNames.Results(name), "json", null);
+        return new ExportPlan(files, byPart.ToDictionary(kv => kv.Key, kv => (IReadOnlyList<string>)kv.Value, StringComparer.Ordinal));
+    }
+}

@@ -1,0 +1,20 @@
+using PartForge.Export.Results;
+
+namespace PartForge.Export.Pipeline;
+
+/// <summary>
+/// The outcome of <c>check</c> or <c>build</c>: the status, one line per problem (design errors, failed
+/// checks, refused outputs), the evaluation and results document when the design loaded, and the files
+/// written (relative to the output folder, in writing order).
+/// </summary>
+public sealed record PipelineResult
+{
+    public required PipelineStatus Status { get; init; }
+    public IReadOnlyList<string> Problems { get; init; } = [];
+    public Evaluation? Evaluation { get; init; }
+    public ResultsDocument? Results { get; init; }
+    public IReadOnlyList<string> Written { get; init; } = [];
+
+    /// <summary>The output folder's full path (build only).</summary>
+    public string? OutputFolder { get; init; }
+}
