@@ -29,6 +29,12 @@ public sealed record RenderView
 
     public Rgb Background { get; init; } = new(246, 244, 238);
 
+    /// <summary>Draw dark lines at silhouettes and depth steps (pocket rims, holes, layer steps).</summary>
+    public bool Outlines { get; init; } = true;
+
+    /// <summary>Depth step that counts as an edge, as a fraction of the scene's projected size.</summary>
+    public double OutlineDepthFraction { get; init; } = 0.004;
+
     /// <summary>Light not depending on the surface direction, 0..1.</summary>
     public double Ambient { get; init; } = 0.30;
 }

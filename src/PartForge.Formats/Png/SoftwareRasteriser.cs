@@ -74,6 +74,7 @@ public static class SoftwareRasteriser
             }
         }
 
+        if (view.Outlines) DrawOutlines(depth, colour, w, h, view.OutlineDepthFraction * Math.Max(spanX, spanY));
         return new RenderResult(new RgbImage(view.Width, view.Height, Downsample(colour, w, h, ss)), scale);
     }
 
@@ -105,6 +106,37 @@ public static class SoftwareRasteriser
                 colour[3 * i] = r; colour[3 * i + 1] = g; colour[3 * i + 2] = b;
             }
         }
+    }
+
+    /// <summary>
+    /// Darkens pixels where the depth is not locally planar (second difference above the threshold, in mm):
+    /// silhouettes, the rims of pockets and holes, steps between layers. Reads the depth buffer only, so it is
+    /// as deterministic as the fill.
+    /// </summary>
+    private static void DrawOutlines(double[] depth, byte[] colour, int w, int h, double thresholdMm)
+    {
+        var edge = new bool[w * h];
+        for (int y = 1; y < h - 1; y++)
+            for (int x = 1; x < w - 1; x++)
+            {
+                int i = y * w + x;
+                double z = depth[i];
+                if (double.IsNegativeInfinity(z)) continue;
+                double l = depth[i - 1], r = depth[i + 1], u = depth[i - w], dn = depth[i + w];
+                if (double.IsNegativeInfinity(l) || double.IsNegativeInfinity(r) || double.IsNegativeInfinity(u) || double.IsNegativeInfinity(dn))
+                {
+                    edge[i] = true;
+                    continue;
+                }
+                if (Math.Abs(l + r - 2 * z) > thresholdMm || Math.Abs(u + dn - 2 * z) > thresholdMm) edge[i] = true;
+            }
+        for (int i = 0; i < edge.Length; i++)
+            if (edge[i])
+            {
+                colour[3 * i] = (byte)(colour[3 * i] * 0.3);
+                colour[3 * i + 1] = (byte)(colour[3 * i + 1] * 0.3);
+                colour[3 * i + 2] = (byte)(colour[3 * i + 2] * 0.3);
+            }
     }
 
     private static byte[] Downsample(byte[] src, int w, int h, int ss)

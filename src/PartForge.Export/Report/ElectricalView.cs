@@ -1,0 +1,113 @@
+using System.Globalization;
+using PartForge.Electrical;
+using PartForge.Electrical.Wire;
+using PartForge.Export.Drawings;
+
+namespace PartForge.Export.Report;
+
+/// <summary>Turns the electrical engine's result into what the report and the BOM show (no figure is recomputed here).</summary>
+public static class ElectricalView
+{
+    private static readonly string[] PhaseColours = ["#b3261e", "#2f6f68", "#3a5ba0"];
+
+    /// <summary>Coils in the whole machine (dual-stator: both stators).</summary>
+    public static int CoilsInMachine(Design.Model.Design d) => d.Machine.Coils * (d.Machine.Layout == "dual-stator" ? 2 : 1);
+
+    /// <summary>The engine's wire total for the machine: one coil's wire (turns and leads) times the coils, m.</summary>
+    public static double TotalWireM(Design.Model.Design d, ElectricalResult r) => (r.Coil?.WireLengthM ?? 0) * CoilsInMachine(d);
+
+    public static ReportElectrical From(Design.Model.Design d, ElectricalResult r)
+    {
+        var coil = r.Coil ?? throw new InvalidOperationException("the electrical result has no coil; the report needs one");
+        var outline = coil.Outline ?? throw new InvalidOperationException("the electrical result has no coil outline");
+        var rows = new List<ReportRow>
+        {
+            new("pole pairs", I(r.PolePairs), "", "pole_pairs"),
+            new("electrical frequency at rated speed", F(r.ElectricalHz, 2), "Hz", "electrical_hz"),
+            new("magnetic gap (magnet face to copper)", F(r.MagneticGapMm, 3), "mm", "magnetic_gap"),
+            new("winding factor", F(r.WindingFactor, 4), "", "winding_factor"),
+            new("magnet remanence Br", F(r.Magnet.BrTesla, 3), "T", "magnet.br"),
+            new("turns per coil" + (coil.TurnsSolved ? " (solved for the target EMF)" : ""), I(coil.Turns), "", "coil.turns"),
+            new("wire bare / overall diameter", $"{F(coil.WireBareMm, 4)} / {F(coil.WireOverallMm, 4)}", "mm", "coil.wire_bare"),
+            new("fill factor", F(coil.FillFactor, 3), "", "coil.fill_factor"),
+            new("coil height / radial build", $"{F(coil.HeightMm, 2)} / {F(coil.RadialBuildMm, 3)}", "mm", "coil.height"),
+            new("mean turn length", F(coil.MeanTurnMm, 2), "mm", "coil.mean_turn"),
+            new("wire per coil (with leads)", F(coil.WireLengthM, 3), "m", "coil.wire_length_m"),
+            new("coil resistance at 20 C / hot", $"{F(coil.Resistance20COhm, 4)} / {F(coil.ResistanceHotOhm, 4)}", "ohm", "coil.resistance_20c_ohm"),
+            new("coil inductance" + (coil.InductanceIsApproximate ? " (approximate)" : ""), F(coil.InductanceUh, 1), "uH", "coil.inductance_uh"),
+            new("copper per coil", F(coil.CopperMassG, 2), "g", "coil.copper_mass_g"),
+            new("coil flux linkage, peak", F(r.CoilFluxLinkagePeakWb, 6), "Wb", "coil_flux_linkage_peak_wb"),
+            new("coil EMF at rated speed", F(r.CoilEmfRmsV, 3), "V rms", "coil.emf_rms_v"),
+        };
+        if (r.Phase is { } ph)
+        {
+            rows.Add(new("connection, coils in series per phase", $"{ph.Connection}, {ph.CoilsInSeries}", "", "phase.coils_in_series"));
+            rows.Add(new("phase EMF at rated speed, peak / rms", $"{F(ph.EmfPeakV, 3)} / {F(ph.EmfRmsV, 3)}", "V", "phase.emf_rms_v"));
+            rows.Add(new("phase resistance at 20 C / hot", $"{F(ph.Resistance20COhm, 4)} / {F(ph.ResistanceHotOhm, 4)}", "ohm", "phase.resistance_20c_ohm"));
+            rows.Add(new("phase EMF distortion (THD)", F(ph.ThdPercent, 2), "%", "phase.thd_percent"));
+        }
+        rows.Add(new("line EMF at rated speed", F(r.LineEmfRmsV, 3), "V rms", "line_emf_rms_v"));
+        rows.Add(new("line EMF at max speed", F(r.LineEmfRmsAtMaxRpmV, 3), "V rms", "line_emf_rms_at_max_rpm_v"));
+        rows.Add(new("EMF constant ke", F(r.KeVPerKrpm, 3), "V per 1000 rpm", "ke_v_per_krpm"));
+        rows.Add(new("torque constant kt", F(r.KtNmPerA, 4), "N m/A", "kt_nm_per_a"));
+        rows.Add(new("wire for the machine (all coils, leads)", F(TotalWireM(d, r), 2), "m", "wire_total_m"));
+        if (r.Generator is { } g)
+        {
+            rows.Add(new($"generator into {F(g.LoadResistanceOhm, 2)} ohm at {F(g.Rpm, 0)} rpm: current / terminal voltage", $"{F(g.CurrentA, 3)} / {F(g.TerminalVoltageV, 3)}", "A / V", "generator.current_a"));
+            rows.Add(new("generator output / copper loss / efficiency", $"{F(g.OutputPowerW, 2)} W / {F(g.CopperLossW, 2)} W / {F(g.Efficiency * 100, 1)} %", "", "generator.output_power_w"));
+            rows.Add(new("generator shaft torque / current density", $"{F(g.ShaftTorqueNm, 4)} N m / {F(g.CurrentDensityAPerMm2, 2)} A/mm2", "", "generator.shaft_torque_nm"));
+        }
+        if (r.Motor is { } m)
+        {
+            rows.Add(new($"motor ({m.Drive}) on {F(m.SupplyVoltageV, 1)} V: no-load speed", F(m.NoLoadRpm, 0), "rpm", "motor.no_load_rpm"));
+            rows.Add(new("motor stall torque / stall current", $"{F(m.StallTorqueNm, 4)} N m / {F(m.StallCurrentA, 2)} A", "", "motor.stall_torque_nm"));
+            rows.Add(new($"motor at {F(m.RatedRpm, 0)} rpm: current / torque / efficiency", $"{F(m.CurrentAtRatedA, 3)} A / {F(m.TorqueAtRatedNm, 4)} N m / {F(m.EfficiencyAtRated * 100, 1)} %", "", "motor.current_at_rated_a"));
+        }
+
+        var coilWave = new List<PlotSeries>();
+        var phaseWaves = new List<PlotSeries>();
+        if (r.Waveforms is { } w)
+        {
+            var x = Closed(w.ThetaElecDeg, 360);
+            coilWave.Add(new PlotSeries("coil 0", x, Closed(w.CoilEmfV, w.CoilEmfV.Count > 0 ? w.CoilEmfV[0] : 0), "#b0532a"));
+            for (int i = 0; i < w.PhaseEmfV.Count; i++)
+            {
+                var y = w.PhaseEmfV[i];
+                phaseWaves.Add(new PlotSeries("phase " + (char)('A' + i), x, Closed(y, y.Count > 0 ? y[0] : 0), PhaseColours[i % PhaseColours.Length]));
+            }
+        }
+
+        var tables = new List<ReportTable>();
+        if (r.Winding.Table.Count > 0)
+            tables.Add(new ReportTable("Winding table: which coil goes to which phase, and which way it is wound",
+                ["coil", "angle, deg", "phase", "direction"],
+                r.Winding.Table.Select(c => (IReadOnlyList<string>)[I(c.Coil + 1), F(c.AngleDeg, 2), c.Phase.ToString(), c.Direction > 0 ? "forward" : "reversed"]).ToArray()));
+        if (r.Sensors is { } s && s.Sensors.Count > 0)
+            tables.Add(new ReportTable($"Timing sensors ({s.Kind}): {s.Rule}",
+                ["sensor", "angle, deg", "radius, mm", "electrical deg", "fits between coils"],
+                s.Sensors.Select(p => (IReadOnlyList<string>)[p.Label, F(p.AngleDeg, 2), F(p.RadiusMm, 2), F(p.ElectricalDeg, 1), p.Fits ? "yes" : $"no ({F(p.ClearanceMm, 2)} mm)"]).ToArray()));
+
+        var notes = r.Diagnostics.Select(x => $"electrical {x.Severity.ToString().ToLowerInvariant()}: {x.Message}").ToList();
+        if (r.Magnet.BackIronImageModel) notes.Add("Back iron is modelled by the image method (ideal, unsaturated steel): an approximation.");
+        if (coil.WireOverallIsApproximate) notes.Add("The enamelled wire diameter is interpolated between rows of the IEC 60317-0-1 table: an approximation.");
+
+        var wire = WireSpec.Of(coil.WireBareMm, 2, coil.WireAwg);
+        return new ReportElectrical
+        {
+            Rows = rows, CoilWaveform = coilWave, PhaseWaveforms = phaseWaves, WaveformRpm = r.RatedRpm,
+            TotalWireM = TotalWireM(d, r), WireGramsPerMetre = wire.GramsPerMetre, Outline = outline, Tables = tables, Notes = notes,
+        };
+    }
+
+    /// <summary>A periodic series closed at the end of the period (the first sample repeated at x = period), so the plot spans 0..360.</summary>
+    private static IReadOnlyList<double> Closed(IReadOnlyList<double> v, double end)
+    {
+        var a = new double[v.Count + 1];
+        for (int i = 0; i < v.Count; i++) a[i] = v[i];
+        a[^1] = end;
+        return a;
+    }
+
+    private static string F(double v, int digits) => double.IsFinite(v) ? Math.Round(v, digits).ToString("0." + new string('#', Math.Max(1, digits)), CultureInfo.InvariantCulture) : "-";
+    private static string I(int v) => v.ToString(CultureInfo.InvariantCulture);
+}

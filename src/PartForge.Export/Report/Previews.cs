@@ -1,0 +1,42 @@
+using PartForge.Formats.Png;
+using PartForge.Parts;
+using PartForge.Parts.Placement;
+
+namespace PartForge.Export.Report;
+
+/// <summary>
+/// Shaded PNG previews of each part and of the exploded assembly, drawn by the project's own rasteriser
+/// (deterministic: the same parts give the same bytes).
+/// </summary>
+public static class Previews
+{
+    /// <summary>Picture size of every preview, pixels.</summary>
+    public const int Width = 800, Height = 600;
+
+    public static Rgb ColourOf(string partName) => partName switch
+    {
+        _ when partName.StartsWith("rotor", StringComparison.Ordinal) => new Rgb(95, 160, 150),
+        "back-iron" => new Rgb(122, 128, 136),
+        "former" => new Rgb(222, 182, 90),
+        _ when partName.StartsWith("stator", StringComparison.Ordinal) => new Rgb(205, 184, 130),
+        "spacer" => new Rgb(164, 158, 143),
+        _ => new Rgb(170, 170, 170),
+    };
+
+    /// <summary>One part on its own, seen from above at an angle.</summary>
+    public static byte[] Part(PartModel part)
+    {
+        var view = new RenderView { Width = Width, Height = Height, AzimuthDeg = -60, ElevationDeg = 38 };
+        var img = SoftwareRasteriser.Render([RenderItem.FromMesh(part.Mesh, ColourOf(part.Name))], view).Image;
+        return PngEncoder.Encode(img);
+    }
+
+    /// <summary>The exploded assembly, seen from the side and a little above so the axial order shows.</summary>
+    public static byte[] Assembly(PartSet set)
+    {
+        var placed = AssemblyBuilder.Build(set, exploded: true);
+        var items = placed.Select(p => RenderItem.FromMesh(p.Mesh, ColourOf(p.Name))).ToArray();
+        var view = new RenderView { Width = Width, Height = Height, AzimuthDeg = -65, ElevationDeg = 18 };
+        return PngEncoder.Encode(SoftwareRasteriser.Render(items, view).Image);
+    }
+}

@@ -1,0 +1,48 @@
+using PartForge.Checks;
+using PartForge.Export.Bom;
+using PartForge.Parts;
+
+namespace PartForge.Export.Report;
+
+/// <summary>Assembles the report input from the stage outputs (design, electrical results, parts, checks).</summary>
+public static class ReportBuilder
+{
+    public static ReportInput Build(Design.Model.Design d, ReportElectrical e, PartSet parts, CheckReport checks, bool forced,
+        IReadOnlyList<(string Name, byte[] Png)>? previews = null)
+    {
+        var o = e.Outline;
+        double margin = d.Former.Margin;
+        var coil = new CoilSection(o.OuterMinRadiusMm, o.OuterMaxRadiusMm, o.WindowMinRadiusMm, o.WindowMaxRadiusMm,
+            o.OuterMinRadiusMm - margin, o.OuterMaxRadiusMm + margin);
+        var gaps = checks.WithId(CheckIds.RunningGap)
+            .GroupBy(c => c.Part, StringComparer.Ordinal)
+            .ToDictionary(g => g.Key, g => g.Min(c => c.Value), StringComparer.Ordinal);
+        var (bodies, dims) = SectionBuilder.Build(d, parts.Stack, coil, gaps);
+
+        return new ReportInput
+        {
+            DesignName = d.Name,
+            Summary = DesignSummary.Rows(d),
+            Electrical = e.Rows,
+            CoilWaveform = e.CoilWaveform,
+            PhaseWaveforms = e.PhaseWaveforms,
+            WaveformRpm = e.WaveformRpm,
+            Checks = checks.Checks.Select(c => new ReportCheck(c.Id, c.Part, c.StatusText, c.Value, c.Limit, c.Unit, c.Margin, c.Message, c.Basis ?? "")).ToArray(),
+            Status = checks.StatusText,
+            Forced = forced,
+            Drawings = parts.Parts.Select(p => PartSketches.For(d, p)).ToArray(),
+            SectionBodies = bodies,
+            SectionDimensions = dims,
+            Bom = BomBuilder.Build(d, e.TotalWireM, e.WireGramsPerMetre, BomParts(parts)),
+            Tables = e.Tables,
+            Notes = e.Notes.Concat(parts.Parts.SelectMany(p => p.Notes.Select(n => $"{p.Name}: {n}"))).ToArray(),
+            Previews = previews ?? [],
+        };
+    }
+
+    public static IReadOnlyList<BomPart> BomParts(PartSet parts) => parts.Parts.Select(p =>
+    {
+        var (lo, hi) = p.Mesh.Bounds();
+        return new BomPart(p.Name, p.Process.ToContractName(), p.Material, p.Quantity, p.MassG, hi.X - lo.X, hi.Y - lo.Y, p.HeightMm);
+    }).ToArray();
+}
