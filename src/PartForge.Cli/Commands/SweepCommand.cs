@@ -1,0 +1,142 @@
+using System.CommandLine;
+using System.Diagnostics;
+using System.Runtime.CompilerServices;
+using PartForge.Cli.Hosting;
+using PartForge.Cli.Sweep;
+using PartForge.Design.Loading;
+using Spectre.Console;
+
+namespace PartForge.Cli.Commands;
+
+/// <summary>
+/// <c>partforge sweep DESIGN --vary KEY=FROM..TO:STEP [--vary ...] [--csv FILE] [--target KEY=VALUE] [--json]</c>:
+/// evaluates every combination of the varied keys (electrical results and checks, nothing exported) on all
+/// cores and prints the key results of each variant. Exit 0 when the sweep ran (whatever the variants'
+/// status), 2 for bad input, 3 for an internal error.
+/// </summary>
+public static class SweepCommand
+{
+    public static Command Create() => Create(() => new PipelineEvaluator());
+
+    public static Command Create(Func<ISweepEvaluator> evaluator)
+    {
+        var design = new Argument<string>("DESIGN") { Description = "The design file (YAML) to vary." };
+        var vary = new Option<string[]>("--vary")
+        {
+            Description = $"KEY=FROM..TO:STEP, a numeric design key and its range (TO included when on the grid); repeat for more keys. Every combination is evaluated, at most {SweepPlan.MaxVariants} variants.",
+            Arity = ArgumentArity.OneOrMore,
+            Required = true,
+        };
+        var csv = new Option<string?>("--csv") { Description = "Also write every variant and all its results to this CSV file." };
+        var target = new Option<string?>("--target") { Description = $"KEY=VALUE: sort the variants by closeness of a result to a value, e.g. phase.emf_rms_v=12. Results: {string.Join(", ", SweepMetrics.All)}." };
+        var json = new Option<bool>("--json") { Description = "Print the sweep as a JSON document instead of a table." };
+        var cmd = new Command("sweep", "Evaluate every combination of varied design keys (electrical results and checks, no files) and tabulate the key results.")
+        {
+            design, vary, csv, target, json,
+        };
+        CommandAction.Set(cmd, (pr, s) => Run(s, pr.GetValue(design)!, pr.GetValue(vary) ?? [], pr.GetValue(csv), pr.GetValue(target),
+            pr.GetValue(json), evaluator()));
+        return cmd;
+    }
+
+    public static int Run(CliSession s, string designPath, IReadOnlyList<string> varies, string? csvPath, string? targetArg, bool json, ISweepEvaluator evaluator)
+    {
+        var errors = new List<string>();
+        var plan = SweepPlan.Parse(varies, errors);
+        SweepTarget? target = null;
+        if (targetArg != null)
+        {
+            target = SweepTarget.Parse(targetArg, out var terr);
+            if (terr != null) errors.Add(terr);
+        }
+        if (errors.Count > 0 || plan == null)
+        {
+            foreach (var e in errors) s.Problem("partforge sweep: " + e);
+            return ExitCodes.BadInput;
+        }
+        var source = DesignLoader.ParseFile(designPath);
+        if (source.ParseErrors.Count > 0)
+        {
+            foreach (var e in source.ParseErrors) s.Problem(e.ToString());
+            return ExitCodes.BadInput;
+        }
+        var baseDesign = source.Load();
+        string name = baseDesign.Design?.Name ?? Path.GetFileNameWithoutExtension(designPath);
+
+        var done = new StrongBox<long>();
+        var sw = Stopwatch.StartNew();
+        var work = Task.Run(() => SweepRunner.Run(source, plan, evaluator, done));
+        long total = plan.Count;
+        if (!s.Quiet) ShowProgress(s, work, done, total);
+        // An exception in a variant is a bug: it propagates to CommandAction (one line, exit 3).
+        SweepRow[] rows = work.GetAwaiter().GetResult();
+        IReadOnlyList<SweepRow> shown = target != null ? target.Sort(rows) : rows;
+
+        if (csvPath != null) TextFiles.WriteAtomic(csvPath, SweepOutput.Csv(plan, shown));
+        if (json) s.Out.Write(SweepOutput.Json(name, plan, shown, target));
+        else if (s.IsTerminal) TerminalTable(s, plan, shown, target);
+        else s.Out.Write(SweepOutput.PlainTable(plan, shown, target));
+
+        if (!s.Quiet)
+        {
+            var by = shown.GroupBy(r => r.Outcome.Status).ToDictionary(g => g.Key, g => g.Count());
+            s.Err.WriteLine($"sweep: {total} variants in {sw.Elapsed.TotalSeconds.ToString("0.00", System.Globalization.CultureInfo.InvariantCulture)} s: " +
+                            string.Join(", ", new[] { "pass", "warn", "fail", "invalid" }.Select(k => $"{by.GetValueOrDefault(k)} {k}")));
+        }
+        return ExitCodes.Ok;
+    }
+
+    private static void ShowProgress(CliSession s, Task work, StrongBox<long> done, long total)
+    {
+        if (!Console.IsErrorRedirected && CommandAction.Err == Console.Error)
+        {
+            var err = AnsiConsole.Create(new AnsiConsoleSettings { Out = new AnsiConsoleOutput(Console.Error) });
+            err.Progress().AutoClear(true).Columns(new TaskDescriptionColumn(), new ProgressBarColumn(), new PercentageColumn(), new RemainingTimeColumn())
+               .Start(ctx =>
+               {
+                   var t = ctx.AddTask("sweep", maxValue: total);
+                   while (!work.IsCompleted)
+                   {
+                       t.Value = Interlocked.Read(ref done.Value);
+                       ((IAsyncResult)work).AsyncWaitHandle.WaitOne(100);
+                   }
+                   t.Value = total;
+               });
+            return;
+        }
+        // Not a terminal: a plain line at every tenth.
+        long next = Math.Max(1, total / 10);
+        while (!work.IsCompleted)
+        {
+            ((IAsyncResult)work).AsyncWaitHandle.WaitOne(200);
+            long d = Interlocked.Read(ref done.Value);
+            if (d >= next && d < total)
+            {
+                s.Err.WriteLine($"sweep: {d}/{total} variants");
+                next = (d / Math.Max(1, total / 10) + 1) * Math.Max(1, total / 10);
+            }
+        }
+        s.Err.WriteLine($"sweep: {total}/{total} variants");
+    }
+
+    private static void TerminalTable(CliSession s, SweepPlan plan, IReadOnlyList<SweepRow> rows, SweepTarget? target)
+    {
+        var (head, cells) = SweepOutput.TableCells(plan, rows, target);
+        var table = new Table().Border(TableBorder.Rounded);
+        for (int i = 0; i < head.Length; i++)
+        {
+            var col = new TableColumn(Markup.Escape(head[i]));
+            if (i < head.Length - 2) col.RightAligned();
+            table.AddColumn(col);
+        }
+        foreach (var c in cells)
+        {
+            var row = c.Select(Markup.Escape).ToArray();
+            string status = c[^2];
+            string colour = status switch { "pass" => "green", "warn" => "yellow", "fail" => "red", _ => "grey" };
+            row[^2] = $"[{colour}]{Markup.Escape(status)}[/]";
+            table.AddRow(row);
+        }
+        s.Console().Write(table);
+    }
+}
