@@ -67,7 +67,8 @@ ICliRunner runner = exe
 string root = work ?? Path.Combine(Path.GetTempPath(), $"partforge-fuzz-{Environment.ProcessId}");
 Directory.CreateDirectory(root);
 var oracle = new CaseOracle(runner, root, TimeSpan.FromSeconds(timeoutS)) { BuildFraction = buildFraction };
-var session = new FuzzSession(seeds, oracle);
+var fallback = exe ? null : ProcessCli.Find(AppContext.BaseDirectory) is { } pc ? new CaseOracle(pc, root, TimeSpan.FromSeconds(timeoutS)) { BuildFraction = buildFraction } : null;
+var session = new FuzzSession(seeds, oracle, fallback);
 var summary = session.Run(seed, indices, (i, o) =>
 {
     if (!o.Passed) stderr.WriteLine($"case {i}: {string.Join("; ", o.Violations)}  [{o.Input.Recipe}]");

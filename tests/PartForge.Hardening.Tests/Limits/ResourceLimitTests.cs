@@ -113,6 +113,11 @@ public sealed class ResourceLimitTests
         string design = tmp.Sub(preset + "-fine.yaml");
         File.WriteAllText(design, Repo.WithKey(Repo.PresetText(preset), "mesh", "chordal_tolerance", tolerance));
         string outDir = tmp.Sub("out");
+        // First as a child process with a timeout, so that a missing gate shows as a failure here instead of
+        // an in-process thread meshing for minutes (it could not be stopped and would block every later case).
+        var exe = Repo.Executable.Run(["build", design, "-o", outDir], TimeSpan.FromSeconds(20));
+        Assert.True(exe.ExitCode == 2, "the executable did not refuse the tolerance at once (no mesh-size estimate before meshing?): " + Pf.Describe(exe));
+        Assert.False(Directory.Exists(outDir) && Directory.EnumerateFileSystemEntries(outDir).Any(), "files were written");
         Pf.Run("check", Repo.PresetPath(preset)); // warm-up of loader, electrical engine and checks
         var sw = Stopwatch.StartNew();
         var r = Pf.Run("build", design, "-o", outDir);
