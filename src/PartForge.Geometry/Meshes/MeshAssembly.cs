@@ -1,4 +1,3 @@
-using NetTopologySuite.Algorithm.Locate;
 using NetTopologySuite.Geometries;
 using NetTopologySuite.Noding;
 using NetTopologySuite.Noding.Snapround;
@@ -16,6 +15,7 @@ internal sealed class MeshAssembly
     private readonly List<Vec3> _vertices = new();
     private readonly List<int> _tris = new();
     private readonly GeometryFactory _f;
+    private bool _noded;
 
     public MeshAssembly(Precision prec)
     {
@@ -58,7 +58,15 @@ internal sealed class MeshAssembly
             lastTop = z1;
         }
         BuildStack(stack);
-        return new Mesh(_vertices.ToArray(), _tris.ToArray(), true);
+        var mesh = new Mesh(_vertices.ToArray(), _tris.ToArray(), true);
+        if (_noded)
+        {
+            // Levels where layer boundaries cross were snap-rounded: verify before the mesh leaves the kernel.
+            var rep = MeshValidator.Validate(mesh);
+            if (!rep.IsValid)
+                throw new InvalidOperationException($"meshing failed where the boundaries of touching layers cross within one grid step ({rep}); move the features apart by more than {_prec.GridMm} mm");
+        }
+        return mesh;
     }
 
     private void CheckFloat32(List<Layer> layers)
@@ -187,7 +195,14 @@ internal sealed class MeshAssembly
             {
                 if (!byHash.TryGetValue(CanonicalHash(below[i].Orig), out var l)) continue;
                 foreach (int a in l)
-                    if (passAbove[a] < 0 && SameCycle(below[i].Orig, above[a].Orig)) { passBelow[i] = a; passAbove[a] = i; break; }
+                    if (passAbove[a] < 0 && SameCycle(below[i].Orig, above[a].Orig))
+                    {
+                        passBelow[i] = a; passAbove[a] = i;
+                        // Same start vertex on both layers, so that wall edge i means the same edge in both.
+                        // (The array is shared by the layer's bottom and top uses, so both follow.)
+                        Array.Copy(below[i].Orig, above[a].Orig, below[i].Orig.Length);
+                        break;
+                    }
             }
         }
         var activeBelow = Enumerable.Range(0, below.Length).Where(i => passBelow[i] < 0).ToList();
@@ -202,24 +217,25 @@ internal sealed class MeshAssembly
             // Whole rings go to the up face (region below minus above) or the down face (above minus below).
             var up = new List<GridPoint[]>();
             var down = new List<GridPoint[]>();
-            IPointOnGeometryLocator? inAbove = activeBelow.Count > 0 && ra is not null ? new IndexedPointInAreaLocator(ra.Geometry) : null;
-            IPointOnGeometryLocator? inBelow = activeAbove.Count > 0 && rb is not null ? new IndexedPointInAreaLocator(rb.Geometry) : null;
+            var inAbove = activeBelow.Count > 0 && above.Length > 0 ? new ExactAreaLocator(above.Select(u => u.Orig)) : null;
+            var inBelow = activeAbove.Count > 0 && below.Length > 0 ? new ExactAreaLocator(below.Select(u => u.Orig)) : null;
             foreach (int i in activeBelow)
             {
                 var ring = below[i].Orig;
-                if (inAbove is not null && Inside(inAbove, ring[0], ring[1])) down.Add(Reversed(ring));
+                if (inAbove is not null && RingInside(inAbove, ring)) down.Add(Reversed(ring));
                 else up.Add(ring);
             }
             foreach (int i in activeAbove)
             {
                 var ring = above[i].Orig;
-                if (inBelow is not null && Inside(inBelow, ring[0], ring[1])) up.Add(Reversed(ring));
+                if (inBelow is not null && RingInside(inBelow, ring)) up.Add(Reversed(ring));
                 else down.Add(ring);
             }
             EmitFace(lv, up, flip: false);
             EmitFace(lv, down, flip: true);
             return;
         }
+        _noded = true;
         NodeAndClassify(lv, below, above, passBelow, passAbove, continues);
     }
 
@@ -230,12 +246,23 @@ internal sealed class MeshAssembly
         for (int i = 0; i < u.OrigPos.Length; i++) u.OrigPos[i] = i;
     }
 
-    private bool Inside(IPointOnGeometryLocator loc, GridPoint a, GridPoint b)
+    /// <summary>Whether a ring that does not touch the other side's active rings lies inside the other side
+    /// (the first edge whose midpoint is not on a boundary decides).</summary>
+    private static bool RingInside(ExactAreaLocator loc, GridPoint[] ring)
     {
-        var c = new Coordinate((a.X + b.X) / (2 * _scale), (a.Y + b.Y) / (2 * _scale));
-        var where = loc.Locate(c);
-        if (where == Location.Boundary) throw new InvalidOperationException("ring classification hit a boundary (rings were expected not to touch)");
-        return where == Location.Interior;
+        for (int i = 0; i < ring.Length; i++)
+        {
+            var w = loc.LocateMidpoint(ring[i], ring[(i + 1) % ring.Length]);
+            if (w != ExactAreaLocator.Where.Boundary) return w == ExactAreaLocator.Where.Inside;
+        }
+        throw new InvalidOperationException("a ring lies wholly on the boundary of the other layer");
+    }
+
+    private static bool Inside(ExactAreaLocator loc, GridPoint a, GridPoint b)
+    {
+        var w = loc.LocateMidpoint(a, b);
+        if (w == ExactAreaLocator.Where.Boundary) throw new InvalidOperationException($"a noded edge overlaps the other layer's boundary {a} {b}");
+        return w == ExactAreaLocator.Where.Inside;
     }
 
     private static GridPoint[] Reversed(GridPoint[] r)
@@ -298,25 +325,28 @@ internal sealed class MeshAssembly
     {
         var inputs = new List<ISegmentString>();
         var owners = new List<(bool Below, int Index)>();
-        for (int i = 0; i < below.Length; i++) { inputs.Add(new NodedSegmentString(Coords(below[i].Orig, true), inputs.Count)); owners.Add((true, i)); }
+        for (int i = 0; i < below.Length; i++) { inputs.Add(new NodedSegmentString(GridCoords(below[i].Orig, true), inputs.Count)); owners.Add((true, i)); }
         for (int i = 0; i < above.Length; i++)
         {
             if (passAbove[i] >= 0) continue; // same ring as one below: noded once
-            inputs.Add(new NodedSegmentString(Coords(above[i].Orig, true), inputs.Count));
+            inputs.Add(new NodedSegmentString(GridCoords(above[i].Orig, true), inputs.Count));
             owners.Add((false, i));
         }
-        var noder = new SnapRoundingNoder(new PrecisionModel(_scale));
-        noder.ComputeNodes(inputs);
+        // Snap rounding can leave a vertex on another edge when two rounded edges come close; noding the
+        // output again until nothing changes gives a fully noded arrangement.
         var pieces = new List<GridPoint>[inputs.Count];
-        for (int i = 0; i < pieces.Length; i++) pieces[i] = new List<GridPoint>();
-        foreach (var ss in noder.GetNodedSubstrings())
+        for (int pass = 0; ; pass++)
         {
-            var list = pieces[(int)ss.Context];
-            foreach (var c in ss.Coordinates)
-            {
-                var g = new GridPoint(ToGrid(c.X), ToGrid(c.Y));
-                if (list.Count == 0 || list[^1] != g) list.Add(g);
-            }
+            var noder = new SnapRoundingNoder(new PrecisionModel(1.0)); // in grid units: exact integer input
+            noder.ComputeNodes(inputs);
+            var parts = new List<GridPoint[]>[inputs.Count];
+            for (int i = 0; i < parts.Length; i++) parts[i] = new List<GridPoint[]>();
+            foreach (var ss in noder.GetNodedSubstrings())
+                parts[(int)ss.Context].Add(ss.Coordinates.Select(c => new GridPoint((long)Math.Floor(c.X + 0.5), (long)Math.Floor(c.Y + 0.5))).ToArray());
+            for (int i = 0; i < pieces.Length; i++) pieces[i] = Chain(parts[i], FirstPoint(inputs[i]));
+            int before = inputs.Sum(x => x.Count), after = pieces.Sum(x => x.Count);
+            if (after == before || pass == 4) break;
+            inputs = pieces.Select((pl, i) => (ISegmentString)new NodedSegmentString(GridCoords(Trimmed(pl), true), i)).ToList();
         }
         for (int s = 0; s < inputs.Count; s++)
         {
@@ -348,8 +378,8 @@ internal sealed class MeshAssembly
         foreach (var u in below) Count(u.Noded, true);
         foreach (var u in above) Count(u.Noded, false);
 
-        var locBelow = below.Length > 0 ? new IndexedPointInAreaLocator(RingsAsArea(below)) : null;
-        var locAbove = above.Length > 0 ? new IndexedPointInAreaLocator(RingsAsArea(above)) : null;
+        var locBelow = below.Length > 0 ? new ExactAreaLocator(below.Select(u => u.Noded)) : null;
+        var locAbove = above.Length > 0 ? new ExactAreaLocator(above.Select(u => u.Noded)) : null;
         var up = new List<(GridPoint P, GridPoint Q)>();
         var down = new List<(GridPoint P, GridPoint Q)>();
         foreach (var ((k1, k2), (b, a)) in edges)
@@ -373,8 +403,49 @@ internal sealed class MeshAssembly
         static void Add(List<(GridPoint, GridPoint)> l, GridPoint p, GridPoint q, int s) => l.Add(s > 0 ? (p, q) : (q, p));
     }
 
-    private NetTopologySuite.Geometries.Geometry RingsAsArea(RingUse[] rs) =>
-        _f.CreateMultiPolygon(rs.Select(u => _f.CreatePolygon(_f.CreateLinearRing(Coords(u.Noded, true)))).ToArray());
+    private static GridPoint FirstPoint(ISegmentString ss) => new((long)Math.Floor(ss.Coordinates[0].X + 0.5), (long)Math.Floor(ss.Coordinates[0].Y + 0.5));
+
+    private static Coordinate[] GridCoords(GridPoint[] r, bool closed)
+    {
+        var c = new Coordinate[r.Length + (closed ? 1 : 0)];
+        for (int i = 0; i < r.Length; i++) c[i] = new Coordinate(r[i].X, r[i].Y);
+        if (closed) c[^1] = c[0].Copy();
+        return c;
+    }
+
+    /// <summary>Joins the noded pieces of one closed ring end to start, beginning at the ring's first vertex
+    /// (the noder does not promise to return them in ring order).</summary>
+    private static List<GridPoint> Chain(List<GridPoint[]> parts, GridPoint start)
+    {
+        var byStart = new Dictionary<long, Queue<int>>();
+        for (int i = 0; i < parts.Count; i++)
+        {
+            if (parts[i].Length == 0) continue;
+            long k = parts[i][0].Key;
+            if (!byStart.TryGetValue(k, out var q)) byStart[k] = q = new Queue<int>();
+            q.Enqueue(i);
+        }
+        var res = new List<GridPoint>();
+        var at = start;
+        int used = 0;
+        while (used < parts.Count && byStart.TryGetValue(at.Key, out var queue) && queue.Count > 0)
+        {
+            var part = parts[queue.Dequeue()];
+            used++;
+            foreach (var g in part) if (res.Count == 0 || res[^1] != g) res.Add(g);
+            at = part[^1];
+            if (at == start) break;
+        }
+        if (used != parts.Count(p => p.Length > 0) || at != start) throw new InvalidOperationException("noded ring pieces do not close");
+        return res;
+    }
+
+    private static GridPoint[] Trimmed(List<GridPoint> pts)
+    {
+        int n = pts.Count;
+        while (n > 1 && pts[0] == pts[n - 1]) n--;
+        return pts.Take(n).ToArray();
+    }
 
     private static void SetNoded(RingUse use, List<GridPoint> pts)
     {

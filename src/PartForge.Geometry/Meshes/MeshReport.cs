@@ -20,7 +20,7 @@ public sealed record MeshReport
     public int EulerCharacteristic { get; init; }
     /// <summary>Connected pieces (by shared edges).</summary>
     public int ShellCount { get; init; }
-    /// <summary>Shells whose signed volume is not positive (inward-facing).</summary>
+    /// <summary>Shells whose signed volume is not positive (inward-facing) and that are not a cavity inside another shell.</summary>
     public int InwardShells { get; init; }
     /// <summary>Total genus of a closed mesh: (2 x shells - chi) / 2, i.e. the number of through holes.</summary>
     public int Genus { get; init; }

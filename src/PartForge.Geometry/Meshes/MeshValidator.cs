@@ -56,6 +56,15 @@ public static class MeshValidator
         var shellOf = new Dictionary<int, int>();
         foreach (int v in used) { int r = uf.Find(v); if (!shellOf.ContainsKey(r)) shellOf[r] = shellOf.Count; }
         var shellVol = new double[shellOf.Count];
+        var shellMin = Enumerable.Repeat(new Vec3(double.PositiveInfinity, double.PositiveInfinity, double.PositiveInfinity), shellOf.Count).ToArray();
+        var shellMax = Enumerable.Repeat(new Vec3(double.NegativeInfinity, double.NegativeInfinity, double.NegativeInfinity), shellOf.Count).ToArray();
+        for (int i = 0; i < m.VertexCount; i++)
+        {
+            if (!shellOf.TryGetValue(uf.Find(remap[i]), out int sh)) continue;
+            var v = m.Vertices[i];
+            shellMin[sh] = new Vec3(Math.Min(shellMin[sh].X, v.X), Math.Min(shellMin[sh].Y, v.Y), Math.Min(shellMin[sh].Z, v.Z));
+            shellMax[sh] = new Vec3(Math.Max(shellMax[sh].X, v.X), Math.Max(shellMax[sh].Y, v.Y), Math.Max(shellMax[sh].Z, v.Z));
+        }
         var origin = m.VertexCount > 0 ? m.Vertices[0] : default;
         for (int t = 0; t < f; t++)
         {
@@ -64,6 +73,10 @@ public static class MeshValidator
             shellVol[s] += (pa - origin).Dot((pb - origin).Cross(pc - origin)) / 6.0;
         }
         int chi = used.Count - undirected.Count + f;
+        // A negative shell is an internal cavity (fine) when it lies within the bounds of a positive shell.
+        bool IsCavity(int i) => Enumerable.Range(0, shellVol.Length).Any(j => j != i && shellVol[j] > 0 &&
+            shellMin[j].X <= shellMin[i].X && shellMin[j].Y <= shellMin[i].Y && shellMin[j].Z <= shellMin[i].Z &&
+            shellMax[j].X >= shellMax[i].X && shellMax[j].Y >= shellMax[i].Y && shellMax[j].Z >= shellMax[i].Z);
         int shells = shellOf.Count;
         return new MeshReport
         {
@@ -76,7 +89,7 @@ public static class MeshValidator
             NonFiniteVertices = nonFinite,
             EulerCharacteristic = chi,
             ShellCount = shells,
-            InwardShells = shellVol.Count(v => !(v > 0)),
+            InwardShells = Enumerable.Range(0, shells).Count(i => !(shellVol[i] > 0) && !IsCavity(i)),
             Genus = (2 * shells - chi) / 2,
             SignedVolume = shellVol.Sum(),
         };
