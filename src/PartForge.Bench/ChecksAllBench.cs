@@ -25,10 +25,7 @@ public sealed class ChecksAllBench : IBenchCase
     {
         _design = ElectricalBenchCase.Largest();
         _electrical = ElectricalEngine.Evaluate(_design);
-        var o = _electrical.Coil?.Outline ?? throw new InvalidOperationException("the bench design's coil did not resolve");
-        var coil = new CoilGeometry(o.PitchRadiusMm, o.Outer, o.Window, o.HeightMm, _electrical.Coil.Turns, _electrical.Coil.WireOverallMm,
-            _electrical.Sensors?.Sensors.Select(s => s.AngleDeg).ToArray() ?? Array.Empty<double>());
-        _parts = PartsBuilder.Build(_design, coil, Precision.FromChordalTolerance(_design.Mesh.ChordalTolerance));
+        _parts = PartsBuilder.Build(_design, _electrical, Precision.FromChordalTolerance(_design.Mesh.ChordalTolerance));
     }
 
     public IReadOnlyDictionary<string, double> Run()

@@ -48,9 +48,14 @@ public static partial class CheckRunner
             ? $"motor operating point (rated {Judge.F(design.Machine.RatedRpm)} rpm, operation.supply_voltage {Judge.F(design.Operation.SupplyVoltage)} V)"
             : $"generator operating point (rated {Judge.F(design.Machine.RatedRpm)} rpm into operation.load_resistance {Judge.F(design.Operation.LoadResistance)} ohm)";
         var pulls = new Dictionary<string, double>();
+        // Only dual-rotor machines feel a net axial pull on a rotor (the coreless stator holds no iron; a
+        // magnet's attraction to its own back iron is internal to the rotor): skip the field work otherwise.
         MagneticPullResult? pull = null;
-        try { pull = MagneticPull.Compute(design); }
-        catch (ArgumentException) { pull = null; }
+        if (design.Machine.Layout == "dual-rotor")
+        {
+            try { pull = MagneticPull.Compute(design); }
+            catch (ArgumentException) { pull = null; }
+        }
         var stack = Design.Stack.AxialStack.From(design);
         foreach (var rotor in stack.Slabs.Where(s => s.Kind == Design.Stack.SlabKind.Rotor).Select(s => s.Owner).Distinct())
             pulls[rotor] = pull?.RotorToRotorN ?? 0;

@@ -220,6 +220,10 @@ public static class ExactDistance
     {
         overlap = false;
         if (a.Bounds.DistanceTo(b.Bounds) >= cutoff) return double.PositiveInfinity;
+        // Containment first (two point tests): a point of one inside the other means they overlap.
+        var pa = SegmentsOf(a.Outer)[0].Start;
+        var pb = SegmentsOf(b.Outer)[0].Start;
+        if (b.Contains(pa) || a.Contains(pb)) { overlap = true; return 0; }
         double best = double.PositiveInfinity;
         foreach (var ca in a.Boundaries())
         {
@@ -231,10 +235,38 @@ public static class ExactDistance
                 if (best <= Epsilon) { overlap = true; return 0; }
             }
         }
-        var pa = SegmentsOf(a.Outer)[0].Start;
-        var pb = SegmentsOf(b.Outer)[0].Start;
-        if (b.Contains(pa) || a.Contains(pb)) { overlap = true; return 0; }
         return best;
+    }
+
+    /// <summary>Largest distance of a contour from the origin (exact: line ends, arc ends and the arc point facing away).</summary>
+    public static double MaxRadius(Contour c)
+    {
+        double best = 0;
+        foreach (var s in SegmentsOf(c))
+        {
+            best = Math.Max(best, Math.Max(s.Start.Length, s.End.Length));
+            if (s is ArcSegment a)
+            {
+                double cl = a.Center.Length;
+                var dir = cl > 0 ? a.Center * (1 / cl) : new Vec2(1, 0);
+                if (AngleOnArc(AngleOf(dir), a)) best = Math.Max(best, cl + a.Radius);
+            }
+        }
+        return best;
+    }
+
+    /// <summary>
+    /// Radial range of a shape's material about the origin: (0 when the origin is in the material, else the
+    /// distance to the nearest boundary; the outer boundary's largest radius). Rotation about the origin leaves
+    /// it unchanged, so the gap between two shapes' ranges bounds their distance at every angle.
+    /// </summary>
+    public static (double Min, double Max) RadialRange(Shape2D s)
+    {
+        var o = new Vec2(0, 0);
+        double min = double.PositiveInfinity;
+        if (s.Contains(o)) min = 0;
+        else foreach (var c in s.Boundaries()) min = Math.Min(min, PointContour(o, c));
+        return (min, MaxRadius(s.Outer));
     }
 
     /// <summary>Distance between two filled shapes without a cutoff.</summary>

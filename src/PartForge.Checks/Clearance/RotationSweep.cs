@@ -11,7 +11,8 @@ namespace PartForge.Checks.Clearance;
 /// z-ranges overlap the distance is the exact 2D distance between the shapes; if not, it is
 /// sqrt(dz^2 + d2^2) with dz the axial gap and d2 the 2D distance of the projections (dz alone where they
 /// overlap). Pairs are found with an STRtree over the stationary prisms' bounds, queried with the rotating
-/// prism's bounds grown by the best clearance so far, and pruned by dz before any exact distance is taken.
+/// prism's bounds grown by the best clearance so far, and pruned before any exact distance is taken by a
+/// rotation-invariant lower bound (axial gap and the gap between the radial ranges about the axis).
 /// The coarse step is the smaller of the requested step and the smallest feature's angular size; the
 /// minimum is then refined on a bracket of one coarse step either side, three times tenfold.
 /// </summary>
@@ -29,19 +30,14 @@ public static class RotationSweep
         int n = Math.Max(1, (int)Math.Ceiling(period / step - 1e-9));
         step = period / n;
 
-        var tree = new STRtree<int>();
-        for (int i = 0; i < scene.Stationary.Count; i++)
-        {
-            var b = scene.Stationary[i].Shape.Bounds;
-            tree.Insert(new Envelope(b.MinX, b.MaxX, b.MinY, b.MaxY), i);
-        }
-        tree.Build();
+        var tree = Index(scene);
+        var bounds = LowerBounds(scene);
 
         var best = new Candidate(double.PositiveInfinity, 0, -1, -1, 0, 0);
         int evaluations = 0;
         for (int k = 0; k < n; k++)
         {
-            Evaluate(scene, tree, k * step, ref best);
+            Evaluate(scene, tree, bounds, k * step, ref best);
             evaluations++;
         }
         double h = step;
@@ -51,7 +47,7 @@ public static class RotationSweep
             for (int s = -RefineSamples; s <= RefineSamples; s++)
             {
                 if (s == 0) continue;
-                Evaluate(scene, tree, centre + s * h / RefineSamples, ref best);
+                Evaluate(scene, tree, bounds, centre + s * h / RefineSamples, ref best);
                 evaluations++;
             }
             h /= RefineSamples;
@@ -67,15 +63,9 @@ public static class RotationSweep
     /// <summary>The clearance at one rotor angle (no pruning across angles); for tests and the report.</summary>
     public static SweepResult At(SweepScene scene, double angleDeg)
     {
-        var tree = new STRtree<int>();
-        for (int i = 0; i < scene.Stationary.Count; i++)
-        {
-            var b = scene.Stationary[i].Shape.Bounds;
-            tree.Insert(new Envelope(b.MinX, b.MaxX, b.MinY, b.MaxY), i);
-        }
-        tree.Build();
+        var tree = Index(scene);
         var best = new Candidate(double.PositiveInfinity, angleDeg, -1, -1, 0, 0);
-        Evaluate(scene, tree, angleDeg, ref best);
+        Evaluate(scene, tree, LowerBounds(scene), angleDeg, ref best);
         return best.Rotating < 0
             ? new SweepResult(double.PositiveInfinity, angleDeg, null, null, 0, 0, 0, 1)
             : new SweepResult(best.Distance, angleDeg, scene.Rotating[best.Rotating], scene.Stationary[best.Stationary], best.Axial, best.Planar, 0, 1);
@@ -83,10 +73,58 @@ public static class RotationSweep
 
     private readonly record struct Candidate(double Distance, double AngleDeg, int Rotating, int Stationary, double Axial, double Planar);
 
-    private static void Evaluate(SweepScene scene, STRtree<int> tree, double angleDeg, ref Candidate best)
+    private static STRtree<int> Index(SweepScene scene)
     {
-        for (int r = 0; r < scene.Rotating.Count; r++)
+        var tree = new STRtree<int>();
+        for (int i = 0; i < scene.Stationary.Count; i++)
         {
+            var b = scene.Stationary[i].Shape.Bounds;
+            tree.Insert(new Envelope(b.MinX, b.MaxX, b.MinY, b.MaxY), i);
+        }
+        tree.Build();
+        return tree;
+    }
+
+    /// <summary>
+    /// Rotation-invariant lower bounds: for each pair, sqrt(dz^2 + g^2) with dz the axial gap (0 when the
+    /// z-ranges overlap) and g the gap between the two shapes' radial ranges about the axis; and for each
+    /// rotating prism the smallest of its bounds. A prism or pair whose bound is not below the best clearance
+    /// so far cannot improve it at any angle and is skipped before it is even rotated.
+    /// </summary>
+    private sealed record Bounds(double[,] Pair, double[] Prism, int[] PrismOrder);
+
+    private static Bounds LowerBounds(SweepScene scene)
+    {
+        var rr = scene.Rotating.Select(p => ExactDistance.RadialRange(p.Shape)).ToArray();
+        var sr = scene.Stationary.Select(p => ExactDistance.RadialRange(p.Shape)).ToArray();
+        var pair = new double[rr.Length, sr.Length];
+        var prism = new double[rr.Length];
+        for (int r = 0; r < rr.Length; r++)
+        {
+            prism[r] = double.PositiveInfinity;
+            for (int s = 0; s < sr.Length; s++)
+            {
+                var rp = scene.Rotating[r];
+                var sp = scene.Stationary[s];
+                double dz = Math.Max(0, Math.Max(sp.Z0 - rp.Z1, rp.Z0 - sp.Z1));
+                double g = Math.Max(0, Math.Max(sr[s].Min - rr[r].Max, rr[r].Min - sr[s].Max));
+                pair[r, s] = Math.Sqrt(dz * dz + g * g);
+                prism[r] = Math.Min(prism[r], pair[r, s]);
+            }
+        }
+        var order = Enumerable.Range(0, rr.Length).OrderBy(i => prism[i]).ThenBy(i => i).ToArray();
+        return new Bounds(pair, prism, order);
+    }
+
+    /// <summary>A lower bound that is not below the best cannot improve it; a positive bound cannot interfere either.</summary>
+    private static bool CannotImprove(double lowerBound, double best) => best > 0 ? lowerBound >= best : lowerBound > 0;
+
+    private static void Evaluate(SweepScene scene, STRtree<int> tree, Bounds bounds, double angleDeg, ref Candidate best)
+    {
+        // Prisms in ascending order of their lower bound: once one cannot improve, none after it can.
+        foreach (int r in bounds.PrismOrder)
+        {
+            if (CannotImprove(bounds.Prism[r], best.Distance)) break;
             var rp = scene.Rotating[r];
             var shape = rp.Shape.RotatedDeg(angleDeg);
             var b = shape.Bounds;
@@ -95,9 +133,11 @@ public static class RotationSweep
             var hits = tree.Query(env);
             // Deterministic order regardless of the tree's internal order.
             var order = hits.ToArray();
-            Array.Sort(order);
+            int rr = r;
+            Array.Sort(order, (x, y) => bounds.Pair[rr, x] != bounds.Pair[rr, y] ? bounds.Pair[rr, x].CompareTo(bounds.Pair[rr, y]) : x.CompareTo(y));
             foreach (int s in order)
             {
+                if (CannotImprove(bounds.Pair[r, s], best.Distance)) break;
                 var sp = scene.Stationary[s];
                 double dz = Math.Max(sp.Z0 - rp.Z1, rp.Z0 - sp.Z1);
                 if (dz >= best.Distance) continue;
@@ -113,7 +153,7 @@ public static class RotationSweep
                 else
                 {
                     double d2 = ExactDistance.ShapeShape(shape, sp.Shape, double.IsFinite(best.Distance) && best.Distance > 0 ? best.Distance : double.PositiveInfinity, out bool overlap);
-                    double d = overlap ? dz : d2;   // interference: minus the axial overlap
+                    double d = overlap ? dz : d2;   // interference: minus the axial shift that separates them
                     if (d < best.Distance) best = new Candidate(d, angleDeg, r, s, 0, overlap ? 0 : d2);
                 }
             }

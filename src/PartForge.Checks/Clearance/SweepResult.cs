@@ -4,7 +4,7 @@ namespace PartForge.Checks.Clearance;
 /// The minimum clearance found by the rotation sweep.
 /// </summary>
 /// <param name="ClearanceMm">Minimum 3D distance between a rotating and a stationary prism; negative when two
-/// prisms interfere (then minus their axial overlap).</param>
+/// prisms interfere: then minus the axial shift that would separate them (the smaller of the two ways out).</param>
 /// <param name="AngleDeg">Rotor angle at which it occurs (first such angle), degrees.</param>
 /// <param name="Rotating">The rotating prism involved (null when the scene has none).</param>
 /// <param name="Stationary">The stationary prism involved.</param>

@@ -20,14 +20,26 @@ internal static class SweepRules
         var (status, margin) = AtLeast(r.ClearanceMm, limit, MinBand(limit));
         string where = $"{r.Rotating.Part} {r.Rotating.Feature} / {r.Stationary.Part} {r.Stationary.Feature}";
         string msg = r.Interference
-            ? $"{where} interfere: they overlap {F(-r.ClearanceMm)} mm axially at rotor angle {F(r.AngleDeg)} degrees"
+            ? $"{where} interfere at rotor angle {F(r.AngleDeg)} degrees: {F(-r.ClearanceMm)} mm of axial shift would separate them"
             : $"minimum clearance {F(r.ClearanceMm)} mm ({F(r.AxialMm)} axial, {F(r.PlanarMm)} in plane) between {where} at rotor angle {F(r.AngleDeg)} degrees (sweep over {F(scene.PeriodDeg)} degrees, step {F(r.StepDeg)})";
         if (status != CheckStatus.Pass)
         {
-            double s = limit + MinBand(limit) - r.ClearanceMm;
-            msg += r.PlanarMm > r.AxialMm && !r.Interference
-                ? $"; move them {Up(s)} mm further apart in the plane (the parts' radial sizes or coils.pitch_radius)"
-                : $"; raise gap.air_gap to at least {Up(c.D.Gap.AirGap + s)}";
+            double need = limit + MinBand(limit);
+            if (r.Interference && r.AxialMm == 0 && RadialOverlap(r.Rotating, r.Stationary) is { } radial)
+            {
+                // Overlapping in the plane where their z-ranges overlap: the radial ranges say by how much.
+                var (overlap, rotatingInside) = radial;
+                msg += rotatingInside
+                    ? $"; the {r.Rotating.Part} reaches {F(overlap)} mm past the inner edge of the {r.Stationary.Part}: make the {r.Stationary.Part}'s inner radius {Up(overlap + need)} mm larger or the {r.Rotating.Part}'s outer radius that much smaller"
+                    : $"; the {r.Stationary.Part} reaches {F(overlap)} mm inside the outer edge of the {r.Rotating.Part}: make the {r.Rotating.Part}'s outer radius {Up(overlap + need)} mm smaller or the {r.Stationary.Part}'s inner radius that much larger";
+            }
+            else
+            {
+                double s = need - r.ClearanceMm;
+                msg += r.PlanarMm > r.AxialMm && !r.Interference
+                    ? $"; move them {Up(s)} mm further apart in the plane (the parts' radial sizes or coils.pitch_radius)"
+                    : $"; raise gap.air_gap to at least {Up(c.D.Gap.AirGap + s)}";
+            }
         }
         yield return new CheckResult
         {
@@ -35,6 +47,19 @@ internal static class SweepRules
             Message = msg, Where = new CheckLocation(where, r.AngleDeg),
             Basis = "rotation sweep over one pole pitch on the layered solids: axial overlap plus exact 2D distance, sqrt(dz^2 + d2^2)",
         };
+    }
+
+    /// <summary>
+    /// How far the radial ranges of two interfering prisms overlap, and whether the rotating one is the inner
+    /// one (its material reaches out into the stationary one); null when the ranges do not overlap.
+    /// </summary>
+    private static (double Overlap, bool RotatingInside)? RadialOverlap(SweepPrism rotating, SweepPrism stationary)
+    {
+        var a = ExactDistance.RadialRange(rotating.Shape);
+        var b = ExactDistance.RadialRange(stationary.Shape);
+        double outward = a.Max - b.Min, inward = b.Max - a.Min;
+        if (outward <= 0 || inward <= 0) return null;
+        return outward <= inward ? (outward, true) : (inward, false);
     }
 
     /// <summary>The sweep scene: rotor layers and magnets turn; stator, formers and copper stand still.</summary>

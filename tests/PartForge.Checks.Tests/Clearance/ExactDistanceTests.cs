@@ -64,6 +64,22 @@ public class ExactDistanceTests
         Assert.Equal(2, ExactDistance.ShapeShape(s1, rimInside), 9);
     }
 
+    [Fact]
+    public void Radial_range_of_discs_rings_and_offset_circles()
+    {
+        // A ring about the axis: its radii. An off-axis disc: |c| - r .. |c| + r. A disc over the axis: 0 .. |c| + r.
+        Assert.Equal((20.0, 95.0), ExactDistance.RadialRange(Shape2D.Annulus(20, 95)));
+        var (a, b) = ExactDistance.RadialRange(Shape2D.Disc(new Vec2(30, 40), 5));
+        Assert.Equal(45, a, 12);
+        Assert.Equal(55, b, 12);
+        Assert.Equal((0.0, 7.0), ExactDistance.RadialRange(Shape2D.Disc(new Vec2(2, 0), 5)));
+        // A square [10,20]^2: nearest corner (10,10), farthest (20,20).
+        var sq = new Shape2D(Contour.Rectangle(new Vec2(15, 15), 10, 10, 0));
+        var (c, d) = ExactDistance.RadialRange(sq);
+        Assert.Equal(10 * Math.Sqrt(2), c, 12);
+        Assert.Equal(20 * Math.Sqrt(2), d, 12);
+    }
+
     // Property: the exact segment distance never exceeds, and is within the sampling error of, the brute-force
     // minimum over densely sampled points of the two segments (the test's own independent estimate).
     [Fact]

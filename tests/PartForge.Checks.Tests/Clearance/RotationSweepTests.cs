@@ -59,7 +59,7 @@ public class RotationSweepTests
     }
 
     [Fact]
-    public void Interference_is_reported_as_minus_the_axial_overlap()
+    public void Interference_is_reported_as_minus_the_axial_shift_that_separates()
     {
         var rot = Magnets(12, 40, 5, 0, 3);
         var sta = new[] { new SweepPrism("stator", "copper", 2.6, 5, Shape2D.Ring(new Vec2(40, 0), 2, 9)) };
@@ -78,5 +78,21 @@ public class RotationSweepTests
         Assert.True(r.StepDeg <= RotationSweep.SmallestFeatureDeg(new SweepScene(rot, sta, 360)) + 1e-12);
         // Pins meet head-on at 0.9 degrees: distance 0 (touching) at best; here they overlap -> interference.
         Assert.True(r.ClearanceMm <= 0);
+    }
+
+    [Fact]
+    public void A_hub_spacer_wider_than_the_stator_bore_interferes_at_every_angle()
+    {
+        // A rotating hub ring of outer radius 24.75 through a stator ring of inner radius 20, z-ranges
+        // overlapping: interference, reported as minus the axial shift that separates them: the hub would have
+        // to move 3.8 + 5.3 = 9.1 mm (either way) to clear the ring.
+        var rot = new[] { new SweepPrism("spacer", "hub", -5.3, 5.3, Shape2D.Annulus(6, 24.75)) };
+        var sta = new[] { new SweepPrism("stator", "ring", -3.8, 3.8, Shape2D.Annulus(20, 95)) };
+        var r = RotationSweep.Run(new SweepScene(rot, sta, 22.5), 0.5);
+        Assert.True(r.Interference);
+        Assert.Equal(-9.1, r.ClearanceMm, 9);
+        // Same hub 1 mm inside the bore: a radial clearance of exactly 1.
+        var ok = new[] { new SweepPrism("spacer", "hub", -5.3, 5.3, Shape2D.Annulus(6, 19)) };
+        Assert.Equal(1.0, RotationSweep.Run(new SweepScene(ok, sta, 22.5), 0.5).ClearanceMm, 9);
     }
 }

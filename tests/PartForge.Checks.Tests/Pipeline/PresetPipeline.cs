@@ -32,10 +32,7 @@ internal static class PresetPipeline
     public static (ElectricalResult E, PartSet Parts) Stages(Design.Model.Design d)
     {
         var e = ElectricalEngine.Evaluate(d);
-        var o = e.Coil!.Outline!;
-        var coil = new CoilGeometry(o.PitchRadiusMm, o.Outer, o.Window, o.HeightMm, e.Coil.Turns, e.Coil.WireOverallMm,
-            e.Sensors?.Sensors.Select(s => s.AngleDeg).ToArray() ?? Array.Empty<double>());
-        var parts = PartsBuilder.Build(d, coil, Precision.FromChordalTolerance(d.Mesh.ChordalTolerance));
+        var parts = PartsBuilder.Build(d, e, Precision.FromChordalTolerance(d.Mesh.ChordalTolerance));
         return (e, parts);
     }
 
