@@ -15,8 +15,9 @@ public static class CheckCommand
         var cmd = new Command("check", "Load and validate a design, compute its electrical results and run every check. Writes no files.") { design, json };
         CommandAction.Set(cmd, (pr, s) =>
         {
-            var r = BuildPipeline.Check(pr.GetValue(design)!);
-            return Report(s, r, pr.GetValue(json));
+            bool asJson = pr.GetValue(json);
+            var r = BuildPipeline.Check(pr.GetValue(design)!, meshes: asJson);
+            return Report(s, r, asJson);
         });
         return cmd;
     }

@@ -47,13 +47,15 @@ public static class BuildPipeline
     }
 
     /// <summary><c>partforge check</c>: load, evaluate, results document; writes nothing.</summary>
-    public static PipelineResult Check(string designPath)
+    /// <param name="meshes">Mesh the parts for the triangle counts of the results document (check --json); the
+    /// human summary does not show them and skips the meshing.</param>
+    public static PipelineResult Check(string designPath, bool meshes = true)
     {
         var loaded = DesignLoader.Load(designPath);
         if (!loaded.Success) return Bad(loaded.Errors.Select(e => e.ToString()));
         var (ev, problem) = TryEvaluate(loaded.Design!, designPath);
         if (ev == null) return Bad([problem!]);
-        var doc = ResultsBuilder.Build(ev);
+        var doc = ResultsBuilder.Build(ev, countTriangles: meshes);
         return new PipelineResult
         {
             Status = ev.Checks.HasFailures ? PipelineStatus.ChecksFailed : PipelineStatus.Ok,
@@ -92,7 +94,7 @@ public static class BuildPipeline
                 Status = failed ? PipelineStatus.ChecksFailed : PipelineStatus.BadInput,
                 Problems = failed ? FailLines(ev.Checks) : ["no parts could be made from this design"],
                 Evaluation = ev,
-                Results = ResultsBuilder.Build(ev),
+                Results = ResultsBuilder.Build(ev, countTriangles: false),
             };
         }
 

@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Text;
 using System.Text.Json;
 
@@ -116,7 +117,9 @@ public static class ResultsJson
     private static void Num(Utf8JsonWriter w, string name, double v, string field)
     {
         if (!double.IsFinite(v)) throw new NonFiniteResultException(field, v);
-        // Negative zero would print as "-0": same value, but not byte-stable across code paths.
-        w.WriteNumber(name, v == 0 ? 0.0 : v);
+        // 12 significant digits: far below any tolerance in the document, and it keeps binary noise such as
+        // 1.7999999999999998 out of it. Negative zero would print as "-0": written as 0.
+        double r = v == 0 ? 0.0 : double.Parse(v.ToString("G12", CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
+        w.WriteNumber(name, r);
     }
 }
