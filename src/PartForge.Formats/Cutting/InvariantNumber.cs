@@ -58,6 +58,32 @@ internal static class InvariantNumber
         return true;
     }
 
+    /// <summary>The same fast path writing ASCII bytes (for the 3MF model part, which is built as bytes).</summary>
+    internal static bool TryFormatGridUtf8(double v, Span<byte> dest, out int length)
+    {
+        length = 0;
+        if (!(Math.Abs(v) < 1e11)) return false;
+        double k = Math.Round(v * 10000.0);
+        if (k == 0 || k / 10000.0 != v) return false;
+        long n = (long)k;
+        int pos = 0;
+        if (n < 0) { dest[pos++] = (byte)'-'; n = -n; }
+        Span<byte> digits = stackalloc byte[20];
+        int count = 0;
+        for (long x = n; x > 0; x /= 10) digits[count++] = (byte)('0' + (int)(x % 10));
+        int trailing = 0;
+        while (trailing < 4 && (trailing >= count || digits[trailing] == '0')) trailing++;
+        if (count <= 4) dest[pos++] = (byte)'0';
+        else for (int i = count - 1; i >= 4; i--) dest[pos++] = digits[i];
+        if (trailing < 4)
+        {
+            dest[pos++] = (byte)'.';
+            for (int i = 3; i >= trailing; i--) dest[pos++] = i < count ? digits[i] : (byte)'0';
+        }
+        length = pos;
+        return true;
+    }
+
     /// <summary>General path: the runtime's shortest round-trip text, with any exponent expanded.</summary>
     internal static int FormatRoundTrip(double v, Span<char> dest)
     {

@@ -39,6 +39,8 @@ internal sealed class AsciiBuffer
     public void Append(double v)
     {
         Ensure(InvariantNumber.MaxChars);
+        if (v == 0) { _buf[_len++] = (byte)'0'; return; }
+        if (InvariantNumber.TryFormatGridUtf8(v, _buf.AsSpan(_len), out int fast)) { _len += fast; return; }
         var chars = _chars.AsSpan();
         int n = InvariantNumber.Format(v, chars);
         var dest = _buf.AsSpan(_len, n);

@@ -133,6 +133,9 @@ public class KerfCompensationTests
                 if (v == 0) continue;
                 string general = new(q[..InvariantNumber.FormatRoundTrip(v, q)]);
                 if (InvariantNumber.TryFormatGrid(v, p, out int n)) Assert.Equal(general, new string(p[..n]));
+                Span<byte> u = stackalloc byte[64];
+                if (InvariantNumber.TryFormatGridUtf8(v, u, out int nu)) Assert.Equal(general, System.Text.Encoding.ASCII.GetString(u[..nu]));
+                Assert.Equal(InvariantNumber.TryFormatGrid(v, p, out _), InvariantNumber.TryFormatGridUtf8(v, u, out _));
                 Assert.Equal(general, InvariantNumber.Format(v));
             }
         }, iter: 20000);
