@@ -12,7 +12,8 @@ public static class PartDrawing
         double extent = Math.Max(maxX - minX, maxY - minY);
         if (!(extent > 0)) extent = 1;
         double text = Math.Max(1.6, extent / 34);
-        double pad = extent * 0.42 + text * 6;
+        int longest = sk.Diameters.Select(x => x.Label.Length).Concat(sk.Notes.Select(x => x.Label.Length)).DefaultIfEmpty(8).Max();
+        double pad = extent * 0.15 + text * (0.6 * longest + 5);
         var c = new SvgCanvas(minX - pad, minY - pad * 0.55, maxX - minX + 2 * pad, maxY - minY + pad * 1.1);
         double arrow = text * 1.1;
 
@@ -92,7 +93,7 @@ public static class PartDrawing
         return c.ToSvg("drawing", sk.Title, displayWidthPx, ("data-part", sk.PartName));
     }
 
-    internal static void DrawLinear(SvgCanvas c, LinearDimension l, double text, double arrow)
+    internal static void DrawLinear(SvgCanvas c, LinearDimension l, double text, double arrow, bool withLabel = true)
     {
         var d = l.To - l.From;
         double len = d.Length;
@@ -117,6 +118,11 @@ public static class PartDrawing
             c.Line(a.X - u.X * arrow * 2.2, a.Y - u.Y * arrow * 2.2, b.X + u.X * arrow * 2.2, b.Y + u.Y * arrow * 2.2, l.Style == "gap" ? "gap-line" : "dim-line");
             c.Arrow(a.X, a.Y, u.X, u.Y, arrow, l.Style == "gap" ? "gap-arrow" : "dim-arrow");
             c.Arrow(b.X, b.Y, -u.X, -u.Y, arrow, l.Style == "gap" ? "gap-arrow" : "dim-arrow");
+        }
+        if (!withLabel)
+        {
+            c.EndGroup();
+            return;
         }
         var mid = (a + b) * 0.5 + nrm * (Math.Sign(l.OffsetMm == 0 ? 1 : l.OffsetMm) * text * 0.5);
         double ang = Math.Atan2(u.Y, u.X) * 180 / Math.PI;

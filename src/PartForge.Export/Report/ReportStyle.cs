@@ -36,6 +36,7 @@ svg text { font-family:"DejaVu Sans", sans-serif; }
 .dim-line, .ext-line { stroke:var(--dim); stroke-width:0.22; fill:none; }
 .ext-line { stroke-width:0.15; }
 .dim-arrow, .dim-dot { fill:var(--dim); }
+.leader { stroke:var(--dim); stroke-width:0.08; fill:none; } .gap-leader { stroke:var(--gap); stroke-width:0.1; fill:none; }
 .dim-text { fill:var(--dim); }
 .gap-line { stroke:var(--gap); stroke-width:0.25; } .gap-arrow { fill:var(--gap); }
 .gap-text, .dim-text { paint-order:stroke; stroke:#fffdf8; stroke-width:0.5; stroke-linejoin:round; } .gap-text { fill:var(--gap); font-weight:bold; }

@@ -77,10 +77,10 @@ public static class SectionBuilder
                 SlabKind.Magnet => magOut, SlabKind.Former => coil.FormerRMax, SlabKind.Stator => statOut, _ => rotOut,
             };
             int laneNo = s.Kind is SlabKind.Magnet or SlabKind.Former ? 2 : 1;
-            // Offset is measured to the left of From -> To; From is the top, so a negative offset goes right.
-            double off = -((right - x) + step * laneNo);
+            // Offset is measured to the left of From -> To; From is the top, so a positive offset goes right.
+            double off = (right - x) + step * laneNo;
             dims.Add(new LinearDimension(id + ":" + s.Owner, new Vec2(x, s.ZMax), new Vec2(x, s.ZMin), off, s.Thickness,
-                $"{id.Replace('_', ' ')} {F(s.Thickness)}"));
+                $"{id.Replace('_', ' ')}, {s.Owner}: {F(s.Thickness)}"));
         }
 
         // Running gaps: from each stationary face to the nearest rotating surface, drawn at the magnet's mid
@@ -90,7 +90,7 @@ public static class SectionBuilder
         {
             double nominal = Math.Abs(rotFace - statFace);
             bool has = runningGapByPart.TryGetValue(owner, out double worst);
-            string text = has ? $"running gap {F(nominal)} nominal, {F(worst)} worst case ({owner})" : $"running gap {F(nominal)} nominal ({owner})";
+            string text = has ? $"running gap, {owner}: {F(nominal)} nominal, {F(worst)} worst case" : $"running gap, {owner}: {F(nominal)} nominal";
             var from = new Vec2(rGap, Math.Min(statFace, rotFace));
             var to = new Vec2(rGap, Math.Max(statFace, rotFace));
             dims.Add(new LinearDimension("running_gap:" + owner, from, to, 0, has ? worst : nominal, text, "gap"));
