@@ -23,7 +23,7 @@ public static class MagneticPull
     /// <paramref name="gapMm"/> is the smallest axial distance between the target's faces and the sources, used
     /// to grade the face quadrature towards the edges.
     /// </summary>
-    public static double AxialForceN(MagnetSource target, IReadOnlyList<MagnetSource> sources, double gapMm, int order = 6)
+    public static double AxialForceN(MagnetSource target, IReadOnlyList<MagnetSource> sources, double gapMm, int order = 4)
     {
         var (pts, wts) = FacePoints(target.Geometry, target.CentreDeg, gapMm, order);
         double top = 0, bottom = 0;
@@ -66,7 +66,7 @@ public static class MagneticPull
         {
             var imgs = front.Select(m => m.ImageIn(frontIronPlane, far)).ToList();
             double gap = 2 * (frontIronPlane - target.ZMaxMm);
-            toIron = Math.Abs(AxialForceN(target, imgs, Math.Max(gap, 0), 8));
+            toIron = Math.Abs(AxialForceN(target, imgs, Math.Max(gap, 0)));
         }
 
         double perMagnet = 0, faceToFace = 0;
@@ -150,11 +150,11 @@ public static class MagneticPull
         return (pts.ToArray(), wts.ToArray());
     }
 
-    /// <summary>Breakpoints on [a, b] graded geometrically (ratio 2) towards the chosen ends, finest piece about gap/4.</summary>
+    /// <summary>Breakpoints on [a, b] graded geometrically (ratio 2) towards the chosen ends, finest piece about gap/2.</summary>
     private static List<double> Graded(double a, double b, double gapMm, bool atStart, bool atEnd)
     {
         double len = b - a;
-        double h = Math.Max(gapMm / 4, 1e-3 * len);
+        double h = Math.Max(gapMm / 2, 1e-3 * len);
         var offs = new List<double>();
         for (double t = h; t < len / 2; t *= 2) offs.Add(t);
         var pts = new SortedSet<double> { a, b, a + len / 2 };
@@ -163,7 +163,7 @@ public static class MagneticPull
             if (atStart) pts.Add(a + o);
             if (atEnd) pts.Add(b - o);
         }
-        if (!atStart || !atEnd)
+        if ((!atStart || !atEnd) && h < len / 4)
         {
             // one-sided: also split the coarse side evenly so each piece stays short.
             for (int i = 1; i < 4; i++) pts.Add(a + len * i / 4);

@@ -39,7 +39,7 @@ public sealed class RotorField
     public int Poles { get; }
 
     /// <summary>Default distance factor beyond which magnets are replaced by dipoles (see MagnetSource).</summary>
-    public const double DefaultFarFactor = 3.0;
+    public const double DefaultFarFactor = 2.5;
 
     private RotorField(IReadOnlyList<MagnetSource> sources, IReadOnlyList<MagnetSource>? half, double c0, double c1, bool iron, int poles)
     {

@@ -10,7 +10,7 @@ namespace PartForge.Electrical.Flux;
 /// <param name="SamplesPerPeriod">Rotor positions per electrical period (a multiple of 4; harmonics up to half of it are resolved).</param>
 /// <param name="FarFactor">Magnets farther than this many magnet sizes are replaced by dipoles (0: never).</param>
 /// <param name="MaxPieceGaps">Radial pieces are split to be no longer than this many magnetic gaps (the field's length scale near magnet edges).</param>
-public sealed record FluxQuadrature(int RadialOrder = 6, int AngularOrder = 12, int AxialOrder = 3, int SamplesPerPeriod = 72, double FarFactor = 3.0, double MaxPieceGaps = 6.0)
+public sealed record FluxQuadrature(int RadialOrder = 5, int AngularOrder = 12, int AxialOrder = 3, int SamplesPerPeriod = 72, double FarFactor = 2.5, double MaxPieceGaps = 6.0)
 {
     public static FluxQuadrature Default { get; } = new();
 
