@@ -196,6 +196,36 @@ print(json.dumps(out))
     }
 
     [Fact]
+    public void DiscWithAHundredHolesReadsBackCompensated()
+    {
+        // 400 mm disc, 64 round holes D15.2 on r 180 and 36 annular-sector windows (r 90..140, 7 degrees), kerf 0.15.
+        var holes = new List<Contour>();
+        for (int i = 0; i < 64; i++) holes.Add(Contour.FullCircle(Vec2.FromAngleDeg(i * 360.0 / 64) * 180, 7.6));
+        for (int i = 0; i < 36; i++) holes.Add(Contour.AnnularSector(90, 140, i * 10 + 1, 7));
+        var sheet = CutSheet.Of("disc", new Profile(new[] { Contour.FullCircle(new Vec2(0, 0), 200) }, holes), 0.15);
+        string path = ExternalReader.TempFile(".dxf");
+        DxfWriter.WriteFile(path, sheet);
+        var r = ExternalReader.PythonJson(EzdxfScript, path);
+        File.Delete(path);
+        Assert.Equal(0, r.GetProperty("errors").GetInt32());
+        var circles = r.GetProperty("circles").EnumerateArray().Select(c => c[3].GetDouble()).ToList();
+        Assert.Equal(65, circles.Count);
+        Assert.Equal(64, circles.Count(x => Math.Abs(x - (7.6 - 0.075)) < 1e-12));
+        Assert.Equal(200.075, circles[^1], 12); // the outline comes last
+        var polys = r.GetProperty("polylines").EnumerateArray().ToList();
+        Assert.Equal(36, polys.Count);
+        foreach (var p in polys)
+        {
+            Assert.True(p[1].GetBoolean());
+            // A shrunk window keeps sharp corners: two concentric arcs, radii 90 + h and 140 - h.
+            var radii = p[4].EnumerateArray().Select(x => x.GetDouble()).OrderBy(x => x).ToArray();
+            Assert.Equal(2, radii.Length);
+            Assert.Equal(90.075, radii[0], 9);
+            Assert.Equal(139.925, radii[1], 9);
+        }
+    }
+
+    [Fact]
     public void NonAsciiNamesAreEscaped()
     {
         var bytes = Write(SamplePlate.Sheet() with { PartName = "Läufer\nplate" });
