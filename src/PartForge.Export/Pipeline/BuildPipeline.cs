@@ -178,6 +178,7 @@ public static class BuildPipeline
 
     private static (Evaluation? Ev, string? Problem) TryEvaluate(Design.Model.Design d, string file)
     {
+        if (MeshBudget.Check(d, file) is { } tooFine) return (null, tooFine);
         try
         {
             var ev = Evaluate(d);
