@@ -31,7 +31,9 @@ public sealed class KilledBuildTests
         var rn = Pf.Exe("build", newDesign, "-o", refNew);
         double buildMs = sw.Elapsed.TotalMilliseconds;
         Assert.True(rn.ExitCode == 0, Pf.Describe(rn));
+        sw.Restart();
         var ro = Pf.Exe("build", oldDesign, "-o", refOld);
+        buildMs = Math.Min(buildMs, sw.Elapsed.TotalMilliseconds); // the faster of two (the first pays for cold caches)
         Assert.True(ro.ExitCode == 0, Pf.Describe(ro));
         var newFiles = Read(refNew);
         var oldFiles = Read(refOld);
@@ -39,7 +41,7 @@ public sealed class KilledBuildTests
         Assert.Contains(newFiles.Keys, k => !newFiles[k].AsSpan().SequenceEqual(oldFiles[k]));
 
         // Kill moments spread over the whole run, from process start-up to the last rename.
-        double[] fractions = [0.05, 0.3, 0.5, 0.65, 0.75, 0.85, 0.92, 1.0];
+        double[] fractions = [0.05, 0.3, 0.5, 0.6, 0.7, 0.8, 0.88, 0.95];
         int killedMidway = 0;
         foreach (var (fraction, run) in fractions.Select((f, i) => (f, i)))
         {

@@ -5,7 +5,8 @@ public sealed class TempFolder : IDisposable
 {
     public TempFolder(string tag = "t")
     {
-        Path = System.IO.Path.Combine(System.IO.Path.GetTempPath(), $"pf-h8-{tag}-{Environment.ProcessId}-{Guid.NewGuid():N}"[..48]);
+        string name = $"pf-h8-{tag}-{Environment.ProcessId}-{Guid.NewGuid():N}";
+        Path = System.IO.Path.Combine(System.IO.Path.GetTempPath(), name[..Math.Min(name.Length, 48)]);
         Directory.CreateDirectory(Path);
     }
 
