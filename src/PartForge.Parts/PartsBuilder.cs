@@ -1,6 +1,7 @@
 using PartForge.Design.Stack;
 using PartForge.Geometry;
 using PartForge.Geometry.Meshes;
+using PartForge.Geometry.Primitives;
 using PartForge.Geometry.Profiles;
 using PartForge.Geometry.Regions;
 using PartForge.Geometry.Solids;
@@ -81,9 +82,72 @@ public static partial class PartsBuilder
         return new PartSet { Parts = models, Stack = stack, Diagnostics = diags, ExplodeMm = design.Assembly.Explode };
     }
 
-    /// <summary>The layered solid of exact layers on the precision grid (one region per layer).</summary>
-    public static LayeredSolid SolidOf(IReadOnlyList<ExactLayer> layers, Precision precision, int symmetry = 1) =>
-        new(layers.Select(l => new Layer(l.Z0Mm, l.Z1Mm, Region.FromProfile(new Profile(l.Outers, l.Cuts), precision, symmetry))));
+    /// <summary>
+    /// The layered solid of exact layers on the precision grid (one region per layer). Outers are discretised on
+    /// the true arcs and cuts outside them (holes never undersize), the same way in every layer. A layer whose
+    /// cuts are pairwise apart is assembled by the kernel directly. A layer whose cuts are those of the layer below plus some
+    /// more is made from the layer below by one difference with the union of the new cuts; other layers by one
+    /// difference with the union of all their cuts (a union of many small polygons at once, not a chain).
+    /// </summary>
+    public static LayeredSolid SolidOf(IReadOnlyList<ExactLayer> layers, Precision precision, int symmetry = 1)
+    {
+        var cuts = new Dictionary<Contour, Region>(ReferenceEqualityComparer.Instance);
+        var outers = new Dictionary<Contour, Region>(ReferenceEqualityComparer.Instance);
+        Region Cut(Contour c) => cuts.TryGetValue(c, out var r) ? r : cuts[c] = Region.FromContour(c, precision, asHole: true, symmetry);
+        Region Outer(Contour c) => outers.TryGetValue(c, out var r) ? r : outers[c] = Region.FromContour(c, precision, asHole: false, symmetry);
+        Region Union(IEnumerable<Region> rs) => Region.UnionAll(rs, precision);
+
+        var result = new List<Layer>(layers.Count);
+        ExactLayer? prev = null;
+        Region? prevRegion = null;
+        foreach (var l in layers)
+        {
+            Region region;
+            if (PairwiseApart(l.Cuts))
+            {
+                // Disjoint cuts: the kernel assembles the polygon directly from the discretised rings.
+                region = Region.FromProfile(new Profile(l.Outers, l.Cuts), precision, symmetry);
+                result.Add(new Layer(l.Z0Mm, l.Z1Mm, region));
+                prev = l;
+                prevRegion = region;
+                continue;
+            }
+            bool sameOuters = prev is not null && prev.Outers.Count == l.Outers.Count && prev.Outers.Zip(l.Outers).All(x => ReferenceEquals(x.First, x.Second));
+            var prevCuts = prev is null ? null : new HashSet<Contour>(prev.Cuts, ReferenceEqualityComparer.Instance);
+            if (sameOuters && prevCuts!.All(c => l.Cuts.Contains(c, ReferenceEqualityComparer.Instance)))
+            {
+                var added = l.Cuts.Where(c => !prevCuts!.Contains(c)).ToList();
+                region = added.Count == 0 ? prevRegion! : prevRegion!.Difference(added.Count == 1 ? Cut(added[0]) : Union(added.Select(Cut)));
+            }
+            else
+            {
+                var shell = l.Outers.Count == 1 ? Outer(l.Outers[0]) : Union(l.Outers.Select(Outer));
+                region = l.Cuts.Count == 0 ? shell : shell.Difference(l.Cuts.Count == 1 ? Cut(l.Cuts[0]) : Union(l.Cuts.Select(Cut)));
+            }
+            result.Add(new Layer(l.Z0Mm, l.Z1Mm, region));
+            prev = l;
+            prevRegion = region;
+        }
+        return new LayeredSolid(result);
+    }
+
+    /// <summary>True when the cuts' bounding boxes are pairwise apart (then no union is needed).</summary>
+    private static bool PairwiseApart(IReadOnlyList<Contour> cuts)
+    {
+        if (cuts.Count < 2) return true;
+        var boxes = cuts.Select(Box).OrderBy(b => b.X0).ToArray();
+        for (int i = 0; i < boxes.Length; i++)
+            for (int j = i + 1; j < boxes.Length && boxes[j].X0 <= boxes[i].X1; j++)
+                if (boxes[j].Y0 <= boxes[i].Y1 && boxes[i].Y0 <= boxes[j].Y1) return false;
+        return true;
+    }
+
+    private static (double X0, double Y0, double X1, double Y1) Box(Contour c)
+    {
+        const double pad = 1e-3;
+        return (-ExactGeometry.Support(c, new Vec2(-1, 0)) - pad, -ExactGeometry.Support(c, new Vec2(0, -1)) - pad,
+            ExactGeometry.Support(c, new Vec2(1, 0)) + pad, ExactGeometry.Support(c, new Vec2(0, 1)) + pad);
+    }
 
     private static Mesh MeshOf(string name, LayeredSolid solid, Precision precision)
     {
