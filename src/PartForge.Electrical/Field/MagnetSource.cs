@@ -19,14 +19,29 @@ public sealed class MagnetSource
     public double ZMaxMm { get; }
     public double SignedBrTesla { get; }
 
-    private readonly double _c, _s, _cx, _cy, _cz, _far2, _dipole;
-    private readonly double[] _px = Array.Empty<double>(), _py = Array.Empty<double>();
+    private readonly double _c, _s, _cx, _cy, _cz, _far2, _dipole, _bound;
+    // Arc faces: the sector's radial integral in closed form and an angular Gauss rule — within LodNearMm of the
+    // magnet graded towards the point's angle (SectorFaceField.SolidAngleGraded), farther away a plain 16-point
+    // (8 beyond LodFarMm) rule, where the integrand is smooth. The polygon of exact triangle solid angles
+    // (PolygonFaceField) is kept as the reference (BzFinest).
+    private readonly double[][] _px = Array.Empty<double[]>(), _py = Array.Empty<double[]>();
 
-    /// <summary>Chordal tolerance of the polygons that stand for an arc magnet's faces, mm.</summary>
+    /// <summary>Distance from the magnet below which an arc magnet's graded angular rule is used, mm.</summary>
+    public const double LodNearMm = 5;
+
+    /// <summary>Distance beyond which the angular rule drops from 16 to 8 points, mm.</summary>
+    public const double LodFarMm = 50;
+
+    /// <summary>Default chordal tolerance of the polygons that stand for an arc magnet's faces, mm (converged: see the tests).</summary>
     public const double ArcChordalToleranceMm = 0.002;
 
-    public MagnetSource(MagnetGeometry g, double centreDeg, double zMinMm, double zMaxMm, double signedBrTesla, double farFactor)
+    /// <summary>Chordal tolerance used for this source's arc polygons, mm.</summary>
+    public double ArcToleranceMm { get; }
+
+    public MagnetSource(MagnetGeometry g, double centreDeg, double zMinMm, double zMaxMm, double signedBrTesla, double farFactor,
+        double arcToleranceMm = ArcChordalToleranceMm)
     {
+        ArcToleranceMm = arcToleranceMm;
         Geometry = g;
         CentreDeg = centreDeg;
         ZMinMm = zMinMm;
@@ -45,28 +60,51 @@ public sealed class MagnetSource
         };
         _far2 = farFactor > 0 ? Math.Pow(farFactor * size, 2) : double.PositiveInfinity;
         _dipole = signedBrTesla * g.VolumeMm3 / (4 * Math.PI);
+        _bound = g.Shape switch
+        {
+            MagnetShape.Disc => g.DiameterMm / 2,
+            MagnetShape.Block => Math.Sqrt(g.LengthMm * g.LengthMm + g.WidthMm * g.WidthMm) / 2,
+            _ => Math.Max(g.OuterRadiusMm - g.PitchRadiusMm, 2 * g.OuterRadiusMm * Math.Sin(Math.Min(g.SpanDeg, 180) * Math.PI / 360) / 2) + (g.OuterRadiusMm - g.InnerRadiusMm),
+        };
         if (g.Shape == MagnetShape.Arc)
         {
-            int nOut = ArcSegmentation.Arc(g.OuterRadiusMm, g.SpanDeg, ArcChordalToleranceMm);
-            int nIn = g.InnerRadiusMm > 0 ? ArcSegmentation.Arc(g.InnerRadiusMm, g.SpanDeg, ArcChordalToleranceMm) : 0;
-            var xs = new List<double>();
-            var ys = new List<double>();
-            double h = g.SpanDeg / 2;
-            for (int i = 0; i <= nOut; i++)
-            {
-                double a = (-h + g.SpanDeg * i / nOut) * Math.PI / 180;
-                xs.Add(g.OuterRadiusMm * Math.Cos(a)); ys.Add(g.OuterRadiusMm * Math.Sin(a));
-            }
-            if (nIn > 0)
-                for (int i = 0; i <= nIn; i++)
-                {
-                    double a = (h - g.SpanDeg * i / nIn) * Math.PI / 180;
-                    xs.Add(g.InnerRadiusMm * Math.Cos(a)); ys.Add(g.InnerRadiusMm * Math.Sin(a));
-                }
-            else { xs.Add(0); ys.Add(0); }
-            _px = xs.ToArray();
-            _py = ys.ToArray();
+            var (xs, ys) = ArcPolygon(g, arcToleranceMm);
+            _px = new[] { xs };
+            _py = new[] { ys };
         }
+    }
+
+    /// <summary>The annular sector's polygon (counter-clockwise, centred on +x) for a chordal tolerance.</summary>
+    private static (double[] X, double[] Y) ArcPolygon(MagnetGeometry g, double tol)
+    {
+        int nOut = ArcSegmentation.Arc(g.OuterRadiusMm, g.SpanDeg, tol);
+        int nIn = g.InnerRadiusMm > 0 ? ArcSegmentation.Arc(g.InnerRadiusMm, g.SpanDeg, tol) : 0;
+        var xs = new List<double>();
+        var ys = new List<double>();
+        double h = g.SpanDeg / 2;
+        // Interior vertices sit on the radius whose chords enclose the arc's own area (r sqrt(d / sin d),
+        // d the step), so the polygon straddles the arc instead of lying inside it; the end vertices stay on
+        // the true corners.
+        double Rv(double r, int n) { double dd = g.SpanDeg / n * Math.PI / 180; return r * Math.Sqrt(dd / Math.Sin(dd)); }
+        double ro = Rv(g.OuterRadiusMm, nOut);
+        for (int i = 0; i <= nOut; i++)
+        {
+            double a = (-h + g.SpanDeg * i / nOut) * Math.PI / 180;
+            double rr = i == 0 || i == nOut ? g.OuterRadiusMm : ro;
+            xs.Add(rr * Math.Cos(a)); ys.Add(rr * Math.Sin(a));
+        }
+        if (nIn > 0)
+        {
+            double ri = Rv(g.InnerRadiusMm, nIn);
+            for (int i = 0; i <= nIn; i++)
+            {
+                double a = (h - g.SpanDeg * i / nIn) * Math.PI / 180;
+                double rr = i == 0 || i == nIn ? g.InnerRadiusMm : ri;
+                xs.Add(rr * Math.Cos(a)); ys.Add(rr * Math.Sin(a));
+            }
+        }
+        else { xs.Add(0); ys.Add(0); }
+        return (xs.ToArray(), ys.ToArray());
     }
 
     /// <summary>Bz, tesla, at (x, y, z) in the rotor frame, mm (outside the magnet).</summary>
@@ -103,14 +141,45 @@ public sealed class MagnetSource
             default:
             {
                 double u = x * _c + y * _s, v = -x * _s + y * _c;
-                double top = PolygonFaceField.SolidAngle(_px, _py, ZMaxMm, u, v, z);
-                double bottom = PolygonFaceField.SolidAngle(_px, _py, ZMinMm, u, v, z);
+                int level = ArcLevel(x, y, z);
+                double top, bottom;
+                if (level == 0)
+                {
+                    double a0 = g.SpanDeg * Math.PI / 360;
+                    top = SectorFaceField.SolidAngleGraded(g.InnerRadiusMm, g.OuterRadiusMm, a0, ZMaxMm, u, v, z);
+                    bottom = SectorFaceField.SolidAngleGraded(g.InnerRadiusMm, g.OuterRadiusMm, a0, ZMinMm, u, v, z);
+                }
+                else
+                {
+                    int n = level == 1 ? 16 : 8;
+                    double a = g.SpanDeg * Math.PI / 360;
+                    top = SectorFaceField.SolidAngle(g.InnerRadiusMm, g.OuterRadiusMm, a, ZMaxMm, u, v, z, n);
+                    bottom = SectorFaceField.SolidAngle(g.InnerRadiusMm, g.OuterRadiusMm, a, ZMinMm, u, v, z, n);
+                }
                 return SignedBrTesla / (4 * Math.PI) * (top - bottom);
             }
         }
     }
 
+    /// <summary>Bz of an arc magnet from its polygon at any distance (the reference for the far-field rule), tesla.</summary>
+    public double BzFinest(double x, double y, double z)
+    {
+        if (Geometry.Shape != MagnetShape.Arc) return BzExact(x, y, z);
+        double u = x * _c + y * _s, v = -x * _s + y * _c;
+        return SignedBrTesla / (4 * Math.PI) * (PolygonFaceField.SolidAngle(_px[0], _py[0], ZMaxMm, u, v, z) - PolygonFaceField.SolidAngle(_px[0], _py[0], ZMinMm, u, v, z));
+    }
+
+    /// <summary>Which arc polygon to use at a point: by a lower bound of the distance to the magnet.</summary>
+    private int ArcLevel(double x, double y, double z)
+    {
+        double dx = x - _cx, dy = y - _cy;
+        double lateral = Math.Max(0, Math.Sqrt(dx * dx + dy * dy) - _bound);
+        double axial = z > ZMaxMm ? z - ZMaxMm : z < ZMinMm ? ZMinMm - z : 0;
+        double d2 = lateral * lateral + axial * axial;
+        return d2 < LodNearMm * LodNearMm ? 0 : d2 < LodFarMm * LodFarMm ? 1 : 2;
+    }
+
     /// <summary>A copy mirrored in the plane z = planeMm with the same magnetisation (the image in ideal iron).</summary>
     public MagnetSource ImageIn(double planeMm, double farFactor) =>
-        new(Geometry, CentreDeg, 2 * planeMm - ZMaxMm, 2 * planeMm - ZMinMm, SignedBrTesla, farFactor);
+        new(Geometry, CentreDeg, 2 * planeMm - ZMaxMm, 2 * planeMm - ZMinMm, SignedBrTesla, farFactor, ArcToleranceMm);
 }

@@ -66,7 +66,10 @@ public static class MagneticPull
         {
             var imgs = front.Select(m => m.ImageIn(frontIronPlane, far)).ToList();
             double gap = 2 * (frontIronPlane - target.ZMaxMm);
-            toIron = Math.Abs(AxialForceN(target, imgs, Math.Max(gap, 0)));
+            // Touching (through pockets on the iron): the coplanar faces contribute their principal value, 0, so
+            // the nearest face that matters is a magnet thickness away.
+            double grade = gap > 1e-9 ? gap : g.ThicknessMm;
+            toIron = Math.Abs(AxialForceN(target, imgs, grade));
         }
 
         double perMagnet = 0, faceToFace = 0;
@@ -154,7 +157,7 @@ public static class MagneticPull
     private static List<double> Graded(double a, double b, double gapMm, bool atStart, bool atEnd)
     {
         double len = b - a;
-        double h = Math.Max(gapMm / 2, 1e-3 * len);
+        double h = Math.Max(gapMm / 2, 1e-2 * len);
         var offs = new List<double>();
         for (double t = h; t < len / 2; t *= 2) offs.Add(t);
         var pts = new SortedSet<double> { a, b, a + len / 2 };

@@ -142,3 +142,59 @@ public class ClosedFormFieldTests
         Assert.Equal(exact, approx, Math.Abs(exact) * 0.02);
     }
 }
+
+public class ArcPolygonConvergenceTests
+{
+    // Convergence of the arc faces' polygons: the default chordal tolerance against one 20 times finer, at the
+    // distances the copper sits from the magnets (0.5 mm and more), relative to the field over the magnet.
+    [Theory]
+    [InlineData(37.5, 0.0, -0.5)]
+    [InlineData(44.9, 5.3, -0.5)]
+    [InlineData(30.2, -8.0, -1.0)]
+    [InlineData(46.0, 11.5, -2.0)]
+    public void DefaultToleranceIsConverged(double x, double y, double z)
+    {
+        var g = new MagnetGeometry { Shape = MagnetShape.Arc, InnerRadiusMm = 30, OuterRadiusMm = 45, SpanDeg = 28, ThicknessMm = 3, PitchRadiusMm = 37.5 };
+        var a = new MagnetSource(g, 0, 0, 3, 1.3, 0);
+        var f = new MagnetSource(g, 0, 0, 3, 1.3, 0, MagnetSource.ArcChordalToleranceMm / 20);
+        double scale = Math.Abs(f.BzExact(37.5, 0, -0.5));
+        Assert.Equal(f.BzExact(x, y, z), a.BzExact(x, y, z), scale * 5e-4);
+    }
+}
+
+public class ArcDetailLevelTests
+{
+    // The closed-form-radial sector rules (graded near, plain far) agree with the polygon of exact triangle solid angles, relative to the field the
+    // copper sees over a magnet (its scale), everywhere from beside the magnet to far away.
+    [Theory]
+    [InlineData(37.5, 0.0, -0.5)]
+    [InlineData(44.9, 5.3, -0.5)]
+    [InlineData(30.2, -8.0, -1.0)]
+    [InlineData(36.0, 6.5, 3.4)]
+    [InlineData(52.0, 0.0, -0.5)]
+    [InlineData(20.0, 9.0, -1.0)]
+    [InlineData(60.0, 30.0, -2.0)]
+    [InlineData(-10.0, 75.0, -1.0)]
+    [InlineData(-80.0, -5.0, -0.5)]
+    public void CoarseLevelsAgreeWithTheFinest(double x, double y, double z)
+    {
+        var g = new MagnetGeometry { Shape = MagnetShape.Arc, InnerRadiusMm = 30, OuterRadiusMm = 45, SpanDeg = 28, ThicknessMm = 3, PitchRadiusMm = 37.5 };
+        var a = new MagnetSource(g, 0, 0, 3, 1.3, 0);
+        double scale = Math.Abs(a.BzFinest(37.5, 0, -0.5));
+        Assert.Equal(a.BzFinest(x, y, z), a.BzExact(x, y, z), scale * 1e-4);
+    }
+
+    // Touching faces (a magnet on iron through a through-pocket): the force converges with the face grading.
+    [Fact]
+    public void TouchingImageForceIsConverged()
+    {
+        var g = new MagnetGeometry { Shape = MagnetShape.Arc, InnerRadiusMm = 30, OuterRadiusMm = 45, SpanDeg = 28, ThicknessMm = 3, PitchRadiusMm = 37.5 };
+        var m = new MagnetSource(g, 0, 0, 3, 1.3, 0);
+        var img = m.ImageIn(3, 0);
+        double coarse = MagneticPull.AxialForceN(m, new[] { img }, 0);
+        double fine = MagneticPull.AxialForceN(m, new[] { img }, 0, 8);
+        Assert.Equal(fine, coarse, Math.Abs(fine) * 1e-3);
+        // A touching pair pulls harder than the same pair 1 mm apart.
+        Assert.True(Math.Abs(coarse) > Math.Abs(MagneticPull.AxialForceN(m, new[] { m.ImageIn(3.5, 0) }, 1)));
+    }
+}

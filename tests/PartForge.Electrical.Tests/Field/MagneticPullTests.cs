@@ -79,3 +79,17 @@ public class MagneticPullTests
         Assert.True(large.RotorToRotorN > noIron.RotorToRotorN, "back iron strengthens the rotor-to-rotor pull");
     }
 }
+
+public class MagneticPullTouchingTests
+{
+    // Touching magnet and image (a through pocket on ideal iron): grading at the magnet thickness gives the same
+    // force as fine grading down to the faces (the coplanar faces contribute their principal value, 0).
+    [Fact]
+    public void TouchingGradingShortcutIsExact()
+    {
+        var g = new MagnetGeometry { Shape = MagnetShape.Block, LengthMm = 12, WidthMm = 8, ThicknessMm = 3, PitchRadiusMm = 0 };
+        var m = new MagnetSource(g, 0, 0, 3, 1.3, 0);
+        var img = m.ImageIn(3, 0);
+        Assert.Equal(MagneticPull.AxialForceN(m, new[] { img }, 0, 8), MagneticPull.AxialForceN(m, new[] { img }, 3), 1e-3 * Math.Abs(MagneticPull.AxialForceN(m, new[] { img }, 0, 8)));
+    }
+}
