@@ -17,18 +17,18 @@ public sealed class SeededFuzzTests
     private const int Seed = 20261201;
 
     [Fact]
-    public void Three_hundred_mutated_designs_in_process_keep_every_promise()
+    public void Two_hundred_mutated_designs_in_process_keep_every_promise()
     {
         using var tmp = new TempFolder("fuzz");
-        var oracle = new CaseOracle(new InProcessCli(), tmp.Path, TimeSpan.FromSeconds(60)) { BuildFraction = 0.2, KeepFailures = false };
-        var fallback = new CaseOracle(Repo.Executable, tmp.Path, TimeSpan.FromSeconds(60)) { BuildFraction = 0.2, KeepFailures = false };
-        var summary = new FuzzSession(SeedLoader.Load(AppContext.BaseDirectory), oracle, fallback).Run(Seed, Enumerable.Range(0, 300));
+        var oracle = new CaseOracle(new InProcessCli(), tmp.Path, TimeSpan.FromSeconds(60)) { BuildFraction = 0.1, KeepFailures = false };
+        var fallback = new CaseOracle(Repo.Executable, tmp.Path, TimeSpan.FromSeconds(60)) { BuildFraction = 0.1, KeepFailures = false };
+        var summary = new FuzzSession(SeedLoader.Load(AppContext.BaseDirectory), oracle, fallback).Run(Seed, Enumerable.Range(0, 200));
         Assert.True(summary.FailedCases == 0, summary.Format());
-        Assert.Equal(300, summary.Cases);
+        Assert.Equal(200, summary.Cases);
         // The run must exercise all three outcomes, else the mutations no longer reach the checks and the build.
-        Assert.True(summary.CheckExits.GetValueOrDefault("0") >= 15, "too few mutated designs pass the check:\n" + summary.Format());
-        Assert.True(summary.CheckExits.GetValueOrDefault("2") >= 100, "too few mutated designs are refused:\n" + summary.Format());
-        Assert.True(summary.BuildExits.GetValueOrDefault("0") >= 3, "too few mutated designs are built:\n" + summary.Format());
+        Assert.True(summary.CheckExits.GetValueOrDefault("0") >= 10, "too few mutated designs pass the check:\n" + summary.Format());
+        Assert.True(summary.CheckExits.GetValueOrDefault("2") >= 70, "too few mutated designs are refused:\n" + summary.Format());
+        Assert.True(summary.BuildExits.GetValueOrDefault("0") >= 1, "too few mutated designs are built:\n" + summary.Format());
     }
 
     [Fact]
