@@ -7,7 +7,7 @@ namespace PartForge.Bench;
 
 /// <summary>
 /// Cost of the kernel against pocket count (16..256 on an R2-like disc) and chordal tolerance (0.01..0.0001 mm
-/// on R2): wall time (best of 3), triangles, bytes allocated, final mesh size and process peak working set,
+/// on R2): wall and process CPU time (best of 3; CPU time is the steadier figure on a shared machine), triangles, bytes allocated, final mesh size and process peak working set,
 /// plus the fitted exponent of time against triangles (log-log least squares). Prints a Markdown table.
 /// Run with `--runs 1`.
 /// </summary>
@@ -25,7 +25,7 @@ public sealed class KernelScalingCase : IBenchCase
     {
         var inv = CultureInfo.InvariantCulture;
         var figures = new Dictionary<string, double>();
-        var lines = new List<string> { "| sweep | value | triangles | best ms | allocated MB | mesh MB | ns/triangle |", "|---|---|---|---|---|---|---|" };
+        var lines = new List<string> { "| sweep | value | triangles | best wall ms | best CPU ms | allocated MB | mesh MB | CPU ns/triangle |", "|---|---|---|---|---|---|---|---|" };
         var ptsP = new List<(double Tris, double Ms)>();
         var ptsE = new List<(double Tris, double Ms)>();
         foreach (int n in PocketCounts)
@@ -33,17 +33,17 @@ public sealed class KernelScalingCase : IBenchCase
             // Pocket diameter shrinks with the count so that the pockets always fit on the pitch circle.
             double d = Math.Min(15.2, 0.6 * 2 * Math.PI * 180 / n);
             var r = KernelRotor.R2 with { Pockets = n, PocketD = d };
-            var (tris, ms, alloc, meshMb) = Measure(r);
-            ptsP.Add((tris, ms));
-            lines.Add(string.Create(inv, $"| pockets | {n} | {tris} | {ms:F1} | {alloc:F1} | {meshMb:F1} | {ms * 1e6 / tris:F0} |"));
+            var (tris, ms, cpu, alloc, meshMb) = Measure(r);
+            ptsP.Add((tris, cpu));
+            lines.Add(string.Create(inv, $"| pockets | {n} | {tris} | {ms:F1} | {cpu:F1} | {alloc:F1} | {meshMb:F1} | {cpu * 1e6 / tris:F0} |"));
             figures[$"p{n}_ms"] = Math.Round(ms, 2);
         }
         foreach (double e in Tolerances)
         {
             var r = KernelRotor.R2 with { E = e };
-            var (tris, ms, alloc, meshMb) = Measure(r);
-            ptsE.Add((tris, ms));
-            lines.Add(string.Create(inv, $"| tolerance mm | {e} | {tris} | {ms:F1} | {alloc:F1} | {meshMb:F1} | {ms * 1e6 / tris:F0} |"));
+            var (tris, ms, cpu, alloc, meshMb) = Measure(r);
+            ptsE.Add((tris, cpu));
+            lines.Add(string.Create(inv, $"| tolerance mm | {e} | {tris} | {ms:F1} | {cpu:F1} | {alloc:F1} | {meshMb:F1} | {cpu * 1e6 / tris:F0} |"));
             figures[$"e{e}_ms"] = Math.Round(ms, 2);
         }
         figures["exp_pockets"] = Math.Round(Slope(ptsP), 3);
@@ -51,35 +51,40 @@ public sealed class KernelScalingCase : IBenchCase
         figures["peak_ws_mb"] = Math.Round(Process.GetCurrentProcess().PeakWorkingSet64 / 1e6, 1);
         Console.WriteLine(_calls++ == 0 ? "# kernel-scaling (warm-up pass)" : "# kernel-scaling");
         foreach (var l in lines) Console.WriteLine(l);
-        Console.WriteLine(string.Create(inv, $"fitted exponent of time vs triangles: pockets {figures["exp_pockets"]}, tolerance {figures["exp_tolerance"]}; peak working set {figures["peak_ws_mb"]} MB"));
+        Console.WriteLine(string.Create(inv, $"fitted exponent of CPU time vs triangles: pockets {figures["exp_pockets"]}, tolerance {figures["exp_tolerance"]}; peak working set {figures["peak_ws_mb"]} MB"));
         return figures;
     }
 
-    private static (int Tris, double Ms, double AllocMb, double MeshMb) Measure(KernelRotor r)
+    private static (int Tris, double Ms, double CpuMs, double AllocMb, double MeshMb) Measure(KernelRotor r)
     {
         var ms = new MemoryStream();
-        double best = double.PositiveInfinity;
+        var proc = Process.GetCurrentProcess();
+        double best = double.PositiveInfinity, bestCpu = double.PositiveInfinity;
         int tris = 0;
         double alloc = 0, meshMb = 0;
         for (int k = 0; k < 3; k++)
         {
             GC.Collect();
             long a0 = GC.GetTotalAllocatedBytes(true);
+            proc.Refresh();
+            var c0 = proc.TotalProcessorTime;
             var sw = Stopwatch.StartNew();
             var solid = r.Build();
             var mesh = Mesher.Build(solid, r.Precision);
             ms.SetLength(0);
             StlWriter.WriteBinary(ms, mesh, "rotor");
             double t = sw.Elapsed.TotalMilliseconds;
+            proc.Refresh();
+            bestCpu = Math.Min(bestCpu, (proc.TotalProcessorTime - c0).TotalMilliseconds);
             alloc = (GC.GetTotalAllocatedBytes(true) - a0) / 1e6;
             best = Math.Min(best, t);
             tris = mesh.TriangleCount;
             meshMb = (mesh.VertexCount * 24.0 + mesh.TriangleCount * 12.0) / 1e6;
         }
-        return (tris, best, alloc, meshMb);
+        return (tris, best, bestCpu, alloc, meshMb);
     }
 
-    /// <summary>Least-squares slope of log(ms) against log(triangles).</summary>
+    /// <summary>Least-squares slope of log(CPU ms) against log(triangles).</summary>
     private static double Slope(List<(double X, double Y)> pts)
     {
         var l = pts.Select(p => (X: Math.Log(p.X), Y: Math.Log(p.Y))).ToList();
