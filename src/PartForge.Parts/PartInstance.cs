@@ -16,7 +16,8 @@ namespace PartForge.Parts;
 /// lowest machine z of the part.</item>
 /// </list>
 /// </summary>
-/// <param name="Index">Copy number (0 for a single part; coil index k + stator index x coils for formers).</param>
+/// <param name="Index">Copy number (0 for a single part; for formers stator index x coils + k, where k is the machine
+/// coil index: the copy sits in seat-k of its host stator, at machine angle k x 360 / coils).</param>
 /// <param name="Host">For formers: the stator part they sit in; otherwise the part's own name.</param>
 /// <param name="BottomZMm">Machine z of the part's lowest face.</param>
 /// <param name="HeightMm">Part height (thickness of the layered solid).</param>

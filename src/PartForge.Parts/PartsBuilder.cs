@@ -58,7 +58,7 @@ public static partial class PartsBuilder
                 var slab = stack.Slabs.First(x => x.Kind == SlabKind.Former && x.Owner == v.Name);
                 for (int k = 0; k < design.Machine.Coils; k++)
                     formerInstances.Add(new PartInstance(si * design.Machine.Coils + k, v.Name, slab.ZMin, former.HeightMm, v.Flipped,
-                        DesignGeometry.CoilAngleDeg(design, k), coil.PitchRadiusMm, v.ExplodeRank));
+                        StatorBuilder.LocalCoilAngleDeg(design, k, v.Flipped), coil.PitchRadiusMm, v.ExplodeRank));
             }
             specs.Add(former with { Instances = formerInstances });
             specs.AddRange(stators.Select(s => s.Spec));

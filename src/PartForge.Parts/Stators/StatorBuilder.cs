@@ -13,7 +13,8 @@ namespace PartForge.Parts.Stators;
 /// the wire grooves and is turned away from the rotor where there is a choice: single-rotor (the ring is
 /// flipped, the rotor is on +z), dual-stator (each ring's grooves face outward). In dual-rotor both faces face
 /// a rotor; the grooves are recessed and face rotor-front.</item>
-/// <item>Seat k: a through opening at coil k (k x 360 / coils on <c>coils.pitch_radius</c>), the former's keyed
+/// <item>Seat k: a through opening at coil k (machine angle k x 360 / coils on <c>coils.pitch_radius</c>; see
+/// <see cref="LocalCoilAngleDeg"/>), the former's keyed
 /// flange footprint offset outward by print_xy + 0.10 mm (<see cref="DesignGeometry.SeatClearanceMm"/>). The
 /// former is centred on the ring's mid-plane (AxialStack) and glued.</item>
 /// <item>Grooves, depth min(max(2 x layer, 2 x wire), thickness / 3), on the top face: a radial channel from each
@@ -42,6 +43,16 @@ internal static class StatorBuilder
         },
         _ => new[] { new Variant("stator", false, true, true, 0) },
     };
+
+    /// <summary>
+    /// Part-local angle of coil k's seat: k x 360 / coils, negated on a ring that is turned over in the machine,
+    /// so that seat-k (and former copy k) is at coil k's machine angle k x 360 / coils either way.
+    /// </summary>
+    public static double LocalCoilAngleDeg(D.Design d, int k, bool flipped)
+    {
+        double a = DesignGeometry.CoilAngleDeg(d, k);
+        return flipped && a != 0 ? 360 - a : a;
+    }
 
     public static PartSpec Build(D.Design d, AxialStack stack, CoilGeometry coil, Contour formerFootprint, Variant v, List<PartDiagnostic> diags)
     {
@@ -74,7 +85,7 @@ internal static class StatorBuilder
         double seatOut = ExactGeometry.RayExit(seat0, new Vec2(pitch, 0), new Vec2(1, 0));
         for (int k = 0; k < n; k++)
         {
-            double a = DesignGeometry.CoilAngleDeg(d, k);
+            double a = LocalCoilAngleDeg(d, k, v.Flipped);
             var seat = seat0.RotatedDeg(a);
             st.Through(seat);
             features.Add(new($"seat-{k}", FeatureKind.CoilSeat, k, seat, 0, s, a, pitch));
@@ -166,7 +177,7 @@ internal static class StatorBuilder
         double chStart = pitch + seatOut / 2;
         for (int k = 0; k < n; k++)
         {
-            double a = DesignGeometry.CoilAngleDeg(d, k);
+            double a = LocalCoilAngleDeg(d, k, v.Flipped);
             if (channelEnd <= chStart) break;
             var ch = Contour.Rectangle(new Vec2((chStart + channelEnd) / 2, 0), channelEnd - chStart, channelW, 0).RotatedDeg(a);
             st.Cut(ch, zg0, s);

@@ -68,7 +68,7 @@ public class FormerTests
         double clearance = d.Tolerances.PrintXy + 0.10;
         foreach (var inst in former.Instances)
         {
-            var seat = si.ToMachine(stator.Feature($"seat-{inst.Index}").Contour);
+            var seat = si.ToMachine(stator.Feature($"seat-{inst.Index % 9}").Contour);
             foreach (var name in new[] { "flange-lower", "flange-upper" })
             {
                 var fp = inst.ToMachine(former.Feature(name).Contour);
