@@ -1,6 +1,9 @@
 using PartForge.Checks.Inputs;
 using PartForge.Design.Model;
+using PartForge.Electrical;
 using PartForge.Electrical.Coils;
+using PartForge.Geometry;
+using PartForge.Parts;
 
 namespace PartForge.Checks.Tests;
 
@@ -26,6 +29,8 @@ public sealed class TestMachine
     public double PrintXy = 0.1, PrintZ = 0.1, Runout = 0.1, AxialPlay = 0.05;
     public double Nozzle = 0.4, Layer = 0.2; public int WallLines = 2;
     public double PullN = 20, CurrentDensity = 3;
+    public string SensorKind = "hall"; public int SensorCount = 3; public double SensorLength = 4, SensorWidth = 3;
+    public double MountCircleD = 122, MountHole = 4.5; public int MountCount = 4;
 
     public double BuildMm => Turns * Math.PI * WireBare * WireBare / 4 / (Fill * CoilHeight);
 
@@ -37,7 +42,7 @@ public sealed class TestMachine
         Rotor = new Rotor
         {
             OuterDiameter = RotorOd, Thickness = RotorT, Bore = Bore, PocketClearance = PocketClearance, PocketFloor = PocketFloor,
-            BoltCircle = new BoltCircle { Diameter = BoltCircleD, Count = BoltCount, Hole = BoltHole }, Material = RotorMaterial,
+            BoltCircle = BoltCount > 0 ? new BoltCircle { Diameter = BoltCircleD, Count = BoltCount, Hole = BoltHole } : null, Material = RotorMaterial,
         },
         Coils = new Design.Model.Coils
         {
@@ -45,7 +50,12 @@ public sealed class TestMachine
             Core = new Core { Diameter = Core }, MaxTemperature = MaxTemp, PitchRadius = MagnetPitch,
         },
         Former = new Former { Flange = Flange, Margin = Margin },
-        Stator = new Stator { InnerDiameter = StatorId, OuterDiameter = StatorOd, Thickness = StatorT, Material = StatorMaterial },
+        Stator = new Stator
+        {
+            InnerDiameter = StatorId, OuterDiameter = StatorOd, Thickness = StatorT, Material = StatorMaterial,
+            Mount = MountCount > 0 ? new Mount { CircleDiameter = MountCircleD, Count = MountCount, Hole = MountHole } : null,
+        },
+        Sensor = new Sensor { Kind = SensorKind, Count = SensorCount, Body = new SensorBody { Length = SensorLength, Width = SensorWidth, Height = 1.6 } },
         Gap = new Gap { AirGap = AirGap, MinRunningGap = MinGap },
         Tolerances = new Tolerances { PrintXy = PrintXy, PrintZ = PrintZ, Runout = Runout, AxialPlay = AxialPlay },
         Process = new Process { Nozzle = Nozzle, Layer = Layer, MinWallLines = WallLines },
@@ -66,6 +76,16 @@ public sealed class TestMachine
 
     public CheckReport Check(IReadOnlyList<PartView>? parts = null) =>
         CheckRunner.Run(ToDesign(), ToFacts(), parts ?? Array.Empty<PartView>());
+
+    /// <summary>The real part builders' parts for this machine (sized from the real electrical engine's coil).</summary>
+    public PartSet Parts()
+    {
+        var d = ToDesign();
+        return PartsBuilder.Build(d, ElectricalEngine.Evaluate(d), Precision.FromChordalTolerance(d.Mesh.ChordalTolerance));
+    }
+
+    /// <summary>Every check with the real parts (printability and fit included) and this machine's electrical facts.</summary>
+    public CheckReport CheckWithParts() => Check(CheckRunner.ViewsFrom(Parts()));
 
     public TestMachine With(Action<TestMachine> change)
     {

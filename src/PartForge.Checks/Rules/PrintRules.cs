@@ -140,7 +140,12 @@ internal static class PrintRules
         if (edges.Count == 0) yield break;
         if (MinPair(holes, edges, false) is not { } p) yield break;
         double dia = Box2.Of(p.A.Contour).Width;
-        double wall = Math.Max(c.MinWall(pv.Name), 0.5 * dia);
+        // A screw hole is a loaded fit: printed, at least 3 lines (REFERENCE.md section 4, practice: "3+ around
+        // press fits"); cut from sheet, at least half the hole diameter (edge distance from the centre of one
+        // diameter; common practice from memory).
+        double wall = pv.Process == PartProcess.Print
+            ? Math.Max(c.MinWall(pv.Name), 3 * c.D.Process.Nozzle)
+            : Math.Max(c.MinWall(pv.Name), 0.5 * dia);
         double s = Shortfall(p.Mm, wall);
         bool mount = p.A.Kind == FeatureKind.MountHole;
         bool toRim = p.B.Kind == FeatureKind.Rim;
@@ -148,7 +153,7 @@ internal static class PrintRules
             ? (toRim ? $"lower stator.mount.circle_diameter by {Up(2 * s)} or raise stator.outer_diameter by {Up(2 * s)}" : $"raise stator.mount.circle_diameter by {Up(2 * s)}")
             : (toRim ? $"lower rotor.bolt_circle.diameter by {Up(2 * s)}" : $"raise rotor.bolt_circle.diameter by {Up(2 * s)} or lower rotor.bore by {Up(2 * s)}");
         yield return Wall(CheckIds.BoltEdgeDistance, pv.Name, p, wall, "material beside a hole", fix,
-            "exact hole-to-edge distance; at least half the hole diameter (edge distance from the centre >= 1 d, common practice from memory) and the minimum wall");
+            "exact hole-to-edge distance; printed: 3 lines (practice), cut: half the hole diameter (common practice from memory)");
     }
 
     private static IEnumerable<CheckResult> Seats(CheckContext c, PartView pv)
