@@ -83,8 +83,8 @@ public class CoilOutlineTests
         };
         int turns = (int)Math.Round(build * 0.45 * 5 / wire.CopperAreaMm2);
         var c = spec.Wind(turns);
-        var a = ContourSampling.Sample(c.Outline.Outer, 1500);
-        var b = ContourSampling.Sample(c.Outline.Outer.RotatedDeg(360.0 / coils), 1500);
+        var a = ContourSampling.Sample(c.Outline.Outer, 400);
+        var b = ContourSampling.Sample(c.Outline.Outer.RotatedDeg(360.0 / coils), 400);
         double best = double.MaxValue;
         foreach (var p in a) foreach (var q in b) best = Math.Min(best, (p - q).Length);
         Assert.Equal(best, c.NeighbourGapMm!.Value, 0.01);
