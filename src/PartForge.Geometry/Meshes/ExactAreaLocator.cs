@@ -17,15 +17,14 @@ internal sealed class ExactAreaLocator
     private readonly int _rows;
 
     public ExactAreaLocator(IEnumerable<GridPoint[]> rings)
+        : this(rings.SelectMany(r => Enumerable.Range(0, r.Length).Select(i => (r[i], r[(i + 1) % r.Length]))))
     {
-        var e = new List<(long, long, long, long)>();
-        foreach (var r in rings)
-            for (int i = 0; i < r.Length; i++)
-            {
-                var p = r[i]; var q = r[(i + 1) % r.Length];
-                e.Add((2 * p.X, 2 * p.Y, 2 * q.X, 2 * q.Y));
-            }
-        _edges = e.ToArray();
+    }
+
+    /// <summary>From loose edges (direction does not matter for the even-odd rule).</summary>
+    public ExactAreaLocator(IEnumerable<(GridPoint P, GridPoint Q)> edges)
+    {
+        _edges = edges.Select(e => (2 * e.P.X, 2 * e.P.Y, 2 * e.Q.X, 2 * e.Q.Y)).ToArray();
         if (_edges.Length == 0) { _rowStart = new int[2]; _rowEdges = Array.Empty<int>(); _rows = 1; _rowH = 1; return; }
         long y0 = long.MaxValue, y1 = long.MinValue;
         foreach (var (_, a, _, b) in _edges) { y0 = Math.Min(y0, Math.Min(a, b)); y1 = Math.Max(y1, Math.Max(a, b)); }

@@ -343,7 +343,11 @@ internal sealed class MeshAssembly
             for (int i = 0; i < parts.Length; i++) parts[i] = new List<GridPoint[]>();
             foreach (var ss in noder.GetNodedSubstrings())
                 parts[(int)ss.Context].Add(ss.Coordinates.Select(c => new GridPoint((long)Math.Floor(c.X + 0.5), (long)Math.Floor(c.Y + 0.5))).ToArray());
-            for (int i = 0; i < pieces.Length; i++) pieces[i] = Chain(parts[i], FirstPoint(inputs[i]));
+            for (int i = 0; i < pieces.Length; i++)
+            {
+                var (isBelow, idx) = owners[i];
+                pieces[i] = RemoveSpikes(Chain(parts[i], FirstPoint(inputs[i])), (isBelow ? below[idx] : above[idx]).Orig);
+            }
             int before = inputs.Sum(x => x.Count), after = pieces.Sum(x => x.Count);
             if (after == before || pass == 4) break;
             inputs = pieces.Select((pl, i) => (ISegmentString)new NodedSegmentString(GridCoords(Trimmed(pl), true), i)).ToList();
@@ -378,8 +382,9 @@ internal sealed class MeshAssembly
         foreach (var u in below) Count(u.Noded, true);
         foreach (var u in above) Count(u.Noded, false);
 
-        var locBelow = below.Length > 0 ? new ExactAreaLocator(below.Select(u => u.Noded)) : null;
-        var locAbove = above.Length > 0 ? new ExactAreaLocator(above.Select(u => u.Noded)) : null;
+        // Locate against each side's net edges: back-and-forth steps left by snap rounding cancel out.
+        var locBelow = below.Length > 0 ? new ExactAreaLocator(edges.Where(kv => kv.Value.B != 0).Select(kv => (GridPoint.FromKey(kv.Key.Item1), GridPoint.FromKey(kv.Key.Item2)))) : null;
+        var locAbove = above.Length > 0 ? new ExactAreaLocator(edges.Where(kv => kv.Value.A != 0).Select(kv => (GridPoint.FromKey(kv.Key.Item1), GridPoint.FromKey(kv.Key.Item2)))) : null;
         var up = new List<(GridPoint P, GridPoint Q)>();
         var down = new List<(GridPoint P, GridPoint Q)>();
         foreach (var ((k1, k2), (b, a)) in edges)
@@ -437,6 +442,48 @@ internal sealed class MeshAssembly
             if (at == start) break;
         }
         if (used != parts.Count(p => p.Length > 0) || at != start) throw new InvalidOperationException("noded ring pieces do not close");
+        return res;
+    }
+
+    /// <summary>
+    /// Removes back-and-forth steps (x, y, x -> x) that snap rounding can leave where a rounded edge passes a
+    /// hot pixel next to its own vertex; they carry no area and would make an edge cancel against itself.
+    /// Tips that are the ring's own vertices are kept.
+    /// </summary>
+    private static List<GridPoint> RemoveSpikes(List<GridPoint> pts, GridPoint[] orig)
+    {
+        var own = new HashSet<long>(orig.Select(o => o.Key));
+        var res = new List<GridPoint>(pts.Count);
+        foreach (var p in pts)
+        {
+            res.Add(p);
+            while (res.Count >= 3 && res[^1] == res[^3] && !own.Contains(res[^2].Key)) { res.RemoveAt(res.Count - 1); res.RemoveAt(res.Count - 1); }
+            while (res.Count >= 2 && res[^1] == res[^2]) res.RemoveAt(res.Count - 1);
+        }
+        // wrap-around spikes (the ring is closed: last point equals the first)
+        bool changed = true;
+        while (changed && res.Count >= 4)
+        {
+            changed = false;
+            int n = res.Count;
+            bool closed = res[0] == res[n - 1];
+            int m = closed ? n - 1 : n;
+            for (int i = 0; i < m && m >= 3; i++)
+            {
+                var a = res[(i + m - 1) % m]; var b = res[i]; var c = res[(i + 1) % m];
+                if (a == c && !own.Contains(b.Key))
+                {
+                    var ring = res.Take(m).ToList();
+                    ring.RemoveAt(i);
+                    int j = i % ring.Count; // c now at j; drop the repeated a/c
+                    ring.RemoveAt(j < ring.Count ? j : 0);
+                    if (closed) ring.Add(ring[0]);
+                    res = ring;
+                    changed = true;
+                    break;
+                }
+            }
+        }
         return res;
     }
 
