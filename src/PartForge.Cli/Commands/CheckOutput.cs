@@ -32,25 +32,23 @@ public static class CheckOutput
             var ft = new Table().Border(TableBorder.Rounded).Title($"[bold]{Markup.Escape(doc.Design)}[/] electrical results").AddColumn("quantity").AddColumn(new TableColumn("value").RightAligned());
             foreach (var (n, v) in figures) ft.AddRow(Markup.Escape(n), Markup.Escape(v));
             c.Write(ft);
+            // Values in the table; the messages (with the fixes) below it for what did not pass, so rows stay one line.
             var t = new Table().Border(TableBorder.Rounded).Title("checks")
-                .AddColumn("status").AddColumn("check").AddColumn("part")
-                .AddColumn(new TableColumn("value").RightAligned()).AddColumn(new TableColumn("limit").RightAligned())
-                .AddColumn(new TableColumn("margin").RightAligned()).AddColumn("message");
+                .AddColumn(new TableColumn("status").NoWrap()).AddColumn(new TableColumn("check").NoWrap()).AddColumn(new TableColumn("part").NoWrap())
+                .AddColumn(new TableColumn("value").RightAligned().NoWrap()).AddColumn(new TableColumn("limit").RightAligned().NoWrap())
+                .AddColumn(new TableColumn("margin").RightAligned().NoWrap());
             foreach (var k in doc.Checks)
-            {
-                string colour = k.Status switch { "pass" => "green", "warn" => "yellow", _ => "red" };
-                string status = s.Colour ? $"[{colour}]{k.Status}[/]" : k.Status;
-                t.AddRow(status, Markup.Escape(k.Id), Markup.Escape(k.Part), Markup.Escape(N(k.Value) + " " + k.Unit), Markup.Escape(N(k.Limit)),
-                    Markup.Escape(N(k.Margin)), Markup.Escape(k.Message));
-            }
+                t.AddRow(Status(s, k.Status), Markup.Escape(k.Id), Markup.Escape(k.Part), Markup.Escape(V(k.Value, k.Unit)), Markup.Escape(N(k.Limit)), Markup.Escape(N(k.Margin)));
             c.Write(t);
+            foreach (var k in doc.Checks.Where(k => k.Status != "pass"))
+                c.MarkupLine($"{Status(s, k.Status)} {Markup.Escape(k.Id)} ({Markup.Escape(k.Part)}): {Markup.Escape(k.Message)}");
         }
         else
         {
             int w = figures.Max(f => f.Name.Length);
             foreach (var (n, v) in figures) s.Out.WriteLine(n.PadRight(w) + "  " + v);
             s.Out.WriteLine();
-            var rows = doc.Checks.Select(k => new[] { k.Status, k.Id, k.Part, N(k.Value) + " " + k.Unit, N(k.Limit), N(k.Margin), k.Message }).ToList();
+            var rows = doc.Checks.Select(k => new[] { k.Status, k.Id, k.Part, V(k.Value, k.Unit), N(k.Limit), N(k.Margin), k.Message }).ToList();
             rows.Insert(0, ["status", "check", "part", "value", "limit", "margin", "message"]);
             var widths = Enumerable.Range(0, 6).Select(i => rows.Max(r => r[i].Length)).ToArray();
             foreach (var r in rows)
@@ -59,8 +57,17 @@ public static class CheckOutput
         s.Out.WriteLine(Summary(doc));
     }
 
+    private static string Status(CliSession s, string status)
+    {
+        string colour = status switch { "pass" => "green", "warn" => "yellow", _ => "red" };
+        return s.Colour ? $"[{colour}]{status}[/]" : status;
+    }
+
     public static string Summary(ResultsDocument doc) =>
         $"{doc.Design}: {doc.Summary.Status} ({doc.Checks.Count} checks, {doc.Summary.Fail} failed, {doc.Summary.Warn} warning{(doc.Summary.Warn == 1 ? "" : "s")})";
 
-    private static string N(double v) => Math.Abs(v) >= 1000 || v == Math.Round(v) ? v.ToString("0.##", Inv) : v.ToString("0.####", Inv);
+    private static string N(double v) => Math.Abs(v) >= 100 ? v.ToString("0.#", Inv) : v.ToString("0.###", Inv);
+
+    /// <summary>A value with its unit; ratios (unit "1") and unitless values stand alone.</summary>
+    private static string V(double v, string unit) => unit is "" or "1" ? N(v) : N(v) + " " + unit;
 }
