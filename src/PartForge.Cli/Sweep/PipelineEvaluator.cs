@@ -1,20 +1,37 @@
 using PartForge.Checks;
+using PartForge.Electrical;
+using PartForge.Geometry;
 using PartForge.Export.Pipeline;
 using PartForge.Parts;
 
 namespace PartForge.Cli.Sweep;
 
 /// <summary>
-/// The real sweep evaluation of one variant: the same stages as <c>partforge check</c>
-/// (<see cref="BuildPipeline.Evaluate"/>: electrical engine, part builders, every check), nothing written.
+/// The real sweep evaluation of one variant: the same stages as <c>partforge check</c> (electrical engine,
+/// part builders, every check), nothing written. One difference, for speed: the parts' polygons are made at
+/// a coarse chordal tolerance, because the checks measure the exact primitives (lines and true arcs) and
+/// never the polygons; a test asserts that the check results equal those of <see cref="BuildPipeline.Evaluate"/>.
 /// Status is the checks' summary; a variant whose parts cannot be made is "fail" with the reason.
 /// </summary>
 public sealed class PipelineEvaluator : ISweepEvaluator
 {
+    /// <summary>Chordal tolerance of the sweep's throw-away polygons and meshes, mm.</summary>
+    public const double SweepChordalToleranceMm = 0.2;
+
+    /// <summary>The stages for one design, as <see cref="BuildPipeline.Evaluate"/> runs them but with the coarse polygons.</summary>
+    public static Evaluation EvaluateStages(Design.Model.Design d)
+    {
+        var electrical = ElectricalEngine.Evaluate(d);
+        if (electrical.Coil?.Outline == null) return BuildPipeline.Evaluate(d); // no parts: the pipeline's own early answer
+        var precision = Precision.FromChordalTolerance(Math.Max(d.Mesh.ChordalTolerance, SweepChordalToleranceMm));
+        var parts = PartsBuilder.Build(d, electrical, precision);
+        return new Evaluation(d, electrical, parts, CheckRunner.Run(d, electrical, parts));
+    }
+
     public SweepOutcome Evaluate(Design.Model.Design d)
     {
         Evaluation ev;
-        try { ev = BuildPipeline.Evaluate(d); }
+        try { ev = EvaluateStages(d); }
         catch (PartsException ex) { return new SweepOutcome("fail", ex.Message, new Dictionary<string, double>()); }
 
         var e = ev.Electrical;
@@ -43,7 +60,7 @@ public sealed class PipelineEvaluator : ISweepEvaluator
         m[SweepMetrics.FailCount] = report.FailCount;
         m[SweepMetrics.WarnCount] = report.WarnCount;
         if (ev.Parts is { HasErrors: true } ps)
-            return new SweepOutcome("fail", string.Join("; ", ps.Diagnostics.Where(x => x.Severity == DiagnosticSeverity.Error).Select(x => $"{x.Part}: {x.Message}")), m);
+            return new SweepOutcome("fail", string.Join("; ", ps.Diagnostics.Where(x => x.Severity == Parts.DiagnosticSeverity.Error).Select(x => $"{x.Part}: {x.Message}")), m);
         var worst = report.Checks.Where(x => x.Status == report.Status && x.Status != CheckStatus.Pass)
             .Select(x => $"{x.Id} ({x.Part}): {x.Message}").FirstOrDefault();
         return new SweepOutcome(report.StatusText, worst ?? "", m);

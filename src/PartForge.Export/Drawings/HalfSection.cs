@@ -15,7 +15,7 @@ public static class HalfSection
         double zMin = bodies.Count > 0 ? bodies.Min(b => b.ZMin) : 0;
         double zMax = bodies.Count > 0 ? bodies.Max(b => b.ZMax) : 1;
         double zSpan = Math.Max(zMax - zMin, 1);
-        double text = Math.Max(0.6, Math.Min(zSpan / 20, rMax / 30));
+        double text = Math.Max(0.8, Math.Min(zSpan / 14, rMax / 25));
         double arrow = text * 0.8;
 
         // Where each dimension line ends up, and where its label wants to go.

@@ -17,7 +17,15 @@ public static class ReportBuilder
         var gaps = checks.WithId(CheckIds.RunningGap)
             .GroupBy(c => c.Part, StringComparer.Ordinal)
             .ToDictionary(g => g.Key, g => g.Min(c => c.Value), StringComparer.Ordinal);
-        var (bodies, dims) = SectionBuilder.Build(d, parts.Stack, coil, gaps);
+        (double, double)? backIron = null;
+        if (parts.Find("back-iron") is { } bi)
+        {
+            // Radial extent of the back-iron disc from its exact outline (the builder sizes it, not the design).
+            var pts = bi.ExactLayers.SelectMany(l => l.Outers).SelectMany(c => c.Circle is { } ci ? [ci.Radius + ci.Center.Length] : c.Segments.Select(g => g.Start.Length)).ToList();
+            var bore = bi.FeaturesOf(FeatureKind.Bore).Select(f => f.Contour.Circle?.Radius ?? 0).DefaultIfEmpty(0).Max();
+            if (pts.Count > 0) backIron = (bore, pts.Max());
+        }
+        var (bodies, dims) = SectionBuilder.Build(d, parts.Stack, coil, gaps, backIron);
 
         return new ReportInput
         {

@@ -19,6 +19,7 @@ section h3 { font-size:16px; margin:16px 0 6px; }
 table { border-collapse:collapse; width:100%; margin:6px 0 10px; font-size:13.5px; }
 th { text-align:left; background:#ece7da; color:var(--ink); font-weight:600; padding:5px 8px; border-bottom:2px solid var(--rule); }
 td { padding:4px 8px; border-bottom:1px solid #ebe6da; vertical-align:top; }
+#summary-table th, #electrical-table th { width:55%; }
 td.num { text-align:right; font-variant-numeric: tabular-nums; white-space:nowrap; }
 .grid2 { display:grid; grid-template-columns: 1fr 1fr; gap:0 28px; }
 .pill { display:inline-block; min-width:44px; text-align:center; border-radius:10px; padding:1px 8px; color:#fff; font-size:12px; font-weight:bold; }

@@ -12,7 +12,8 @@ namespace PartForge.Export.Report;
 public static class SectionBuilder
 {
     public static (IReadOnlyList<SectionBody> Bodies, IReadOnlyList<LinearDimension> Dimensions) Build(
-        Design.Model.Design d, AxialStack stack, CoilSection coil, IReadOnlyDictionary<string, double> runningGapByPart)
+        Design.Model.Design d, AxialStack stack, CoilSection coil, IReadOnlyDictionary<string, double> runningGapByPart,
+        (double RMin, double RMax)? backIron = null)
     {
         var (magIn, magOut) = MagnetRadialExtent(d);
         double rotIn = d.Rotor.Bore / 2, rotOut = d.Rotor.OuterDiameter / 2;
@@ -41,7 +42,7 @@ public static class SectionBuilder
                     bodies.Add(new SectionBody("magnet", s.Owner, magIn, magOut, s.ZMin, s.ZMax, "magnet"));
                     break;
                 case SlabKind.BackIron:
-                    bodies.Add(new SectionBody("back-iron", s.Owner, rotIn, rotOut, s.ZMin, s.ZMax, "back iron"));
+                    bodies.Add(new SectionBody("back-iron", s.Owner, backIron?.RMin ?? rotIn, backIron?.RMax ?? rotOut, s.ZMin, s.ZMax, "back iron"));
                     break;
                 case SlabKind.Stator:
                     bodies.Add(new SectionBody("stator", s.Owner, statIn, Math.Max(statIn, coil.FormerRMin), s.ZMin, s.ZMax, s.Owner));
