@@ -22,6 +22,9 @@ namespace PartForge.Parts;
 /// </summary>
 public static partial class PartsBuilder
 {
+    /// <summary>How many times a stator ring's grooves may be nudged before a mesher failure is reported.</summary>
+    public const int MaxStatorNudges = 4;
+
     /// <summary>
     /// Builds the parts from the design and the coil geometry the electrical engine computed.
     /// Throws <see cref="PartsException"/> (one-line message) when the design cannot be made into parts.
@@ -32,6 +35,7 @@ public static partial class PartsBuilder
         ArgumentNullException.ThrowIfNull(coil);
         ArgumentNullException.ThrowIfNull(precision);
         var diags = new List<PartDiagnostic>();
+        var prebuilt = new Dictionary<PartSpec, PartModel>(ReferenceEqualityComparer.Instance);
         var stack = AxialStack.From(design);
         var specs = new List<PartSpec>();
         string part = "rotor";
@@ -49,7 +53,32 @@ public static partial class PartsBuilder
             part = "stator";
             var stators = new List<(PartSpec Spec, StatorBuilder.Variant Variant)>();
             foreach (var v in StatorBuilder.Variants(design))
-                stators.Add((StatorBuilder.Build(design, stack, coil, footprint, v, diags), v));
+            {
+                // The ring's grooves cross the seats and each other; the mesher refuses boundaries that cross within one
+                // grid step of a vertex. Then the groove sizes are nudged by hundredths of a millimetre (deterministic) and
+                // the ring is made again; the mesh made here is kept.
+                for (int nudge = 0; ; nudge++)
+                {
+                    var tryDiags = new List<PartDiagnostic>();
+                    var spec = StatorBuilder.Build(design, stack, coil, footprint, v, tryDiags, nudge);
+                    var model = ToModel(spec, precision, design.Machine.Coils, design.Machine.Layout);
+                    try
+                    {
+                        _ = model.Mesh;
+                    }
+                    catch (InvalidOperationException) when (nudge < MaxStatorNudges)
+                    {
+                        continue;
+                    }
+                    diags.AddRange(tryDiags);
+                    if (nudge > 0)
+                        diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, v.Name, "grooves-nudged",
+                            FormattableString.Invariant($"{v.Name}: groove widths changed by {0.013 * nudge:0.###} mm to keep the mesh robust")));
+                    stators.Add((spec, v));
+                    prebuilt[spec] = model;
+                    break;
+                }
+            }
 
             var formerInstances = new List<PartInstance>();
             for (int si = 0; si < stators.Count; si++)
@@ -77,7 +106,7 @@ public static partial class PartsBuilder
         {
             int symmetry = s.Name.StartsWith("rotor", StringComparison.Ordinal) ? design.Machine.Poles
                 : s.Name.StartsWith("stator", StringComparison.Ordinal) ? design.Machine.Coils : 1;
-            models.Add(ToModel(s, precision, symmetry, design.Machine.Layout));
+            models.Add(prebuilt.TryGetValue(s, out var m) ? m : ToModel(s, precision, symmetry, design.Machine.Layout));
         }
         return new PartSet { Parts = models, Stack = stack, Diagnostics = diags, ExplodeMm = design.Assembly.Explode };
     }

@@ -25,8 +25,8 @@ namespace PartForge.Parts.Stators;
 /// <item>Sensor pockets (timing sensors, on stator or stator-front only): body length (radial) x width
 /// (tangential) plus the seat clearance on each side, depth = body height so the sensor face is flush with the
 /// ring face that faces the rotor, centred at the electrical engine's angles and radius (the coil pitch radius,
-/// between two coils, where the engine checked that the body fits). When that face is not the grooved face, the outer third of the
-/// pocket (half its width) goes through as a lead hole to the grooves.</item>
+/// between two coils, where the engine checked that the body fits). When that face is not the grooved face, a lead hole (a third of the
+/// pocket's length, half its width, in its outer half, clear of its walls) goes through to the grooves.</item>
 /// </list>
 /// </summary>
 internal static class StatorBuilder
@@ -54,7 +54,12 @@ internal static class StatorBuilder
         return flipped && a != 0 ? 360 - a : a;
     }
 
-    public static PartSpec Build(D.Design d, AxialStack stack, CoilGeometry coil, Contour formerFootprint, Variant v, List<PartDiagnostic> diags)
+    /// <summary>
+    /// Builds one ring. <paramref name="nudge"/> &gt; 0 widens the grooves by nudge x 0.013 mm (collector by
+    /// nudge x 0.011 mm) and moves the collector out by nudge x 0.007 mm: used only when the mesher refuses the
+    /// nominal layout because two groove boundaries cross within one grid step of a vertex.
+    /// </summary>
+    public static PartSpec Build(D.Design d, AxialStack stack, CoilGeometry coil, Contour formerFootprint, Variant v, List<PartDiagnostic> diags, int nudge = 0)
     {
         var sd = d.Stator;
         double Ro = sd.OuterDiameter / 2, Ri = sd.InnerDiameter / 2, s = sd.Thickness;
@@ -64,7 +69,7 @@ internal static class StatorBuilder
         double wall = DesignGeometry.MinWallMm(d);
         double dw = coil.WireOverallMm > 0 ? coil.WireOverallMm : 0.5;
         double grooveDepth = Math.Min(Math.Max(2 * d.Process.Layer, 2 * dw), s / 3);
-        double channelW = Math.Max(1.0, 3 * dw);
+        double channelW = Math.Max(1.0, 3 * dw) + 0.013 * nudge;
         var o = new Vec2(0, 0);
         var notes = new List<string>();
         var features = new List<PartFeature>();
@@ -112,7 +117,7 @@ internal static class StatorBuilder
             if (!v.SensorsOnTop && ph < s)
             {
                 double ll = pl / 3;
-                rLead = rs + pl / 2 - ll / 2;
+                rLead = rs + pl / 4; // outer part of the pocket, pl/12 clear of its end wall (no shared edges)
                 var lead = Contour.Rectangle(new Vec2(rLead, 0), ll, pw / 2, 0).RotatedDeg(a);
                 st.Through(lead);
                 features.Add(new($"sensor-lead-{i}", FeatureKind.SensorLeadHole, i, lead, 0, s, a, rLead));
@@ -152,8 +157,8 @@ internal static class StatorBuilder
         double channelEnd;
         if (hasCollector)
         {
-            double wc = Math.Clamp(leads * dw * dw / (0.5 * grooveDepth), channelW, best.Hi - best.Lo);
-            double rc = (best.Lo + best.Hi) / 2;
+            double wc = Math.Clamp(leads * dw * dw / (0.5 * grooveDepth), channelW, best.Hi - best.Lo) - 0.011 * nudge;
+            double rc = (best.Lo + best.Hi) / 2 + 0.007 * nudge;
             double t = StatorLayout.TerminalAngleDeg;
             var half0 = Contour.AnnularSector(rc - wc / 2, rc + wc / 2, t, 180);
             var half1 = Contour.AnnularSector(rc - wc / 2, rc + wc / 2, t + 180, 180);
