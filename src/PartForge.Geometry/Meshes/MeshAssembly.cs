@@ -64,7 +64,7 @@ internal sealed class MeshAssembly
             // Levels where layer boundaries cross were snap-rounded: verify before the mesh leaves the kernel.
             var rep = MeshValidator.Validate(mesh);
             if (!rep.IsValid)
-                throw new InvalidOperationException($"meshing failed where the boundaries of touching layers cross within one grid step ({rep}); move the features apart by more than {_prec.GridMm} mm");
+                throw new InvalidOperationException($"meshing failed at a level where the boundaries of touching layers meet or cross within one grid step ({rep}); move the features apart by more than {_prec.GridMm} mm");
         }
         return mesh;
     }
@@ -590,6 +590,34 @@ internal sealed class MeshAssembly
         for (int o = 0; o < outers.Count; o++)
         {
             var r = outers[o].R;
+            // A hole that touches its outer ring at a vertex is spliced in there (the face's boundary walk
+            // passes that vertex twice) instead of being bridged.
+            if (holesOf[o].Count > 0)
+            {
+                bool again = true;
+                while (again)
+                {
+                    again = false;
+                    var keys = new Dictionary<long, int>();
+                    for (int i = 0; i < r.Length; i++) keys.TryAdd(r[i].Key, i);
+                    for (int h = 0; h < holesOf[o].Count && !again; h++)
+                    {
+                        var hp = holesOf[o][h].Item2;
+                        for (int j = 0; j < hp.Length; j++)
+                        {
+                            if (!keys.TryGetValue(hp[j].Key, out int k)) continue;
+                            var merged = new List<GridPoint>(r.Length + hp.Length + 1);
+                            for (int i = 0; i <= k; i++) merged.Add(r[i]);
+                            for (int t = 1; t <= hp.Length; t++) merged.Add(hp[(j + t) % hp.Length]);
+                            for (int i = k + 1; i < r.Length; i++) merged.Add(r[i]);
+                            r = merged.ToArray();
+                            holesOf[o].RemoveAt(h);
+                            again = true;
+                            break;
+                        }
+                    }
+                }
+            }
             var ids = r.Select(p => Vertex(lv, p)).ToArray();
             int start = _tris.Count;
             FaceTriangulator.Triangulate(ids, r, holesOf[o], _tris);

@@ -276,6 +276,7 @@ public sealed class Region
         }
         Add(g);
         NtsGeometry res = polys.Count == 1 ? polys[0] : f.CreateMultiPolygon(polys.ToArray());
+        res = PinchOpener.Open(res, f);
         return new Region(res, prec);
     }
 

@@ -96,6 +96,24 @@ public class MesherPropertyTests
         Assert.True(refused <= total * 3 / 10, $"{refused} of {total} noded stacks refused");
     }
 
+    /// <summary>A through pocket touching the rim at one point: the pinch is opened by one grid step, so the
+    /// part stays 2-manifold (one through hole, genus 1) and the face triangulates.</summary>
+    [Fact]
+    public void HoleTouchingTheOuterRingAtAPointGivesAValidMesh()
+    {
+        var sq = Region.FromContour(Contour.Rectangle(new Vec2(0, 0), 20, 20, 0), Prec);
+        var diamond = Region.FromContour(Contour.Polygon(new[] { new Vec2(0, -10), new Vec2(5, -5), new Vec2(0, 0), new Vec2(-5, -5) }), Prec);
+        var r = sq.Difference(diamond);
+        Assert.True(r.Geometry.IsValid);
+        Assert.Equal(400 - 50, r.Area, 2);
+        var one = MeshValidator.Validate(Mesher.Build(LayeredSolid.Extrude(r, 0, 2), Prec));
+        Assert.True(one.IsValid, one.ToString());
+        Assert.Equal(1, one.Genus);
+        var blind = MeshValidator.Validate(Mesher.Build(new LayeredSolid(new[] { new Layer(0, 2, sq), new Layer(2, 4, r) }), Prec));
+        Assert.True(blind.IsValid, blind.ToString());
+        Assert.Equal(0, blind.Genus);
+    }
+
     [Fact]
     public void GapsInZGiveSeparateShells()
     {
