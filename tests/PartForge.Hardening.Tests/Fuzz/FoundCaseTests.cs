@@ -32,4 +32,33 @@ public sealed class FoundCaseTests
         Assert.Contains(from, text);
         AssertKeepsPromises(preset, text.Replace(from, to));
     }
+
+    /// <summary>
+    /// Parts larger than the mesher's 512 mm coordinate range are accepted by the loader (found by the long run,
+    /// seed 1: case 994 crank-bench rotor.outer_diameter 1100, case 440 pulse-sculpture stator.outer_diameter
+    /// 1420): exit 3 "internal error (PartsException): ... cannot be meshed"; must be exit 1 or 2 with a message.
+    /// </summary>
+    [Theory]
+    [InlineData("crank-bench", "outer_diameter: 110", "outer_diameter: 1100")]
+    [InlineData("pulse-sculpture", "outer_diameter: 142", "outer_diameter: 1420")]
+    public void A_part_beyond_the_mesh_coordinate_range_is_a_design_problem(string preset, string from, string to)
+    {
+        string text = Repo.PresetText(preset);
+        Assert.Contains(from, text);
+        int i = text.IndexOf(from, StringComparison.Ordinal);
+        AssertKeepsPromises(preset, text[..i] + to + text[(i + from.Length)..]);
+    }
+
+    /// <summary>
+    /// A stator 8e-6 mm thick passes validation and the checks, then the build writes four STL files (one of
+    /// them with no triangles) and dies in the 3MF writer with exit 3 "the mesh has no triangles" (long run,
+    /// seed 1, case 2669). Must be refused before anything is written.
+    /// </summary>
+    [Fact]
+    public void A_stator_thinner_than_the_grid_is_refused_before_anything_is_written()
+    {
+        string text = Repo.PresetText("pulse-sculpture");
+        Assert.Contains("  thickness: 8\n", text);
+        AssertKeepsPromises("pulse-sculpture", text.Replace("  thickness: 8\n", "  thickness: 8E-06\n"));
+    }
 }
