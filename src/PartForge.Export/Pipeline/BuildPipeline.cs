@@ -55,7 +55,15 @@ public static class BuildPipeline
         if (!loaded.Success) return Bad(loaded.Errors.Select(e => e.ToString()));
         var (ev, problem) = TryEvaluate(loaded.Design!, designPath);
         if (ev == null) return Bad([problem!]);
-        var doc = ResultsBuilder.Build(ev, countTriangles: meshes);
+        bool countTriangles = meshes;
+        if (meshes && MeshProblem(ev, designPath) is { } meshProblem)
+        {
+            // Failing checks already explain an absurd part (e.g. a winding that overlaps its neighbours): report them
+            // without triangle counts; otherwise the part itself is the problem.
+            if (!ev.Checks.HasFailures) return Bad([meshProblem]);
+            countTriangles = false;
+        }
+        var doc = ResultsBuilder.Build(ev, countTriangles: countTriangles);
         return new PipelineResult
         {
             Status = ev.Checks.HasFailures ? PipelineStatus.ChecksFailed : PipelineStatus.Ok,
@@ -98,6 +106,7 @@ public static class BuildPipeline
             };
         }
 
+        if (MeshProblem(ev, request.DesignPath) is { } meshProblem) return Bad([meshProblem]);
         var plan = ExportPlan.For(ev, formats, partFilter);
         var doc = ResultsBuilder.Build(ev, plan.FilesByPart, forced: failed);
         var written = new List<string>();
@@ -190,6 +199,29 @@ public static class BuildPipeline
         {
             return (null, $"{file}: {ex.Message}");
         }
+    }
+
+    /// <summary>
+    /// Meshes every part (the meshes are made on first use) before anything is reported or written, so that a
+    /// part the mesher refuses for its size (beyond the float32-safe coordinate range) is a design problem
+    /// (exit 2, nothing written), not a failure halfway through the export.
+    /// </summary>
+    private static string? MeshProblem(Evaluation ev, string file)
+    {
+        if (ev.Parts == null) return null;
+        foreach (var p in ev.Parts.Parts)
+        {
+            try
+            {
+                if (p.Mesh.TriangleCount == 0)
+                    return $"{file}: {p.Name}: the part has no volume at the mesh grid (a dimension below {Precision.DefaultGridMm} mm); enlarge it";
+            }
+            catch (PartsException ex)
+            {
+                return $"{file}: {ex.Message}";
+            }
+        }
+        return null;
     }
 
     private static IReadOnlyList<string> FailLines(CheckReport r) =>
