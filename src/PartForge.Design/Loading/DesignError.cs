@@ -49,10 +49,29 @@ public sealed record DesignError
             if (FromOverride) sb.Append(" (override)");
             sb.Append(": ");
         }
-        if (Value != null) sb.Append(Value).Append(' ');
+        if (Value != null) sb.Append(Clip(Value, MaxValueChars)).Append(' ');
         sb.Append(Message);
         if (Allowed != null) sb.Append("; allowed: ").Append(Allowed);
         if (Suggestion != null) sb.Append("; ").Append(Suggestion);
+        return Printable(Clip(sb.ToString(), MaxLineChars));
+    }
+
+    /// <summary>Longest value echoed in a message; a longer one is cut with an ellipsis.</summary>
+    public const int MaxValueChars = 80;
+
+    /// <summary>Longest message line; one problem stays one readable line even for a hostile file.</summary>
+    public const int MaxLineChars = 1000;
+
+    private static string Clip(string s, int max) => s.Length <= max ? s : s[..(max - 3)] + "...";
+
+    /// <summary>Control characters from the file are shown as \xNN so that a message is always one clean line.</summary>
+    private static string Printable(string s)
+    {
+        if (!s.Any(c => char.IsControl(c))) return s;
+        var sb = new System.Text.StringBuilder(s.Length + 8);
+        foreach (char c in s)
+            if (char.IsControl(c)) sb.Append("\\x").Append(((int)c).ToString("x2", System.Globalization.CultureInfo.InvariantCulture));
+            else sb.Append(c);
         return sb.ToString();
     }
 }
