@@ -23,4 +23,13 @@ fi
 
 dotnet restore PartForge.sln
 dotnet build PartForge.sln -c Release --no-restore
-dotnet test PartForge.sln -c Release --no-build "$@"
+log=$(mktemp)
+trap 'rm -f "$log"' EXIT
+set +e
+dotnet test PartForge.sln -c Release --no-build "$@" 2>&1 | tee "$log"
+rc=${PIPESTATUS[0]}
+set -e
+# One plain closing line over every test project: "N passed, N failed, N skipped".
+awk '/(Passed|Failed)! +- +Failed: /{ gsub(",", ""); for (i = 1; i <= NF; i++) { if ($i == "Failed:") f += $(i+1); if ($i == "Passed:") p += $(i+1); if ($i == "Skipped:") s += $(i+1) } }
+     END { printf "%d passed, %d failed, %d skipped\n", p, f, s }' "$log"
+exit "$rc"
