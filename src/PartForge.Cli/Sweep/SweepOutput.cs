@@ -80,17 +80,7 @@ public static class SweepOutput
         return sb.ToString();
     }
 
-    private static void CsvRow(StringBuilder sb, IReadOnlyList<string> fields)
-    {
-        for (int i = 0; i < fields.Count; i++)
-        {
-            if (i > 0) sb.Append(',');
-            string f = fields[i];
-            if (f.IndexOfAny([',', '"', '\r', '\n']) >= 0) sb.Append('"').Append(f.Replace("\"", "\"\"")).Append('"');
-            else sb.Append(f);
-        }
-        sb.Append("\r\n");
-    }
+    private static void CsvRow(StringBuilder sb, IReadOnlyList<string> fields) => PartForge.Export.Bom.BomCsv.Row(sb, fields);
 
     public static string Json(string designName, SweepPlan plan, IReadOnlyList<SweepRow> rows, SweepTarget? target)
     {

@@ -29,7 +29,8 @@ public static class BomCsv
         return r.ToString("0.###", CultureInfo.InvariantCulture);
     }
 
-    private static void Row(StringBuilder sb, IReadOnlyList<string> fields)
+    /// <summary>Appends one RFC 4180 record (fields quoted when they hold a comma, quote or line break; CRLF).</summary>
+    public static void Row(StringBuilder sb, IReadOnlyList<string> fields)
     {
         for (int i = 0; i < fields.Count; i++)
         {
