@@ -15,10 +15,17 @@ internal sealed class MeshAssembly
     private readonly List<Vec3> _vertices = new();
     private readonly List<int> _tris = new();
     private readonly GeometryFactory _f;
+    private readonly bool _collectConflicts;
     private bool _noded;
 
-    public MeshAssembly(Precision prec)
+    /// <summary>Edges (grid points P, Q) where, after noding, the layer above a level and the layer below it
+    /// bound the same edge from opposite sides: the two solids would meet along a line (a non-manifold edge).
+    /// Layer is the index in the solid of the layer above.</summary>
+    public List<(int Layer, GridPoint P, GridPoint Q)> Conflicts { get; } = new();
+
+    public MeshAssembly(Precision prec, bool collectConflicts = false)
     {
+        _collectConflicts = collectConflicts;
         _prec = prec;
         _scale = prec.Scale;
         _f = new GeometryFactory(new PrecisionModel(_scale));
@@ -39,25 +46,27 @@ internal sealed class MeshAssembly
         public readonly Dictionary<long, int> Ids = new();
     }
 
-    public Mesh Build(LayeredSolid solid)
+    /// <summary>The mesh, or null when conflicts were collected (the caller heals and retries).</summary>
+    public Mesh? Build(LayeredSolid solid)
     {
-        var layers = solid.Layers.Where(l => !l.Region.IsEmpty).ToList();
+        var layers = solid.Layers.Select((l, i) => (L: l, I: i)).Where(x => !x.L.Region.IsEmpty).ToList();
         if (layers.Count == 0) return Mesh.Empty;
-        CheckFloat32(layers);
+        CheckFloat32(layers.Select(x => x.L).ToList());
 
         // Group touching layers into stacks (a gap in z starts a new shell).
-        var stack = new List<(long Z0, long Z1, Region R)>();
+        var stack = new List<(long Z0, long Z1, Region R, int Index)>();
         long? lastTop = null;
-        foreach (var l in layers)
+        foreach (var (l, index) in layers)
         {
             long z0 = ToGrid(l.Z0), z1 = ToGrid(l.Z1);
             if (z1 <= z0) continue; // thinner than the grid: nothing to mesh
             if (lastTop is { } t && z0 != t) { BuildStack(stack); stack.Clear(); }
             if (lastTop is { } t2 && z0 < t2) throw new ArgumentException("layers overlap in z after snapping to the grid");
-            stack.Add((z0, z1, l.Region));
+            stack.Add((z0, z1, l.Region, index));
             lastTop = z1;
         }
         BuildStack(stack);
+        if (_collectConflicts && Conflicts.Count > 0) return null;
         var mesh = new Mesh(_vertices.ToArray(), _tris.ToArray(), true);
         if (_noded)
         {
@@ -122,7 +131,7 @@ internal sealed class MeshAssembly
 
     // ------------------------------------------------------------------------------------------------
 
-    private void BuildStack(List<(long Z0, long Z1, Region R)> stack)
+    private void BuildStack(List<(long Z0, long Z1, Region R, int Index)> stack)
     {
         int k = stack.Count;
         if (k == 0) return;
@@ -147,7 +156,7 @@ internal sealed class MeshAssembly
             RingUse[] below = m > 0 ? top[m - 1] : Array.Empty<RingUse>();
             RingUse[] above = m < k ? bottom[m] : Array.Empty<RingUse>();
             Region? rb = m > 0 ? stack[m - 1].R : null, ra = m < k ? stack[m].R : null;
-            BuildLevel(levels[m], below, above, rb, ra, m > 0 ? continues[m - 1] : null);
+            BuildLevel(levels[m], below, above, rb, ra, m > 0 ? continues[m - 1] : null, m > 0 ? stack[m - 1].Index : -1, m < k ? stack[m].Index : -1);
         }
 
         // Register every chain vertex first, so that wall sides know which vertices exist on their edges.
@@ -175,7 +184,7 @@ internal sealed class MeshAssembly
 
     // ---- one level: noding, classification, faces ----
 
-    private void BuildLevel(Level lv, RingUse[] below, RingUse[] above, Region? rb, Region? ra, int[]? continues)
+    private void BuildLevel(Level lv, RingUse[] below, RingUse[] above, Region? rb, Region? ra, int[]? continues, int belowLayer, int aboveLayer)
     {
         // Rings identical on both sides (same cyclic sequence, same direction) pass straight through.
         var passBelow = new int[below.Length];
@@ -236,7 +245,7 @@ internal sealed class MeshAssembly
             return;
         }
         _noded = true;
-        NodeAndClassify(lv, below, above, passBelow, passAbove, continues);
+        NodeAndClassify(lv, below, above, passBelow, passAbove, continues, belowLayer, aboveLayer);
     }
 
     private static void Identity(RingUse u)
@@ -321,7 +330,7 @@ internal sealed class MeshAssembly
     /// General level: snap-round all rings of both sides together, then sort every noded edge into the up
     /// face, the down face, or neither, by which side(s) it bounds.
     /// </summary>
-    private void NodeAndClassify(Level lv, RingUse[] below, RingUse[] above, int[] passBelow, int[] passAbove, int[]? continues)
+    private void NodeAndClassify(Level lv, RingUse[] below, RingUse[] above, int[] passBelow, int[] passAbove, int[]? continues, int belowLayer, int aboveLayer)
     {
         var inputs = new List<ISegmentString>();
         var owners = new List<(bool Below, int Index)>();
@@ -367,6 +376,7 @@ internal sealed class MeshAssembly
 
         // Signed use of each undirected noded edge by each side.
         var edges = new Dictionary<(long, long), (int B, int A)>();
+        var uses = new Dictionary<(long, long), (int B, int A)>(); // unsigned use counts
         void Count(GridPoint[] ring, bool isBelow)
         {
             for (int i = 0; i < ring.Length; i++)
@@ -377,10 +387,24 @@ internal sealed class MeshAssembly
                 int s = kp < kq ? 1 : -1;
                 edges.TryGetValue(key, out var e);
                 edges[key] = isBelow ? (e.B + s, e.A) : (e.B, e.A + s);
+                uses.TryGetValue(key, out var n);
+                uses[key] = isBelow ? (n.B + 1, n.A) : (n.B, n.A + 1);
             }
         }
         foreach (var u in below) Count(u.Noded, true);
         foreach (var u in above) Count(u.Noded, false);
+        if (_collectConflicts)
+        {
+            // One side using an edge both ways: two of its rings were pulled onto each other (a wall of zero
+            // thickness between them).
+            foreach (var (key, (nb, na)) in uses)
+            {
+                var (eb, ea) = edges[key];
+                var p = GridPoint.FromKey(key.Item1); var q = GridPoint.FromKey(key.Item2);
+                if (nb > Math.Abs(eb)) Conflicts.Add((belowLayer, p, q));
+                if (na > Math.Abs(ea)) Conflicts.Add((aboveLayer, p, q));
+            }
+        }
 
         // Locate against each side's net edges: back-and-forth steps left by snap rounding cancel out.
         var locBelow = below.Length > 0 ? new ExactAreaLocator(edges.Where(kv => kv.Value.B != 0).Select(kv => (GridPoint.FromKey(kv.Key.Item1), GridPoint.FromKey(kv.Key.Item2)))) : null;
@@ -392,7 +416,12 @@ internal sealed class MeshAssembly
             var p = GridPoint.FromKey(k1); var q = GridPoint.FromKey(k2);
             if (Math.Abs(b) > 1 || Math.Abs(a) > 1) throw new InvalidOperationException("noded rings overlap on one side");
             if (b == a) continue;
-            if (b != 0 && a != 0) { Add(up, p, q, b); Add(down, p, q, a); continue; }
+            if (b != 0 && a != 0)
+            {
+                // Opposite sides: the solid below and the solid above meet along this edge only.
+                if (_collectConflicts) Conflicts.Add((aboveLayer, p, q));
+                Add(up, p, q, b); Add(down, p, q, a); continue;
+            }
             if (b != 0)
             {
                 if (locAbove is not null && Inside(locAbove, p, q)) Add(down, p, q, -b); else Add(up, p, q, b);

@@ -1,4 +1,7 @@
 using System.Diagnostics.Contracts;
+using PartForge.Geometry.Primitives;
+using PartForge.Geometry.Profiles;
+using PartForge.Geometry.Regions;
 using PartForge.Geometry.Solids;
 
 namespace PartForge.Geometry.Meshes;
@@ -21,7 +24,45 @@ public static class Mesher
     {
         ArgumentNullException.ThrowIfNull(solid);
         ArgumentNullException.ThrowIfNull(prec);
-        return new MeshAssembly(prec).Build(solid);
+        var s = solid;
+        for (int attempt = 0; attempt < MaxHealPasses; attempt++)
+        {
+            var asm = new MeshAssembly(prec, collectConflicts: true);
+            if (asm.Build(s) is { } mesh) return mesh;
+            s = Heal(s, asm.Conflicts, prec, attempt);
+        }
+        return new MeshAssembly(prec).Build(s)!;
+    }
+
+    /// <summary>Heal passes before the mesher gives up (each pass doubles the patch width).</summary>
+    public const int MaxHealPasses = 6;
+
+    /// <summary>
+    /// Where a layer and the one below it, once noded on the grid, bound one edge from opposite sides (the two
+    /// solids would touch along a line: an edge of four faces), the layer above gets a thin patch over that edge,
+    /// 4 grid steps wide on the first pass and twice as wide on each further one. The solids then overlap
+    /// there instead of touching. Such edges come from boundaries that pass within half a grid step of each
+    /// other; the patch adds at most (edge length + width) x width of area (about 1e-7 mm^2 a patch on the
+    /// default grid).
+    /// </summary>
+    private static LayeredSolid Heal(LayeredSolid solid, List<(int Layer, GridPoint P, GridPoint Q)> conflicts, Precision prec, int attempt)
+    {
+        double g = prec.GridMm, w = 4 * g * (1 << attempt);
+        var layers = solid.Layers.ToArray();
+        foreach (var grp in conflicts.GroupBy(c => c.Layer).OrderBy(x => x.Key))
+        {
+            var patches = grp.Select(c =>
+            {
+                var p = new Vec2(c.P.X * g, c.P.Y * g);
+                var q = new Vec2(c.Q.X * g, c.Q.Y * g);
+                var d = q - p;
+                double len = Math.Sqrt(d.X * d.X + d.Y * d.Y);
+                double ang = Math.Atan2(d.Y, d.X) * 180 / Math.PI;
+                return Region.FromContour(Contour.Rectangle((p + q) * 0.5, len + w, w, ang), prec);
+            }).ToList();
+            layers[grp.Key] = layers[grp.Key] with { Region = layers[grp.Key].Region.Union(Region.UnionAll(patches, prec)) };
+        }
+        return new LayeredSolid(layers);
     }
 
     /// <summary>Largest |coordinate| (mm) whose float32 neighbours are closer than the grid step.</summary>

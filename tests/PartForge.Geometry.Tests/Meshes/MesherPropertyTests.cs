@@ -20,8 +20,8 @@ public class MesherPropertyTests
     /// <summary>
     /// Every random stack either meshes validly with the layer volume, or is refused with
     /// InvalidOperationException (never an invalid mesh). Refusals happen only where boundaries of touching
-    /// layers cross within one grid step (snap rounding at a half-cell); the rate is bounded here so that a
-    /// regression shows. Volume allowance: snap rounding moves an edge by at most one grid step, so the volume
+    /// layers cross within one grid step and even the heal passes (thin patches over such edges) leave a
+    /// ring that does not close; 1 in 3,000 seeds did so when measured, so the bound of 2% shows a regression. Volume allowance: snap rounding moves an edge by at most one grid step, so the volume
     /// may change by at most wall area x grid.
     /// </summary>
     [Fact]
@@ -41,7 +41,7 @@ public class MesherPropertyTests
             double v = solid.AnalyticVolume;
             Assert.True(Math.Abs(mesh.SignedVolume() - v) <= mesh.SurfaceArea() * Prec.GridMm, $"seed {seed}: mesh {mesh.SignedVolume()} vs layers {v}");
         }, iter: 300, threads: 1);
-        Assert.True(refused <= total / 10, $"{refused} of {total} random stacks refused");
+        Assert.True(refused <= total / 50, $"{refused} of {total} random stacks refused");
     }
 
     [Fact]
@@ -90,10 +90,29 @@ public class MesherPropertyTests
             Assert.True(rep.IsValid, $"seed {seed}: {rep}");
             Assert.True(Math.Abs(mesh.SignedVolume() - solid.AnalyticVolume) <= mesh.SurfaceArea() * Prec.GridMm, $"seed {seed}");
         }, iter: 200, threads: 1);
-        // Known limitation (see the kernel notes): where a feature of the upper layer cuts a ring of the lower
-        // one, about 15-25% of these random cases are refused today. The bound is looser than for the random
-        // stacks above for that reason only; it still catches any regression into invalid output.
-        Assert.True(refused <= total * 3 / 10, $"{refused} of {total} noded stacks refused");
+        // Where a feature of the upper layer cuts a ring of the lower one within half a grid step, noding alone
+        // made a non-manifold edge in 25% of these cases; the mesher's heal passes fix them (0 of 1,000 seeds
+        // refused when measured). The 2% bound leaves room for a rare seed and still shows a regression.
+        Assert.True(refused <= total / 50, $"{refused} of {total} noded stacks refused");
+    }
+
+    /// <summary>A block below and a block above that meet only along one edge at their common level (x = 10):
+    /// four faces would share that edge. The mesher's heal pass joins them with a patch a few grid steps wide,
+    /// so the result is one 2-manifold shell whose volume differs from the layers' by less than the patch.</summary>
+    [Fact]
+    public void SolidsMeetingAlongAnEdgeAcrossALevelAreJoinedIntoOneManifoldShell()
+    {
+        var below = Region.FromContour(Contour.Rectangle(new Vec2(5, 5), 10, 10, 0), Prec);
+        var above = Region.FromContour(Contour.Rectangle(new Vec2(15, 5), 10, 10, 0), Prec);
+        var solid = new LayeredSolid(new[] { new Layer(0, 2, below), new Layer(2, 4, above) });
+        var mesh = Mesher.Build(solid, Prec);
+        var rep = MeshValidator.Validate(mesh);
+        Assert.True(rep.IsValid, rep.ToString());
+        Assert.Equal(1, rep.ShellCount);
+        Assert.Equal(0, rep.NonManifoldEdges);
+        // patch: at most (10 mm + w) x w on the 2 mm layer, w = 4 grid steps on the first pass
+        double w = 4 * Prec.GridMm;
+        Assert.InRange(mesh.SignedVolume() - solid.AnalyticVolume, 0, (10 + w) * w * 2 * (1 << Mesher.MaxHealPasses));
     }
 
     /// <summary>A through pocket touching the rim at one point: the pinch is opened by one grid step, so the
