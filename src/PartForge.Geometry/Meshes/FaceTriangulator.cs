@@ -486,7 +486,7 @@ internal sealed class FaceTriangulator
     private void PutBackRemoved()
     {
         if (_removed.Count == 0) return;
-        var byEdge = new Dictionary<long, int>();
+        var byEdge = new Dictionary<long, int>(MixedLongComparer.Instance);
         for (int t = _start; t < _out.Count; t += 3)
             for (int k = 0; k < 3; k++) byEdge[EdgeKey(_out[t + k], _out[t + (k + 1) % 3])] = t;
         for (int r = _removed.Count - 1; r >= 0; r--)

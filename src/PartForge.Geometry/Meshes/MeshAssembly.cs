@@ -43,7 +43,7 @@ internal sealed class MeshAssembly
     private sealed class Level
     {
         public long Z;
-        public readonly Dictionary<long, int> Ids = new();
+        public readonly Dictionary<long, int> Ids = new(MixedLongComparer.Instance);
     }
 
     /// <summary>The mesh, or null when conflicts were collected (the caller heals and retries).</summary>
@@ -193,7 +193,7 @@ internal sealed class MeshAssembly
         Array.Fill(passAbove, -1);
         if (below.Length > 0 && above.Length > 0)
         {
-            var byHash = new Dictionary<long, List<int>>();
+            var byHash = new Dictionary<long, List<int>>(MixedLongComparer.Instance);
             for (int i = 0; i < above.Length; i++)
             {
                 long h = CanonicalHash(above[i].Orig);
@@ -451,7 +451,7 @@ internal sealed class MeshAssembly
     /// (the noder does not promise to return them in ring order).</summary>
     private static List<GridPoint> Chain(List<GridPoint[]> parts, GridPoint start)
     {
-        var byStart = new Dictionary<long, Queue<int>>();
+        var byStart = new Dictionary<long, Queue<int>>(MixedLongComparer.Instance);
         for (int i = 0; i < parts.Count; i++)
         {
             if (parts[i].Length == 0) continue;
@@ -481,7 +481,7 @@ internal sealed class MeshAssembly
     /// </summary>
     private static List<GridPoint> RemoveSpikes(List<GridPoint> pts, GridPoint[] orig)
     {
-        var own = new HashSet<long>(orig.Select(o => o.Key));
+        var own = new HashSet<long>(orig.Select(o => o.Key), MixedLongComparer.Instance);
         var res = new List<GridPoint>(pts.Count);
         foreach (var p in pts)
         {
@@ -540,7 +540,7 @@ internal sealed class MeshAssembly
     /// (so each walk bounds one face component).</summary>
     private static List<GridPoint[]> Cycles(List<(GridPoint P, GridPoint Q)> edges)
     {
-        var outs = new Dictionary<long, List<int>>();
+        var outs = new Dictionary<long, List<int>>(MixedLongComparer.Instance);
         for (int i = 0; i < edges.Count; i++)
         {
             long k = edges[i].P.Key;
@@ -627,7 +627,7 @@ internal sealed class MeshAssembly
                 while (again)
                 {
                     again = false;
-                    var keys = new Dictionary<long, int>();
+                    var keys = new Dictionary<long, int>(MixedLongComparer.Instance);
                     for (int i = 0; i < r.Length; i++) keys.TryAdd(r[i].Key, i);
                     for (int h = 0; h < holesOf[o].Count && !again; h++)
                     {

@@ -28,7 +28,7 @@ public static class MeshValidator
             remap[i] = id;
         }
         int f = m.TriangleCount;
-        var directed = new Dictionary<long, int>(f * 3);
+        var directed = new Dictionary<long, int>(f * 3, MixedLongComparer.Instance);
         int degenerate = 0;
         var uf = new UnionFind(ids.Count);
         for (int t = 0; t < f; t++)
@@ -40,7 +40,7 @@ public static class MeshValidator
             uf.Union(a, b); uf.Union(b, c);
         }
         int boundary = 0, nonManifold = 0;
-        var undirected = new HashSet<long>();
+        var undirected = new HashSet<long>(MixedLongComparer.Instance);
         foreach (var (key, count) in directed)
         {
             int u = (int)(key >> 32), v = (int)(key & 0xffffffff);
