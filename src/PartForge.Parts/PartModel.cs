@@ -31,8 +31,17 @@ public sealed record PartModel
     /// <summary>The part in exact primitives, layer by layer (what the solid was made from).</summary>
     public required IReadOnlyList<ExactLayer> ExactLayers { get; init; }
 
-    /// <summary>The layered solid in part-local coordinates (z from 0 at the bottom face).</summary>
-    public required LayeredSolid Solid { get; init; }
+    /// <summary>
+    /// The layered solid in part-local coordinates (z from 0 at the bottom face). Made from the exact layers on
+    /// first use (thread-safe): checks work on the exact primitives, so a check or a sweep, or a build that
+    /// writes only some parts, never pays for the regions of the others. Throws <see cref="PartsException"/>
+    /// when the layers cannot be made into regions.
+    /// </summary>
+    public LayeredSolid Solid => (_solid ?? throw new InvalidOperationException($"{Name}: no solid source")).Value;
+
+    private Lazy<LayeredSolid>? _solid;
+
+    internal Lazy<LayeredSolid> SolidSource { init => _solid = value; }
 
     /// <summary>
     /// The solid's closed, outward-oriented triangle mesh (part-local). Made on first use (thread-safe), so that

@@ -22,8 +22,6 @@ namespace PartForge.Parts;
 /// </summary>
 public static partial class PartsBuilder
 {
-    /// <summary>How many times a stator ring's grooves may be nudged before a mesher failure is reported.</summary>
-    public const int MaxStatorNudges = 4;
 
     /// <summary>
     /// Builds the parts from the design and the coil geometry the electrical engine computed.
@@ -35,7 +33,6 @@ public static partial class PartsBuilder
         ArgumentNullException.ThrowIfNull(coil);
         ArgumentNullException.ThrowIfNull(precision);
         var diags = new List<PartDiagnostic>();
-        var prebuilt = new Dictionary<PartSpec, PartModel>(ReferenceEqualityComparer.Instance);
         var stack = AxialStack.From(design);
         var specs = new List<PartSpec>();
         string part = "rotor";
@@ -53,32 +50,7 @@ public static partial class PartsBuilder
             part = "stator";
             var stators = new List<(PartSpec Spec, StatorBuilder.Variant Variant)>();
             foreach (var v in StatorBuilder.Variants(design))
-            {
-                // The ring's grooves cross the seats and each other; the mesher refuses boundaries that cross within one
-                // grid step of a vertex. Then the groove sizes are nudged by hundredths of a millimetre (deterministic) and
-                // the ring is made again; the mesh made here is kept.
-                for (int nudge = 0; ; nudge++)
-                {
-                    var tryDiags = new List<PartDiagnostic>();
-                    var spec = StatorBuilder.Build(design, stack, coil, footprint, v, tryDiags, nudge);
-                    var model = ToModel(spec, precision, design.Machine.Coils, design.Machine.Layout);
-                    try
-                    {
-                        _ = model.Mesh;
-                    }
-                    catch (InvalidOperationException) when (nudge < MaxStatorNudges)
-                    {
-                        continue;
-                    }
-                    diags.AddRange(tryDiags);
-                    if (nudge > 0)
-                        diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, v.Name, "grooves-nudged",
-                            FormattableString.Invariant($"{v.Name}: groove widths changed by {0.013 * nudge:0.###} mm to keep the mesh robust")));
-                    stators.Add((spec, v));
-                    prebuilt[spec] = model;
-                    break;
-                }
-            }
+                stators.Add((StatorBuilder.Build(design, stack, coil, footprint, v, diags), v));
 
             var formerInstances = new List<PartInstance>();
             for (int si = 0; si < stators.Count; si++)
@@ -106,7 +78,7 @@ public static partial class PartsBuilder
         {
             int symmetry = s.Name.StartsWith("rotor", StringComparison.Ordinal) ? design.Machine.Poles
                 : s.Name.StartsWith("stator", StringComparison.Ordinal) ? design.Machine.Coils : 1;
-            models.Add(prebuilt.TryGetValue(s, out var m) ? m : ToModel(s, precision, symmetry, design.Machine.Layout));
+            models.Add(ToModel(s, precision, symmetry, design.Machine.Layout));
         }
         return new PartSet { Parts = models, Stack = stack, Diagnostics = diags, ExplodeMm = design.Assembly.Explode };
     }
@@ -114,7 +86,7 @@ public static partial class PartsBuilder
     /// <summary>
     /// The layered solid of exact layers on the precision grid (one region per layer). Outers are discretised on
     /// the true arcs and cuts outside them (holes never undersize), the same way in every layer. A layer whose
-    /// cuts are pairwise apart is assembled by the kernel directly. A layer whose cuts are those of the layer below plus some
+    /// cuts are apart from each other and inside an outer is assembled by the kernel directly. A layer whose cuts are those of the layer below plus some
     /// more is made from the layer below by one difference with the union of the new cuts; other layers by one
     /// difference with the union of all their cuts (a union of many small polygons at once, not a chain).
     /// </summary>
@@ -132,13 +104,14 @@ public static partial class PartsBuilder
         foreach (var l in layers)
         {
             Region region;
-            if (PairwiseApart(l.Cuts))
+            // Cuts apart from each other and inside the outer: the kernel assembles the polygon directly from the
+            // discretised rings (for a ring of 64 round pockets 6 ms, against 350 ms by booleans).
+            if ((PairwiseApart(l.Cuts) ? Region.FromProfile(new Profile(l.Outers, l.Cuts), precision, symmetry)
+                    : Region.TryFromProfileDirect(new Profile(l.Outers, l.Cuts), precision, symmetry)) is { } direct)
             {
-                // Disjoint cuts: the kernel assembles the polygon directly from the discretised rings.
-                region = Region.FromProfile(new Profile(l.Outers, l.Cuts), precision, symmetry);
-                result.Add(new Layer(l.Z0Mm, l.Z1Mm, region));
+                result.Add(new Layer(l.Z0Mm, l.Z1Mm, direct));
                 prev = l;
-                prevRegion = region;
+                prevRegion = direct;
                 continue;
             }
             bool sameOuters = prev is not null && prev.Outers.Count == l.Outers.Count && prev.Outers.Zip(l.Outers).All(x => ReferenceEquals(x.First, x.Second));
@@ -197,16 +170,18 @@ public static partial class PartsBuilder
 
     private static PartModel ToModel(PartSpec s, Precision precision, int symmetry, string layout)
     {
-        LayeredSolid solid;
-        try
+        var solid = new Lazy<LayeredSolid>(() =>
         {
-            solid = SolidOf(s.Layers, precision, symmetry);
-        }
-        catch (ArgumentException ex)
-        {
-            throw new PartsException($"{s.Name}: the solid cannot be made ({ex.Message})");
-        }
-        var mesh = new Lazy<Mesh>(() => MeshOf(s.Name, solid, precision), LazyThreadSafetyMode.ExecutionAndPublication);
+            try
+            {
+                return SolidOf(s.Layers, precision, symmetry);
+            }
+            catch (ArgumentException ex)
+            {
+                throw new PartsException($"{s.Name}: the solid cannot be made ({ex.Message})");
+            }
+        }, LazyThreadSafetyMode.ExecutionAndPublication);
+        var mesh = new Lazy<Mesh>(() => MeshOf(s.Name, solid.Value, precision), LazyThreadSafetyMode.ExecutionAndPublication);
         bool rotating = s.Name.StartsWith("rotor", StringComparison.Ordinal) || s.Name == "back-iron"
             || (s.Name == "spacer" && layout == "dual-rotor");
         return new PartModel
@@ -216,7 +191,7 @@ public static partial class PartsBuilder
             Material = s.Material,
             HeightMm = s.HeightMm,
             ExactLayers = s.Layers,
-            Solid = solid,
+            SolidSource = solid,
             MeshSource = mesh,
             CutProfile = s.CutProfile,
             Marks = s.Marks,

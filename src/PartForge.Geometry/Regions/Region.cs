@@ -95,6 +95,23 @@ public sealed class Region
         return FromNts(Overlay(shell, cut, SpatialFunction.Difference, prec), prec);
     }
 
+    /// <summary>
+    /// The region of a profile when it can be assembled directly (every hole strictly inside one outer,
+    /// nothing overlapping: the fast path of <see cref="FromProfile"/>), else null, so that a caller with a
+    /// cheaper boolean route of its own (e.g. a layer that is the one below with a few more cuts) can take it.
+    /// </summary>
+    [Pure]
+    public static Region? TryFromProfileDirect(Profile p, Precision prec, int symmetry = 1)
+    {
+        ArgumentNullException.ThrowIfNull(p);
+        Validate(prec);
+        var f = FactoryFor(prec);
+        var outers = p.Outers.Select(c => Disc.Make(c, prec, false, symmetry)).Where(d => d.Ring.Count >= 3).ToList();
+        var holes = p.Holes.Select(c => Disc.Make(c, prec, true, symmetry)).Where(d => d.Ring.Count >= 3).ToList();
+        if (outers.Count == 0) return EmptyOn(prec);
+        return Disc.TryAssemble(outers, holes, f) is { } direct ? new Region(direct, prec) : null;
+    }
+
     /// <summary>The region inside one contour, with its vertices placed as for an outer, or as for a hole
     /// (outside the true arcs, for a region that will be cut away).</summary>
     [Pure]

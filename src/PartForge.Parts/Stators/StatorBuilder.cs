@@ -55,11 +55,9 @@ internal static class StatorBuilder
     }
 
     /// <summary>
-    /// Builds one ring. <paramref name="nudge"/> &gt; 0 widens the grooves by nudge x 0.013 mm (collector by
-    /// nudge x 0.011 mm) and moves the collector out by nudge x 0.007 mm: used only when the mesher refuses the
-    /// nominal layout because two groove boundaries cross within one grid step of a vertex.
+    /// Builds one ring.
     /// </summary>
-    public static PartSpec Build(D.Design d, AxialStack stack, CoilGeometry coil, Contour formerFootprint, Variant v, List<PartDiagnostic> diags, int nudge = 0)
+    public static PartSpec Build(D.Design d, AxialStack stack, CoilGeometry coil, Contour formerFootprint, Variant v, List<PartDiagnostic> diags)
     {
         var sd = d.Stator;
         double Ro = sd.OuterDiameter / 2, Ri = sd.InnerDiameter / 2, s = sd.Thickness;
@@ -69,7 +67,7 @@ internal static class StatorBuilder
         double wall = DesignGeometry.MinWallMm(d);
         double dw = coil.WireOverallMm > 0 ? coil.WireOverallMm : 0.5;
         double grooveDepth = Math.Min(Math.Max(2 * d.Process.Layer, 2 * dw), s / 3);
-        double channelW = Math.Max(1.0, 3 * dw) + 0.013 * nudge;
+        double channelW = Math.Max(1.0, 3 * dw);
         var o = new Vec2(0, 0);
         var notes = new List<string>();
         var features = new List<PartFeature>();
@@ -157,8 +155,8 @@ internal static class StatorBuilder
         double channelEnd;
         if (hasCollector)
         {
-            double wc = Math.Clamp(leads * dw * dw / (0.5 * grooveDepth), channelW, best.Hi - best.Lo) - 0.011 * nudge;
-            double rc = (best.Lo + best.Hi) / 2 + 0.007 * nudge;
+            double wc = Math.Clamp(leads * dw * dw / (0.5 * grooveDepth), channelW, best.Hi - best.Lo);
+            double rc = (best.Lo + best.Hi) / 2;
             double t = StatorLayout.TerminalAngleDeg;
             var half0 = Contour.AnnularSector(rc - wc / 2, rc + wc / 2, t, 180);
             var half1 = Contour.AnnularSector(rc - wc / 2, rc + wc / 2, t + 180, 180);
