@@ -51,6 +51,9 @@ public sealed record PartModel
 
     private Lazy<Mesh>? _mesh;
 
+    /// <summary>Whether the mesh has been made (a build meshes only the parts its files need).</summary>
+    public bool MeshMade => _mesh?.IsValueCreated == true;
+
     /// <summary>How the mesh is made (set by <see cref="PartsBuilder"/>).</summary>
     internal Lazy<Mesh> MeshSource { init => _mesh = value; }
 

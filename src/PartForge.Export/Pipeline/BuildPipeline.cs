@@ -22,9 +22,12 @@ namespace PartForge.Export.Pipeline;
 public static class BuildPipeline
 {
     /// <summary>Electrical results, parts and checks of a loaded design (no files). Thread-safe; used by sweeps.</summary>
-    public static Evaluation Evaluate(Design.Model.Design design, CheckOptions? options = null)
+    public static Evaluation Evaluate(Design.Model.Design design, CheckOptions? options = null) => Evaluate(design, options, null);
+
+    private static Evaluation Evaluate(Design.Model.Design design, CheckOptions? options, StageClock? clock)
     {
         var electrical = ElectricalEngine.Evaluate(design);
+        clock?.Lap("electrical");
         if (electrical.Coil?.Outline == null)
         {
             // Without a resolved coil there is nothing to build or measure: the electrical errors are the checks.
@@ -42,7 +45,9 @@ public static class BuildPipeline
             return new Evaluation(design, electrical, null, new CheckReport(fails));
         }
         var parts = PartsBuilder.Build(design, electrical, Precision.FromChordalTolerance(design.Mesh.ChordalTolerance));
+        clock?.Lap("parts");
         var checks = CheckRunner.Run(design, electrical, parts, options);
+        clock?.Lap("checks");
         return new Evaluation(design, electrical, parts, checks);
     }
 
@@ -56,7 +61,7 @@ public static class BuildPipeline
         var (ev, problem) = TryEvaluate(loaded.Design!, designPath);
         if (ev == null) return Bad([problem!]);
         bool countTriangles = meshes;
-        if (meshes && MeshProblem(ev, designPath) is { } meshProblem)
+        if (meshes && ev.Parts != null && MeshProblem(ev, ev.Parts.Parts, designPath) is { } meshProblem)
         {
             // Failing checks already explain an absurd part (e.g. a winding that overlaps its neighbours): report them
             // without triangle counts; otherwise the part itself is the problem.
@@ -76,6 +81,7 @@ public static class BuildPipeline
     /// <summary><c>partforge build</c>.</summary>
     public static PipelineResult Build(BuildRequest request)
     {
+        var clock = new StageClock();
         var problems = new List<string>();
         var formats = ExportFormats.ParseList(request.Formats, ExportFormats.All, "--formats", problems) ?? ExportFormats.All.ToHashSet();
         var partFilter = ExportFormats.ParseList(request.Parts, ExportFormats.PartNames, "--parts", problems);
@@ -84,8 +90,9 @@ public static class BuildPipeline
         var loaded = DesignLoader.Load(request.DesignPath);
         if (!loaded.Success) problems.InsertRange(0, loaded.Errors.Select(e => e.ToString()));
         if (problems.Count > 0) return Bad(problems);
+        clock.Lap("load");
 
-        var (ev, problem) = TryEvaluate(loaded.Design!, request.DesignPath);
+        var (ev, problem) = TryEvaluate(loaded.Design!, request.DesignPath, clock);
         if (ev == null) return Bad([problem!]);
         if (partFilter != null && ev.Parts != null)
         {
@@ -106,9 +113,10 @@ public static class BuildPipeline
             };
         }
 
-        if (MeshProblem(ev, request.DesignPath) is { } meshProblem) return Bad([meshProblem]);
         var plan = ExportPlan.For(ev, formats, partFilter);
-        var doc = ResultsBuilder.Build(ev, plan.FilesByPart, forced: failed);
+        if (MeshProblem(ev, plan.MeshedParts(ev.Parts), request.DesignPath) is { } meshProblem) return Bad([meshProblem]);
+        clock.Lap("mesh");
+        var doc = ResultsBuilder.Build(ev, plan.FilesByPart, forced: failed, countTriangles: plan.WritesResults);
         var written = new List<string>();
         try
         {
@@ -128,6 +136,7 @@ public static class BuildPipeline
         {
             return new PipelineResult { Status = PipelineStatus.BadInput, Problems = [$"{request.OutputDir}: permission denied"], Evaluation = ev, Results = doc, Written = written, OutputFolder = folder.FullPath };
         }
+        clock.Lap("write");
         return new PipelineResult
         {
             Status = failed ? PipelineStatus.ChecksFailed : PipelineStatus.Ok,
@@ -136,6 +145,7 @@ public static class BuildPipeline
             Results = doc,
             Written = written,
             OutputFolder = folder.FullPath,
+            Timings = clock.Laps,
         };
     }
 
@@ -153,7 +163,8 @@ public static class BuildPipeline
                 folder.Write(f.Name, s => ThreeMfWriter.Write(s, d.Name, objects));
                 break;
             case "dxf":
-                folder.Write(f.Name, s => DxfWriter.Write(s, CutSheetOf(d, f.Part!)));
+                var contours = d.Process.DxfContours == "entities" ? DxfContours.Entities : DxfContours.Polyline;
+                folder.Write(f.Name, s => DxfWriter.Write(s, CutSheetOf(d, f.Part!), contours));
                 break;
             case "svg":
                 folder.Write(f.Name, s => SvgWriter.Write(s, CutSheetOf(d, f.Part!)));
@@ -185,12 +196,13 @@ public static class BuildPipeline
     private static CutSheet CutSheetOf(Design.Model.Design d, PartModel p) =>
         new(p.Name, p.CutProfile ?? throw new InvalidOperationException($"cut part {p.Name} has no cut profile"), p.Marks, d.Process.Kerf);
 
-    private static (Evaluation? Ev, string? Problem) TryEvaluate(Design.Model.Design d, string file)
+    private static (Evaluation? Ev, string? Problem) TryEvaluate(Design.Model.Design d, string file, StageClock? clock = null)
     {
         if (MeshBudget.Check(d, file) is { } tooFine) return (null, tooFine);
+        clock?.Lap("budget");
         try
         {
-            var ev = Evaluate(d);
+            var ev = Evaluate(d, null, clock);
             if (ev.Parts is { HasErrors: true } ps)
                 return (null, string.Join("; ", ps.Diagnostics.Where(x => x.Severity == Parts.DiagnosticSeverity.Error).Select(x => $"{file}: {x.Part}: {x.Message}")));
             return (ev, null);
@@ -202,14 +214,15 @@ public static class BuildPipeline
     }
 
     /// <summary>
-    /// Meshes every part (the meshes are made on first use) before anything is reported or written, so that a
-    /// part the mesher refuses for its size (beyond the float32-safe coordinate range) is a design problem
-    /// (exit 2, nothing written), not a failure halfway through the export.
+    /// Meshes the parts that will be written or counted (the meshes are made on first use) before anything is
+    /// reported or written, so that a part the mesher refuses for its size (beyond the float32-safe coordinate
+    /// range) is a design problem (exit 2, nothing written), not a failure halfway through the export. Parts
+    /// that no planned file needs are not meshed at all.
     /// </summary>
-    private static string? MeshProblem(Evaluation ev, string file)
+    private static string? MeshProblem(Evaluation ev, IEnumerable<PartModel> parts, string file)
     {
         if (ev.Parts == null) return null;
-        foreach (var p in ev.Parts.Parts)
+        foreach (var p in parts)
         {
             try
             {
@@ -228,4 +241,19 @@ public static class BuildPipeline
         r.Checks.Where(c => c.Status == CheckStatus.Fail).Select(c => $"check {c.Id} failed on {c.Part}: {c.Message}").ToArray();
 
     private static PipelineResult Bad(IEnumerable<string> problems) => new() { Status = PipelineStatus.BadInput, Problems = problems.ToArray() };
+
+    /// <summary>Stage laps of one run.</summary>
+    private sealed class StageClock
+    {
+        private readonly System.Diagnostics.Stopwatch _sw = System.Diagnostics.Stopwatch.StartNew();
+        private readonly List<(string, double)> _laps = new();
+
+        public IReadOnlyList<(string Stage, double Ms)> Laps => _laps;
+
+        public void Lap(string stage)
+        {
+            _laps.Add((stage, Math.Round(_sw.Elapsed.TotalMilliseconds, 2)));
+            _sw.Restart();
+        }
+    }
 }

@@ -19,6 +19,27 @@ public sealed class ExportPlan
 
     public IReadOnlyList<FileSpec> Files { get; }
 
+    /// <summary>Whether the results document is written (it then carries every part's triangle count).</summary>
+    public bool WritesResults => Files.Any(f => f.Format == "json");
+
+    /// <summary>The parts whose meshes the planned files need, in the machine's part order: the STL, 3MF and
+    /// preview parts, and every part for the assembly preview, the results document (volumes and triangle
+    /// counts), the BOM and the report (masses and sizes). DXF and SVG alone need no mesh.</summary>
+    public IReadOnlyList<PartModel> MeshedParts(PartSet all)
+    {
+        var need = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var f in Files)
+        {
+            switch (f.Format)
+            {
+                case "stl": case "png" when f.Part != null: need.Add(f.Part!.Name); break;
+                case "3mf": foreach (var p in f.Parts) need.Add(p.Name); break;
+                case "png": case "json": case "csv": case "html": foreach (var p in all.Parts) need.Add(p.Name); break;
+            }
+        }
+        return all.Parts.Where(p => need.Contains(p.Name)).ToArray();
+    }
+
     /// <summary>File names per part name (for the results document's parts list).</summary>
     public IReadOnlyDictionary<string, IReadOnlyList<string>> FilesByPart { get; }
 

@@ -11,7 +11,9 @@ public static class ResultsBuilder
     /// <param name="ev">The evaluated design.</param>
     /// <param name="files">Output file names per part name (empty for <c>check</c>, which writes nothing).</param>
     /// <param name="forced">Written with --force although a check failed.</param>
-    /// <param name="countTriangles">Mesh the parts to count their triangles (false: report 0 and skip meshing, for summaries that do not show them).</param>
+    /// <param name="countTriangles">Measure the parts: their volumes (from the solids) and triangle counts (from
+    /// the meshes). False reports 0 for both and makes neither, for summaries that do not show them and builds
+    /// that do not write the results document; the solids and meshes are otherwise made on first use.</param>
     public static ResultsDocument Build(Evaluation ev, IReadOnlyDictionary<string, IReadOnlyList<string>>? files = null, bool forced = false, bool countTriangles = true)
     {
         var checks = ev.Checks;
@@ -22,7 +24,7 @@ public static class ResultsBuilder
             Electrical = ElectricalOf(ev.Design, ev.Electrical),
             Checks = checks.Checks.Select(c => new CheckEntry(c.Id, c.Part, c.StatusText, c.Value, c.Limit, c.Unit, c.Margin, c.Message)).ToArray(),
             Parts = ev.Parts?.Parts.Select(p => new PartEntry(p.Name, p.Process.ToContractName(), p.Quantity,
-                files != null && files.TryGetValue(p.Name, out var f) ? f : Array.Empty<string>(), p.VolumeMm3, countTriangles ? p.Mesh.TriangleCount : 0)
+                files != null && files.TryGetValue(p.Name, out var f) ? f : Array.Empty<string>(), countTriangles ? p.VolumeMm3 : 0, countTriangles ? p.Mesh.TriangleCount : 0)
             { Material = p.Material }).ToArray() ?? [],
         };
     }
