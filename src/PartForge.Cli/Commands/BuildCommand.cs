@@ -4,7 +4,7 @@ using PartForge.Export.Pipeline;
 
 namespace PartForge.Cli.Commands;
 
-/// <summary><c>partforge build DESIGN [-o DIR] [--formats LIST] [--parts LIST] [--force]</c>.</summary>
+/// <summary><c>partforge build DESIGN [-o DIR] [--formats LIST] [--parts LIST] [--force] [--timings]</c>.</summary>
 public static class BuildCommand
 {
     public static Command Create()
@@ -14,9 +14,10 @@ public static class BuildCommand
         var formats = new Option<string?>("--formats") { Description = $"Comma-separated formats to write: {string.Join(",", ExportFormats.All)} (default: all that apply to each part).", HelpName = "LIST" };
         var parts = new Option<string?>("--parts") { Description = $"Comma-separated parts to write: {string.Join(",", ExportFormats.PartNames)} (default: all).", HelpName = "LIST" };
         var force = new Option<bool>("--force") { Description = "Write even if a check fails; the results and the report are then marked failed." };
+        var timings = new Option<bool>("--timings") { Description = "Print the wall time of each stage (load, electrical, parts, checks, mesh, write) to standard error." };
         var cmd = new Command("build", "Check a design, then write its parts (STL, 3MF, DXF, SVG), results, report, BOM and previews. A failed check writes nothing.")
         {
-            design, output, formats, parts, force,
+            design, output, formats, parts, force, timings,
         };
         CommandAction.Set(cmd, (pr, s) =>
         {
@@ -29,6 +30,9 @@ public static class BuildCommand
                 Force = pr.GetValue(force),
             });
             foreach (var p in r.Problems) s.Problem(p);
+            if (pr.GetValue(timings) && r.Timings.Count > 0)
+                s.Problem("timings: " + string.Join(", ", r.Timings.Select(t => FormattableString.Invariant($"{t.Stage} {t.Ms:0.0} ms")))
+                    + FormattableString.Invariant($"; process {(DateTime.Now - System.Diagnostics.Process.GetCurrentProcess().StartTime).TotalMilliseconds:0} ms so far"));
             if (r.Status == PipelineStatus.BadInput) return ExitCodes.BadInput;
             string dir = pr.GetValue(output) ?? "out";
             if (r.Written.Count == 0)

@@ -12,6 +12,18 @@ public class BuildCommandTests
     private static string Failing => Crank.Replace("  air_gap: 1.0\n", "  air_gap: 0.4\n");
 
     [Fact]
+    public void Build_timings_go_to_stderr_stage_by_stage()
+    {
+        using var w = new WorkDir();
+        w.Write("d.yaml", Crank);
+        var r = PartforgeProcess.Run(w.Path, "build", "d.yaml", "-o", "out", "--formats", "stl", "--parts", "rotor", "--timings");
+        Assert.True(r.ExitCode == 0, r.ToString());
+        Assert.Matches(@"^timings: load [0-9.]+ ms, budget [0-9.]+ ms, electrical [0-9.]+ ms, parts [0-9.]+ ms, checks [0-9.]+ ms, mesh [0-9.]+ ms, write [0-9.]+ ms; process [0-9]+ ms so far", r.Stderr.Trim());
+        Assert.DoesNotContain("timings", r.Stdout);
+        Assert.Equal(["crank-bench-rotor.stl"], Directory.GetFiles(w.File("out")).Select(Path.GetFileName).ToArray());
+    }
+
+    [Fact]
     public void Build_writes_every_output_once_deterministically_and_leaves_foreign_files_alone()
     {
         using var w = new WorkDir();
