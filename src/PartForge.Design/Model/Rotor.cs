@@ -25,6 +25,12 @@ public sealed class Rotor
 
     [OneOf("PLA", "PETG", "ABS", "ASA", "PA", "aluminium", "steel", "acrylic", "plywood"), Doc("Rotor disc material.")]
     public string Material { get; init; } = "PLA";
+
+    [OneOf("dots", "none"), Doc("Polarity marks: dots (shallow blind holes beside the north-up pockets, or engraved on a cut disc) or none (mark the magnets yourself).")]
+    public string Marks { get; init; } = "dots";
+
+    [OneOf("notch", "none"), Doc("Index mark on the rim at pocket 0: notch (a half-round cut-out) or none.")]
+    public string Index { get; init; } = "notch";
 }
 
 public sealed class BoltCircle

@@ -78,7 +78,12 @@ internal static class RotorBuilder
 
         // Index notch on the rim at pocket 0.
         double notch = Math.Min(MaxNotchRadiusMm, R - pOut - wall);
-        if (notch < MinNotchRadiusMm)
+        if (rd.Index == "none")
+        {
+            notch = 0;
+            notes.Add("no rim index notch (rotor.index: none): pocket 0 is the one on the part's +x axis; mark it before taking the part off the print bed");
+        }
+        else if (notch < MinNotchRadiusMm)
         {
             notch = 0;
             notes.Add("no rim index notch: the web between pocket 0 and the rim is too thin for one; pocket 0 is the one on the part's +x axis");
@@ -92,7 +97,7 @@ internal static class RotorBuilder
         // Polarity dots.
         double dotD = Math.Max(1.5, 3 * d.Process.Nozzle);
         double dotDepth = Math.Min(2 * d.Process.Layer, Math.Min(t / 4, (t - pocketZ0) / 2));
-        var dotRadius = PlaceDots(d, R, notch, pocket0, pockets, bore, bolts, dotD / 2, wall, pIn, pOut);
+        var dotRadius = rd.Marks == "none" ? null : PlaceDots(d, R, notch, pocket0, pockets, bore, bolts, dotD / 2, wall, pIn, pOut);
         var features = new List<PartFeature>
         {
             new("rim", FeatureKind.Rim, 0, rim, 0, t, 0, R),
@@ -116,7 +121,9 @@ internal static class RotorBuilder
                 features.Add(new($"mark-{i}", FeatureKind.PolarityMark, i, dot, t - dotDepth, t, a, rDot));
             }
         }
-        if (dotRadius is null)
+        if (dotRadius is null && rd.Marks == "none")
+            notes.Add("no polarity dots (rotor.marks: none): mark each magnet's north pole yourself, and count north-up magnets from pocket 0 (even pockets on the front rotor)");
+        else if (dotRadius is null)
         {
             notes.Add("no polarity dots: there is no room beside the pockets; count north-up magnets from pocket 0 (even pockets on the front rotor)");
             diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, name, "no-polarity-marks", $"{name}: no room beside the pockets for polarity dots; left out"));

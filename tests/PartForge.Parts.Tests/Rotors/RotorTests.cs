@@ -11,6 +11,36 @@ public class RotorTests
     private static PartSet Dual() { var d = TestDesigns.DualRotor(); return PartsBuilder.Build(d, TestDesigns.RoundCoil(d, 6, 15, 45, 75), TestDesigns.Prec(d)); }
     private static PartSet DualStator(PartForge.Design.Model.Design? d = null) { d ??= TestDesigns.DualStator(); return PartsBuilder.Build(d, TestDesigns.RoundCoil(d, 6, 45), TestDesigns.Prec(d)); }
 
+    /// <summary>rotor.marks: none and rotor.index: none leave the rotor as the bare disc with its pockets and
+    /// holes: no polarity dots, no notch (the rim is one full circle), and the volume drops by exactly the
+    /// dots' and the notch's material.</summary>
+    [Fact]
+    public void MarksAndIndexNoneLeaveABareDisc()
+    {
+        var d0 = TestDesigns.SingleRotor();
+        var d1 = new Design.Model.Design
+        {
+            Name = d0.Name, Machine = d0.Machine, Magnets = d0.Magnets, Coils = d0.Coils, Former = d0.Former, Stator = d0.Stator,
+            Sensor = d0.Sensor, Mesh = d0.Mesh,
+            Rotor = new PartForge.Design.Model.Rotor
+            {
+                OuterDiameter = d0.Rotor.OuterDiameter, Thickness = d0.Rotor.Thickness, Bore = d0.Rotor.Bore,
+                PocketClearance = d0.Rotor.PocketClearance, PocketFloor = d0.Rotor.PocketFloor, BoltCircle = d0.Rotor.BoltCircle,
+                Marks = "none", Index = "none",
+            },
+        };
+        var marked = Single().Get("rotor");
+        var bare = PartsBuilder.Build(d1, TestDesigns.RoundCoil(d1, 5, 20, 60, 100), TestDesigns.Prec(d1)).Get("rotor");
+        Assert.NotEmpty(marked.FeaturesOf(FeatureKind.PolarityMark));
+        Assert.NotEmpty(marked.FeaturesOf(FeatureKind.IndexNotch));
+        Assert.Empty(bare.FeaturesOf(FeatureKind.PolarityMark));
+        Assert.Empty(bare.FeaturesOf(FeatureKind.IndexNotch));
+        Assert.NotNull(bare.Feature("rim").Contour.Circle);
+        Assert.Equal(marked.FeaturesOf(FeatureKind.MagnetPocket).Count(), bare.FeaturesOf(FeatureKind.MagnetPocket).Count());
+        Assert.True(MeshValidator.Validate(bare.Mesh).IsValid);
+        Assert.True(bare.VolumeMm3 > marked.VolumeMm3);
+    }
+
     [Fact]
     public void DiscPocketsAtPoleAnglesWithClearance()
     {
