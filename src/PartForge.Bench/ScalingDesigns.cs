@@ -16,8 +16,9 @@ public static class ScalingDesigns
 
     private static string F(double v) => Math.Round(v, 3).ToString("0.###", Inv);
 
-    /// <summary>YAML of the scaling design with <paramref name="poles"/> pockets and <paramref name="coils"/> coils.</summary>
-    public static string Yaml(int poles, int coils, double chordalTolerance)
+    /// <summary>YAML of the scaling design with <paramref name="poles"/> pockets and <paramref name="coils"/> coils;
+    /// <paramref name="marks"/> false leaves out the polarity dots and the rim notch (the bare R2 rotor shape).</summary>
+    public static string Yaml(int poles, int coils, double chordalTolerance, bool marks = true)
     {
         const double pitchR = 180;
         double pocketChord = 2 * pitchR * Math.Sin(Math.PI / poles);
@@ -35,6 +36,7 @@ public static class ScalingDesigns
         sb.Append($"magnets:\n  shape: disc\n  diameter: {F(magnetD)}\n  thickness: 6\n  grade: N42\n  pitch_radius: {F(pitchR)}\n");
         sb.Append("rotor:\n  outer_diameter: 400\n  thickness: 10\n  bore: 25\n  pocket_clearance: 0.15\n  pocket_floor: 4\n");
         sb.Append("  bolt_circle: { diameter: 60, count: 8, hole: 6.6 }\n  material: PLA\n");
+        if (!marks) sb.Append("  marks: none\n  index: none\n");
         sb.Append($"coils:\n  shape: round\n  wire: {{ awg: 26 }}\n  enamel: grade-2\n  turns: {turns}\n  fill_factor: 0.42\n  height: {F(height)}\n");
         sb.Append($"  core: {{ diameter: {F(core)} }}\n  max_temperature: 50\n");
         sb.Append("former:\n  flange: 0.8\n  margin: 1.0\n");
