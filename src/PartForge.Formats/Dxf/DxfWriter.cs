@@ -11,9 +11,10 @@ namespace PartForge.Formats.Dxf;
 /// Writes a cut sheet as ASCII DXF release 12 (AC1009), following the published DXF reference: a HEADER
 /// (version, millimetre units, extents), TABLES (line type CONTINUOUS; layers <see cref="DxfLayers.Cut"/>,
 /// <see cref="DxfLayers.Mark"/>, <see cref="DxfLayers.Notes"/>; text style STANDARD), an empty BLOCKS
-/// section and the ENTITIES. Full circles become CIRCLE entities; every other contour one closed
-/// POLYLINE (flag 70 = 1) of VERTEX entities whose group 42 bulge, tan(sweep / 4), carries the true arcs,
-/// ended by SEQEND. Order: marks, then holes, then outlines. The kerf is stated in a 999 comment at the top
+/// section and the ENTITIES. Full circles become CIRCLE entities; every other contour, by default
+/// (<see cref="DxfContours.Polyline"/>), one closed POLYLINE (flag 70 = 1) of VERTEX entities whose group 42
+/// bulge, tan(sweep / 4), carries the true arcs, ended by SEQEND; or (<see cref="DxfContours.Entities"/>) one
+/// LINE or ARC entity per segment, in the contour's order. Order: marks, then holes, then outlines. The kerf is stated in a 999 comment at the top
 /// and, shorter, in a TEXT on the NOTES layer below the part.
 /// </summary>
 /// <remarks>
@@ -21,6 +22,14 @@ namespace PartForge.Formats.Dxf;
 /// on its own line; numbers in invariant culture, shortest round-trip form without exponents; text is
 /// ASCII with other characters written as \U+XXXX. The output depends only on the input (byte-identical
 /// on rewrite). No entity handles are written ($HANDLING 0), as R12 allows.
+/// <para>LINE and ARC chains: an ARC is always counter-clockwise from its start angle (group 50) to its end
+/// angle (group 51), in degrees in [0, 360), about its centre (group 10/20) with radius (group 40), as the
+/// DXF reference defines it; a clockwise arc segment (every arc of a hole, which is cut clockwise) is
+/// therefore written as the same arc with its ends swapped. Consecutive segments meet at the contour's
+/// vertices (each segment's start point, as the polyline form writes them): a LINE's ends are written as
+/// exactly those points, so neighbouring lines share their end points digit for digit and an ARC's ends,
+/// which the reader computes from centre, radius and angles, meet them to rounding. An arc of a full turn
+/// or more (which an ARC cannot carry) is written as two halves.</para>
 /// </remarks>
 public static class DxfWriter
 {
@@ -28,19 +37,21 @@ public static class DxfWriter
     public const double NoteHeightMm = 2.5;
 
     /// <summary>Compensates the sheet for its kerf (<see cref="KerfCompensation.Apply"/>) and writes it.</summary>
-    public static void Write(Stream stream, CutSheet sheet) => Write(stream, KerfCompensation.Apply(sheet));
+    public static void Write(Stream stream, CutSheet sheet, DxfContours contours = DxfContours.Polyline) =>
+        Write(stream, KerfCompensation.Apply(sheet), contours);
 
     /// <summary>Compensates and writes the sheet to a file atomically (temporary file, then rename); on an
     /// error nothing is left under <paramref name="path"/>'s name.</summary>
-    public static void WriteFile(string path, CutSheet sheet)
+    public static void WriteFile(string path, CutSheet sheet, DxfContours contours = DxfContours.Polyline)
     {
         var plan = KerfCompensation.Apply(sheet);
-        AtomicFile.Write(path, s => Write(s, plan));
+        AtomicFile.Write(path, s => Write(s, plan, contours));
     }
 
     /// <summary>Writes an already compensated plan.</summary>
-    public static void Write(Stream stream, CutPlan plan)
+    public static void Write(Stream stream, CutPlan plan, DxfContours contours = DxfContours.Polyline)
     {
+        if (contours is not (DxfContours.Polyline or DxfContours.Entities)) throw new ArgumentOutOfRangeException(nameof(contours));
         ArgumentNullException.ThrowIfNull(stream);
         ArgumentNullException.ThrowIfNull(plan);
         var w = new TagWriter(new StringBuilder(4096 + plan.Paths.Count * 512));
@@ -94,6 +105,11 @@ public static class DxfWriter
                 w.Tag(0, "CIRCLE"); w.Tag(8, layer); w.Point(10, c.Center); w.Real(40, c.Radius);
                 continue;
             }
+            if (contours == DxfContours.Entities)
+            {
+                Chain(w, layer, path.Contour);
+                continue;
+            }
             w.Tag(0, "POLYLINE"); w.Tag(8, layer); w.Int(66, 1); w.Point(10, new Vec2(0, 0)); w.Int(70, 1);
             foreach (var s in ArcPieces.Of(path.Contour))
             {
@@ -127,6 +143,51 @@ public static class DxfWriter
         ArgumentNullException.ThrowIfNull(plan);
         string k = InvariantNumber.Format(plan.KerfMm), h = InvariantNumber.Format(plan.HalfKerfMm);
         return plan.KerfMm == 0 ? "kerf 0: not compensated" : $"kerf {k} mm compensated (outlines +{h}, holes -{h})";
+    }
+
+    /// <summary>The contour as LINE and ARC entities, one per segment, in order (see the remarks).</summary>
+    private static void Chain(TagWriter w, string layer, Contour contour)
+    {
+        var segs = contour.Segments;
+        for (int i = 0; i < segs.Count; i++)
+        {
+            switch (segs[i])
+            {
+                case LineSegment:
+                    w.Tag(0, "LINE"); w.Tag(8, layer);
+                    w.Point(10, segs[i].Start);
+                    w.Point(11, segs[(i + 1) % segs.Count].Start);
+                    break;
+                case ArcSegment a when Math.Abs(a.SweepDeg) >= 360:
+                    Arc(w, layer, a with { SweepDeg = a.SweepDeg / 2 });
+                    Arc(w, layer, a with { StartDeg = a.StartDeg + a.SweepDeg / 2, SweepDeg = a.SweepDeg / 2 });
+                    break;
+                case ArcSegment a:
+                    Arc(w, layer, a);
+                    break;
+                default:
+                    throw new ArgumentException($"unknown segment type {segs[i].GetType().Name}", nameof(contour));
+            }
+        }
+    }
+
+    /// <summary>One ARC: counter-clockwise from group 50 to group 51; a clockwise segment with its ends swapped.</summary>
+    private static void Arc(TagWriter w, string layer, ArcSegment a)
+    {
+        double from = a.SweepDeg >= 0 ? a.StartDeg : a.EndDeg;
+        double to = a.SweepDeg >= 0 ? a.EndDeg : a.StartDeg;
+        w.Tag(0, "ARC"); w.Tag(8, layer);
+        w.Point(10, a.Center);
+        w.Real(40, a.Radius);
+        w.Real(50, Degrees(from));
+        w.Real(51, Degrees(to));
+    }
+
+    /// <summary>An angle in [0, 360) (a tiny negative angle would otherwise round up to 360).</summary>
+    private static double Degrees(double deg)
+    {
+        double r = Angle.Normalize360(deg);
+        return r >= 360 ? 0 : r;
     }
 
     private static void Layer(TagWriter w, string name, int color)
