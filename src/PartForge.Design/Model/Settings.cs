@@ -37,6 +37,9 @@ public sealed class Process
 
     [Range(0, 2), Doc("Laser kerf for cut parts, mm.")]
     public double Kerf { get; init; } = 0.15;
+
+    [OneOf("polyline", "entities"), Doc("How DXF cut sheets carry contours that are not full circles: polyline (one closed POLYLINE, arcs as bulges) or entities (LINE and ARC entities chained end to end, for laser-cutter software that reads no bulges).")]
+    public string DxfContours { get; init; } = "polyline";
 }
 
 public sealed class MeshSettings

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Text;
 using System.Text.Json;
 using PartForge.Formats.Cutting;
@@ -25,78 +26,36 @@ public class DxfEntityChainTests
     }
 
     /// <summary>
-    /// Reads the file with ezdxf, audits it, and walks the LINE and ARC entities in file order into chains: a
-    /// chain starts at an entity and follows the entity that shares the current end point (an ARC may be
-    /// walked from its end angle back to its start angle) until it returns to where it started. ezdxf computes
-    /// each ARC's end points from centre, radius and angles itself. Each chain reports its layer, entity count,
-    /// whether it closed, the largest gap between consecutive end points, and its signed area (shoelace over
-    /// the end points plus the circular segment of every arc, sign by the walking direction).
+    /// tests/readers/dxf-chains.py: reads the file with ezdxf, audits it, and walks the LINE and ARC entities in
+    /// file order into closed chains (layer, entity count, closed, largest end-point gap, signed area).
     /// </summary>
-    private const string ChainScript = """
-import sys, json, math, ezdxf
-doc = ezdxf.readfile(sys.argv[1])
-auditor = doc.audit()
-msp = doc.modelspace()
-TOL = 1e-6
-ents = []
-for e in msp:
-    t = e.dxftype()
-    if t == "LINE":
-        s, q = e.dxf.start, e.dxf.end
-        ents.append({"t": "LINE", "layer": e.dxf.layer, "a": (s.x, s.y), "b": (q.x, q.y)})
-    elif t == "ARC":
-        s, q = e.start_point, e.end_point
-        span = (e.dxf.end_angle - e.dxf.start_angle) % 360.0
-        if span == 0: span = 360.0
-        ents.append({"t": "ARC", "layer": e.dxf.layer, "a": (s.x, s.y), "b": (q.x, q.y), "r": e.dxf.radius, "span": span})
-def dist(p, q): return math.hypot(p[0] - q[0], p[1] - q[1])
-def walk(start, first_rev):
-    # returns (end index, closed, max gap, area) walking from ents[start]
-    e = ents[start]
-    a, b = (e["b"], e["a"]) if first_rev else (e["a"], e["b"])
-    origin, cur, gap, area, k = a, b, 0.0, 0.0, start
-    def add(e, p, q, rev):
-        nonlocal area
-        area += (p[0] * q[1] - q[0] * p[1]) / 2
-        if e["t"] == "ARC":
-            phi = math.radians(e["span"]) * (-1 if rev else 1)
-            area += e["r"] ** 2 / 2 * (phi - math.sin(phi))
-    add(e, a, b, first_rev)
-    while dist(cur, origin) > TOL:
-        k += 1
-        if k >= len(ents): return None
-        e = ents[k]
-        if dist(cur, e["a"]) <= TOL: rev = False; p, q = e["a"], e["b"]
-        elif dist(cur, e["b"]) <= TOL: rev = True; p, q = e["b"], e["a"]
-        else: return None
-        gap = max(gap, dist(cur, p)); add(e, p, q, rev); cur = q
-    gap = max(gap, dist(cur, origin))
-    return k, gap, area
-chains, i = [], 0
-while i < len(ents):
-    r = walk(i, False) or walk(i, True)
-    if r is None:
-        chains.append([ents[i]["layer"], 1, False, -1.0, 0.0]); i += 1; continue
-    k, gap, area = r
-    chains.append([ents[i]["layer"], k - i + 1, True, gap, area]); i = k + 1
-out = {
-  "errors": len(auditor.errors),
-  "fixes": len(auditor.fixes),
-  "types": [e.dxftype() for e in msp],
-  "arcs": [[e.dxf.layer, e.dxf.center.x, e.dxf.center.y, e.dxf.radius, e.start_point.x, e.start_point.y, e.end_point.x, e.end_point.y]
-           for e in msp.query("ARC")],
-  "circles": [[e.dxf.layer, e.dxf.center.x, e.dxf.center.y, e.dxf.radius] for e in msp.query("CIRCLE")],
-  "chains": chains,
-}
-print(json.dumps(out))
-""";
+    private static string ChainScript([CallerFilePath] string here = "")
+    {
+        string beside = Path.GetFullPath(Path.Combine(Path.GetDirectoryName(here)!, "..", "..", "readers", "dxf-chains.py"));
+        if (File.Exists(beside)) return beside;
+        // Built elsewhere: walk up from the test output to the repository's tests folder.
+        for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
+        {
+            string candidate = Path.Combine(dir.FullName, "tests", "readers", "dxf-chains.py");
+            if (File.Exists(candidate)) return candidate;
+        }
+        throw new FileNotFoundException("cannot find tests/readers/dxf-chains.py");
+    }
 
     private static JsonElement Read(CutSheet sheet, DxfContours contours = DxfContours.Entities)
     {
         string path = ExternalReader.TempFile(".dxf");
         DxfWriter.WriteFile(path, sheet, contours);
-        try { return ExternalReader.PythonJson(ChainScript, path); }
+        try { return PythonFile(ChainScript(), path); }
         finally { File.Delete(path); }
+    }
+
+    private static JsonElement PythonFile(string script, string file)
+    {
+        var (code, stdout, stderr) = ExternalReader.Run(ExternalReader.Python, script, file);
+        Assert.True(code == 0, $"python reader failed ({code}): {stderr}");
+        using var doc = JsonDocument.Parse(stdout);
+        return doc.RootElement.Clone();
     }
 
     /// <summary>The compensated plan's arc segments, in writing order, with the layer they go to.</summary>
@@ -188,26 +147,7 @@ print(json.dumps(out))
         // angles) equal the areas of the polylines (from the bulges) of the default file.
         var sheet = SamplePlate.Sheet();
         var chains = Read(sheet).GetProperty("chains").EnumerateArray().Select(c => c[4].GetDouble()).ToArray();
-        string path = ExternalReader.TempFile(".dxf");
-        DxfWriter.WriteFile(path, sheet);
-        var polyAreas = ExternalReader.PythonJson("""
-import sys, json, math, ezdxf
-doc = ezdxf.readfile(sys.argv[1])
-out = []
-for pl in doc.modelspace().query("POLYLINE"):
-    pts = [(v.dxf.location.x, v.dxf.location.y, v.dxf.bulge) for v in pl.vertices]
-    area = 0.0
-    for i, (x0, y0, b) in enumerate(pts):
-        x1, y1, _ = pts[(i + 1) % len(pts)]
-        area += (x0 * y1 - x1 * y0) / 2
-        if b != 0:
-            theta = 4 * math.atan(b)
-            r = math.hypot(x1 - x0, y1 - y0) / (2 * abs(math.sin(theta / 2)))
-            area += r * r / 2 * (theta - math.sin(theta))
-    out.append(area)
-print(json.dumps(out))
-""", path).EnumerateArray().Select(x => x.GetDouble()).ToArray();
-        File.Delete(path);
+        var polyAreas = Read(sheet, DxfContours.Polyline).GetProperty("polylines").EnumerateArray().Select(p => p[2].GetDouble()).ToArray();
         Assert.Equal(polyAreas.Length, chains.Length);
         for (int i = 0; i < chains.Length; i++) Assert.Equal(polyAreas[i], chains[i], 9);
     }
