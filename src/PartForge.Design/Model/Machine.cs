@@ -6,10 +6,10 @@ public sealed class Machine
      Doc("single-rotor: one rotor facing one stator; dual-rotor: a stator between two rotors; dual-stator: a rotor between two stators.")]
     public string Layout { get; init; } = "dual-rotor";
 
-    [Range(2, 128), Doc("Magnets per rotor face (even).")]
+    [Range(2, 256), Doc("Magnets per rotor face (even).")]
     public int Poles { get; init; } = 12;
 
-    [Range(1, 144), Doc("Coils per stator.")]
+    [Range(1, 192), Doc("Coils per stator.")]
     public int Coils { get; init; } = 9;
 
     [OneOf("1", "3"), Doc("Number of phases: 1 or 3.")]
