@@ -158,6 +158,10 @@ public static class BuildPipeline
             case "stl":
                 folder.Write(f.Name, s => StlWriter.WriteBinary(s, f.Part!.Mesh, StlWriter.SafeName(d.Name + "-" + f.Part.Name)));
                 break;
+            case "3mf" when f.Assembly:
+                var placed = AssemblyThreeMf.Objects(parts);
+                folder.Write(f.Name, s => ThreeMfWriter.Write(s, AssemblyThreeMf.Title(d.Name), placed));
+                break;
             case "3mf":
                 var objects = f.Parts.Select(p => ThreeMfObject.At(p.Name, p.Mesh)).ToArray();
                 folder.Write(f.Name, s => ThreeMfWriter.Write(s, d.Name, objects));
