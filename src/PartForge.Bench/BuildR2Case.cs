@@ -24,7 +24,7 @@ public sealed class BuildR2Case : IBenchCase
         _dir = Path.Combine(Path.GetTempPath(), "partforge-bench-r2-" + Environment.ProcessId);
         Directory.CreateDirectory(_dir);
         _design = Path.Combine(_dir, "r2.yaml");
-        File.WriteAllText(_design, Yaml);
+        File.Copy(DesignPath, _design, overwrite: true);
     }
 
     public IReadOnlyDictionary<string, double> Run()
@@ -36,29 +36,9 @@ public sealed class BuildR2Case : IBenchCase
         return figures;
     }
 
-    /// <summary>The design (invented numbers; the rotor is the reference R2 shape, the rest a plausible ring of 48 coils).</summary>
-    public const string Yaml = """
-        # Invented benchmark design around the reference rotor R2 (not a real machine)
-        partforge: 1
-        name: r2
-        machine: { layout: single-rotor, poles: 64, coils: 48, phases: 3, connection: star, rated_rpm: 200, max_rpm: 400 }
-        magnets: { shape: disc, diameter: 15.05, thickness: 6, grade: N42, pitch_radius: 180 }
-        rotor:
-          outer_diameter: 400
-          thickness: 10
-          bore: 25
-          pocket_clearance: 0.15
-          pocket_floor: 4
-          bolt_circle: { diameter: 60, count: 8, hole: 6.6 }
-          material: PLA
-          marks: none
-          index: none
-        coils: { shape: round, wire: { awg: 26 }, enamel: grade-2, turns: 38, fill_factor: 0.42, height: 5, core: { diameter: 7.064 }, max_temperature: 50 }
-        stator: { inner_diameter: 321.873, outer_diameter: 402.127, thickness: 6.6, mount: { circle_diameter: 392.127, count: 8, hole: 5.5 }, material: PLA }
-        sensor: { kind: none }
-        gap: { air_gap: 1.5, min_running_gap: 0.3 }
-        mesh: { chordal_tolerance: 0.0005 }
+    /// <summary>The design file (invented numbers; the rotor is the reference R2 shape, the rest a plausible ring
+    /// of 48 coils), shared with scripts/bench-process.sh.</summary>
+    public static string DesignPath => Path.Combine(AppContext.BaseDirectory, "Designs", "r2.yaml");
 
-        """;
 
 }
