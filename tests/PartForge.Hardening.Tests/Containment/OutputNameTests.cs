@@ -23,7 +23,7 @@ public sealed class OutputNameTests
         string s = OutputNames.Sanitize(name);
         Assert.Matches("^[a-z0-9]+(-[a-z0-9]+)*$", s);
         Assert.True(s.Length <= 64, s);
-        foreach (var f in new[] { OutputNames.PartFile(name ?? "", "rotor", "stl"), OutputNames.ThreeMf(name ?? ""), OutputNames.Results(name ?? "") })
+        foreach (var f in new[] { OutputNames.PartFile(name ?? "", "rotor", "stl"), OutputNames.ThreeMf(name ?? ""), OutputNames.AssemblyThreeMf(name ?? ""), OutputNames.Results(name ?? "") })
         {
             Assert.Equal(f, Path.GetFileName(f));
             Assert.DoesNotContain("..", f);
