@@ -41,10 +41,10 @@ public static class ThreeMfWriter
     public static void Write(Stream stream, string title, IReadOnlyList<ThreeMfObject> objects)
     {
         ArgumentNullException.ThrowIfNull(stream);
-        WritePackage(stream, ModelXml(title, objects));
+        WritePackage(stream, ModelBytes(title, objects));
     }
 
-    private static void WritePackage(Stream stream, byte[] model)
+    private static void WritePackage(Stream stream, ReadOnlyMemory<byte> model)
     {
         DeterministicZip.Write(stream, new[]
         {
@@ -58,7 +58,7 @@ public static class ThreeMfWriter
     /// and checked before the file is touched.</summary>
     public static void WriteFile(string path, string title, IReadOnlyList<ThreeMfObject> objects)
     {
-        byte[] model = ModelXml(title, objects);
+        var model = ModelBytes(title, objects);
         AtomicFile.Write(path, s => WritePackage(s, model));
     }
 
@@ -78,7 +78,11 @@ public static class ThreeMfWriter
         "</Relationships>\n");
 
     /// <summary>The model part <c>3D/3dmodel.model</c>.</summary>
-    public static byte[] ModelXml(string title, IReadOnlyList<ThreeMfObject> objects)
+    public static byte[] ModelXml(string title, IReadOnlyList<ThreeMfObject> objects) => ModelBytes(title, objects).ToArray();
+
+    /// <summary>The model part in the writer's own buffer (no copy: the package is compressed straight from it,
+    /// which keeps one copy of the model text out of a build's peak memory).</summary>
+    private static ReadOnlyMemory<byte> ModelBytes(string title, IReadOnlyList<ThreeMfObject> objects)
     {
         ArgumentNullException.ThrowIfNull(title);
         ArgumentNullException.ThrowIfNull(objects);
@@ -135,7 +139,7 @@ public static class ThreeMfWriter
             }
         }
         w.Append("  </build>\n</model>\n"u8);
-        return w.ToArray();
+        return w.Memory;
     }
 
     private static void WriteObject(AsciiBuffer w, int id, ThreeMfObject o)
