@@ -23,7 +23,7 @@ public sealed class Magnets
     [Range(0, 360, MinExclusive = true), Doc("Arc segment angular span, degrees (shape: arc).")]
     public double? Span { get; init; }
 
-    [Range(0, 100, MinExclusive = true), Doc("Magnet thickness along the axis, mm.")]
+    [Range(0.0001, 100), Doc("Magnet thickness along the axis, mm (at least the 0.0001 mm mesh grid).")]
     public double Thickness { get; init; } = 4;
 
     [Pattern("^N(3[5-9]|4[0-9]|5[0-2])(M|H|SH|UH|EH)?$"), Doc("Sintered NdFeB grade N35 ... N52 (ignored when br is given).")]

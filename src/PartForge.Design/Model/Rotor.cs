@@ -5,7 +5,7 @@ public sealed class Rotor
     [Range(0, 2000, MinExclusive = true), Doc("Rotor disc outer diameter, mm.")]
     public double OuterDiameter { get; init; } = 110;
 
-    [Range(0, 100, MinExclusive = true), Doc("Rotor disc thickness, mm.")]
+    [Range(0.0001, 100), Doc("Rotor disc thickness, mm (at least the 0.0001 mm mesh grid).")]
     public double Thickness { get; init; } = 7;
 
     [Range(0, 1000), Doc("Central bore diameter, mm (0 = none).")]
@@ -47,6 +47,6 @@ public sealed class BoltCircle
 
 public sealed class BackIron
 {
-    [Range(0, 50, MinExclusive = true), Doc("Steel back-iron disc thickness, mm.")]
+    [Range(0.0001, 50), Doc("Steel back-iron disc thickness, mm (at least the 0.0001 mm mesh grid).")]
     public double Thickness { get; init; } = 1.5;
 }

@@ -8,7 +8,7 @@ public sealed class Stator
     [Range(0, 3000, MinExclusive = true), Doc("Stator ring outer diameter, mm.")]
     public double OuterDiameter { get; init; } = 130;
 
-    [Range(0, 100, MinExclusive = true), Doc("Stator ring thickness, mm.")]
+    [Range(0.0001, 100), Doc("Stator ring thickness, mm (at least the 0.0001 mm mesh grid).")]
     public double Thickness { get; init; } = 6;
 
     [Doc("Mount holes on a circle; omit for none.")]

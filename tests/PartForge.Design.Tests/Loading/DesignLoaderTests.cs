@@ -34,7 +34,20 @@ public class DesignLoaderTests
     {
         var e = Single(Edit(Crank, "thickness: 5.2", "thickness: -5"), "rotor.thickness");
         Assert.Equal("-5", e.Value);
-        Assert.Contains("allowed: more than 0, up to 100 mm", e.ToString());
+        Assert.Contains("allowed: 0.0001 to 100 mm", e.ToString());
+    }
+
+    /// <summary>Found by the long fuzz run: a rotor 5e-324 mm thick (the smallest double) passed "more than 0",
+    /// and the magnets' load on it overflowed to infinity in a check's message. Thicknesses start at the mesh
+    /// grid now.</summary>
+    [Theory]
+    [InlineData("5e-324")]
+    [InlineData("0.00005")]
+    public void Thickness_below_the_mesh_grid_is_refused(string value)
+    {
+        var e = Single(Edit(Crank, "thickness: 5.2", "thickness: " + value), "rotor.thickness");
+        Assert.Equal(value, e.Value);
+        Assert.Equal("0.0001 to 100 mm", e.Allowed);
     }
 
     [Fact]
