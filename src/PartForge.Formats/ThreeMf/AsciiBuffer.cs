@@ -10,7 +10,25 @@ internal sealed class AsciiBuffer
     private readonly char[] _chars = new char[InvariantNumber.MaxChars];
     private int _len;
 
+    private readonly Stream? _sink;
+
     public AsciiBuffer(int capacity) => _buf = new byte[Math.Max(256, capacity)];
+
+    /// <summary>A buffer of fixed size that hands its text to <paramref name="sink"/> whenever it fills up
+    /// (call <see cref="Flush"/> at the end): the text is never held whole.</summary>
+    public AsciiBuffer(Stream sink, int capacity = 1 << 16)
+    {
+        _sink = sink;
+        _buf = new byte[Math.Max(256, capacity)];
+    }
+
+    /// <summary>Hands what is buffered to the sink (no-op without one).</summary>
+    public void Flush()
+    {
+        if (_sink is null || _len == 0) return;
+        _sink.Write(_buf.AsSpan(0, _len));
+        _len = 0;
+    }
 
     public int Length => _len;
 
@@ -58,6 +76,11 @@ internal sealed class AsciiBuffer
     private void Ensure(int extra)
     {
         if (_len + extra <= _buf.Length) return;
+        if (_sink is not null)
+        {
+            Flush();
+            if (extra <= _buf.Length) return;
+        }
         long want = Math.Max((long)_buf.Length * 2, (long)_len + extra);
         if (want > Array.MaxLength) throw new InvalidOperationException("the 3MF model part would exceed the largest array");
         Array.Resize(ref _buf, (int)want);

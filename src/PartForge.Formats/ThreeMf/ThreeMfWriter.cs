@@ -41,25 +41,36 @@ public static class ThreeMfWriter
     public static void Write(Stream stream, string title, IReadOnlyList<ThreeMfObject> objects)
     {
         ArgumentNullException.ThrowIfNull(stream);
-        WritePackage(stream, ModelBytes(title, objects));
+        Validate(title, objects);
+        WritePackage(stream, title, objects);
     }
 
-    private static void WritePackage(Stream stream, ReadOnlyMemory<byte> model)
+    /// <summary>The model is written straight into the compressor in small pieces (on a seekable stream, such
+    /// as the atomic writer's temporary file, straight into the file), so a build never holds the model text
+    /// whole; the bytes are the same as from <see cref="ModelXml"/>.</summary>
+    private static void WritePackage(Stream stream, string title, IReadOnlyList<ThreeMfObject> objects)
     {
-        DeterministicZip.Write(stream, new[]
+        byte[] types = ContentTypesXml(), rels = RelationshipsXml();
+        DeterministicZip.Write(stream, new (string, Action<Stream>)[]
         {
-            (ContentTypesEntry, (ReadOnlyMemory<byte>)ContentTypesXml()),
-            (RelationshipsEntry, RelationshipsXml()),
-            (ModelEntry, model),
+            (ContentTypesEntry, s => s.Write(types)),
+            (RelationshipsEntry, s => s.Write(rels)),
+            (ModelEntry, s =>
+            {
+                var w = new AsciiBuffer(s);
+                WriteModel(w, title, objects);
+                w.Flush();
+            }),
         }, Compression);
     }
 
-    /// <summary>Writes the package to a file atomically (temporary file, then rename). The model is built
-    /// and checked before the file is touched.</summary>
+    /// <summary>Writes the package to a file atomically (temporary file, then rename). The objects are checked
+    /// before the file is touched; a mesh found bad while it is written (a zero-area triangle, say) leaves
+    /// nothing under the final name.</summary>
     public static void WriteFile(string path, string title, IReadOnlyList<ThreeMfObject> objects)
     {
-        var model = ModelBytes(title, objects);
-        AtomicFile.Write(path, s => WritePackage(s, model));
+        Validate(title, objects);
+        AtomicFile.Write(path, s => WritePackage(s, title, objects));
     }
 
     /// <summary>The <c>[Content_Types].xml</c> part.</summary>
@@ -78,11 +89,16 @@ public static class ThreeMfWriter
         "</Relationships>\n");
 
     /// <summary>The model part <c>3D/3dmodel.model</c>.</summary>
-    public static byte[] ModelXml(string title, IReadOnlyList<ThreeMfObject> objects) => ModelBytes(title, objects).ToArray();
+    public static byte[] ModelXml(string title, IReadOnlyList<ThreeMfObject> objects)
+    {
+        Validate(title, objects);
+        long estimate = objects.Sum(o => (long)o.Mesh.VertexCount * 48 + (long)o.Mesh.TriangleCount * 40) + 1024;
+        var w = new AsciiBuffer((int)Math.Min(estimate, 1 << 30));
+        WriteModel(w, title, objects);
+        return w.ToArray();
+    }
 
-    /// <summary>The model part in the writer's own buffer (no copy: the package is compressed straight from it,
-    /// which keeps one copy of the model text out of a build's peak memory).</summary>
-    private static ReadOnlyMemory<byte> ModelBytes(string title, IReadOnlyList<ThreeMfObject> objects)
+    private static void Validate(string title, IReadOnlyList<ThreeMfObject> objects)
     {
         ArgumentNullException.ThrowIfNull(title);
         ArgumentNullException.ThrowIfNull(objects);
@@ -97,9 +113,10 @@ public static class ThreeMfWriter
                 if (!(t.Determinant > 1e-12)) throw new ArgumentException($"object '{o.Name}': a placement is singular or mirrors (determinant {t.Determinant.ToString("R", CultureInfo.InvariantCulture)}); mirror the mesh instead", nameof(objects));
             }
         }
+    }
 
-        long estimate = objects.Sum(o => (long)o.Mesh.VertexCount * 48 + (long)o.Mesh.TriangleCount * 40) + 1024;
-        var w = new AsciiBuffer((int)Math.Min(estimate, 1 << 30));
+    private static void WriteModel(AsciiBuffer w, string title, IReadOnlyList<ThreeMfObject> objects)
+    {
         w.Append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n"u8);
         w.Append("<model unit=\"millimeter\" xml:lang=\"en-US\" xmlns=\""u8);
         w.AppendText(ModelNamespace);
@@ -139,7 +156,6 @@ public static class ThreeMfWriter
             }
         }
         w.Append("  </build>\n</model>\n"u8);
-        return w.Memory;
     }
 
     private static void WriteObject(AsciiBuffer w, int id, ThreeMfObject o)

@@ -75,6 +75,43 @@ public class ThreeMfWriterTests
         Assert.Equal(first, HostileCulture.Run(() => Package(Sample())));
     }
 
+    /// <summary>The model is streamed into the compressor and the ZIP headers patched afterwards on a seekable
+    /// output, or produced in memory first on one that cannot seek: both give the same bytes, also for a model of
+    /// several megabytes (many buffer flushes), and the entry's CRC-32 and sizes are what an independent ZIP
+    /// reader (the base library's ZipArchive, which checks the CRC as it reads) accepts.</summary>
+    [Fact]
+    public void StreamedAndBufferedPackagesAreIdentical()
+    {
+        var big = new[] { ThreeMfObject.At("cylinder", SampleMeshes.Cylinder(10, 5, 20000)), ThreeMfObject.At("box", SampleMeshes.Box(20, 10, 2)) };
+        var seekable = new MemoryStream();
+        ThreeMfWriter.Write(seekable, "big", big);
+        var oneWay = new MemoryStream();
+        ThreeMfWriter.Write(new ForwardOnly(oneWay), "big", big);
+        using var zip = new ZipArchive(new MemoryStream(seekable.ToArray()), ZipArchiveMode.Read);
+        var model = zip.GetEntry("3D/3dmodel.model")!;
+        using var text = new MemoryStream();
+        using (var z = model.Open()) z.CopyTo(text);
+        Assert.Equal(model.Length, text.Length);
+        Assert.True(text.Length > 2_000_000, $"model of {text.Length} bytes");
+        Assert.True(text.ToArray().AsSpan().SequenceEqual(ThreeMfWriter.ModelXml("big", big)));
+        Assert.Equal(seekable.Length, oneWay.Length);
+        Assert.True(seekable.ToArray().AsSpan().SequenceEqual(oneWay.ToArray()));
+    }
+
+    private sealed class ForwardOnly(Stream inner) : Stream
+    {
+        public override bool CanRead => false;
+        public override bool CanSeek => false;
+        public override bool CanWrite => true;
+        public override long Length => throw new NotSupportedException();
+        public override long Position { get => throw new NotSupportedException(); set => throw new NotSupportedException(); }
+        public override void Flush() => inner.Flush();
+        public override int Read(byte[] buffer, int offset, int count) => throw new NotSupportedException();
+        public override long Seek(long offset, SeekOrigin origin) => throw new NotSupportedException();
+        public override void SetLength(long value) => throw new NotSupportedException();
+        public override void Write(byte[] buffer, int offset, int count) => inner.Write(buffer, offset, count);
+    }
+
     [Fact]
     public void PackageFollowsOpcAndTheCoreSpecification()
     {
