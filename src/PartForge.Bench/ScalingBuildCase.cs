@@ -29,7 +29,7 @@ public sealed class ScalingBuildCase : IBenchCase
     public void Setup() { }
 
     public sealed record Row(string Sweep, string Value, int Triangles, double BuildMs, double BuildCpuMs, double ElectricalMs, double PartsMs, double ChecksMs, double StlMs,
-        double PeakHeapMb, double MeshMb, double StlMb, string Status);
+        double PeakHeapMb, double PeakLiveMb, double MeshMb, double StlMb, string Status);
 
     public IReadOnlyDictionary<string, double> Run()
     {
@@ -54,14 +54,15 @@ public sealed class ScalingBuildCase : IBenchCase
         figures["exp_tris_vs_1/tolerance"] = Math.Round(ScalingFit.Exponent(byE.Select(r => (1 / double.Parse(r.Value, CultureInfo.InvariantCulture), (double)r.Triangles)).ToArray()), 3);
         figures["exp_peak_vs_tris"] = Math.Round(ScalingFit.Exponent(rows.Where(r => r.Triangles > 0).Select(r => ((double)r.Triangles, r.PeakHeapMb)).ToArray()), 3);
         figures["max_peak_over_mesh"] = Math.Round(rows.Where(r => r.MeshMb > 0).Max(r => r.PeakHeapMb / r.MeshMb), 2);
+        figures["max_live_over_mesh"] = Math.Round(rows.Where(r => r.MeshMb > 0).Max(r => r.PeakLiveMb / r.MeshMb), 2);
         if (print) Console.WriteLine(string.Join(", ", figures.Select(kv => $"{kv.Key} {kv.Value.ToString("G4", CultureInfo.InvariantCulture)}")));
         return figures;
     }
 
     private static void PrintHeader()
     {
-        Console.WriteLine("| sweep | value | triangles | build wall ms | build CPU ms | electrical CPU ms | parts+mesh CPU ms | checks CPU ms | STL encode CPU ms | CPU ns/triangle | peak heap MB | mesh MB | STL MB | peak/mesh |");
-        Console.WriteLine("|---|---|---|---|---|---|---|---|---|---|---|---|---|---|");
+        Console.WriteLine("| sweep | value | triangles | build wall ms | build CPU ms | electrical CPU ms | parts+mesh CPU ms | checks CPU ms | STL encode CPU ms | CPU ns/triangle | peak heap MB | peak live MB | mesh MB | STL MB | peak/mesh | live/mesh |");
+        Console.WriteLine("|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|");
         Console.Out.Flush();
     }
 
@@ -71,7 +72,7 @@ public sealed class ScalingBuildCase : IBenchCase
         if (r.Status != "ok")
             Console.WriteLine($"| {r.Sweep} | {r.Value} | - | - | - | - | - | - | - | - | - | - | - | {r.Status} |");
         else
-            Console.WriteLine(string.Create(inv, $"| {r.Sweep} | {r.Value} | {r.Triangles} | {r.BuildMs:F0} | {r.BuildCpuMs:F0} | {r.ElectricalMs:F0} | {r.PartsMs:F0} | {r.ChecksMs:F0} | {r.StlMs:F0} | {r.BuildCpuMs * 1e6 / r.Triangles:F0} | {r.PeakHeapMb:F1} | {r.MeshMb:F1} | {r.StlMb:F1} | {r.PeakHeapMb / r.MeshMb:F2} |"));
+            Console.WriteLine(string.Create(inv, $"| {r.Sweep} | {r.Value} | {r.Triangles} | {r.BuildMs:F0} | {r.BuildCpuMs:F0} | {r.ElectricalMs:F0} | {r.PartsMs:F0} | {r.ChecksMs:F0} | {r.StlMs:F0} | {r.BuildCpuMs * 1e6 / r.Triangles:F0} | {r.PeakHeapMb:F1} | {r.PeakLiveMb:F1} | {r.MeshMb:F1} | {r.StlMb:F1} | {r.PeakHeapMb / r.MeshMb:F2} | {r.PeakLiveMb / r.MeshMb:F2} |"));
         Console.Out.Flush();
     }
 
@@ -125,17 +126,22 @@ public sealed class ScalingBuildCase : IBenchCase
                 if (r.Status == PipelineStatus.BadInput) { status = "refused: " + string.Join("; ", r.Problems).Replace("|", "/"); break; }
             }
             // Peak heap in a run of its own (the sampler would disturb the timings).
-            double peakMb;
+            double peakMb, liveMb;
             using (var mem = ScalingMemory.Start())
             {
                 BuildPipeline.Build(request);
                 peakMb = mem.StopPeakBytes() / 1e6;
             }
-            return new Row(sweep, value, status == "ok" ? tris : 0, bMs, bCpu, eMs, pMs, cMs, sMs, peakMb, meshMb, stlMb, status);
+            using (var mem = ScalingMemory.Start(live: true))
+            {
+                BuildPipeline.Build(request);
+                liveMb = mem.StopPeakBytes() / 1e6;
+            }
+            return new Row(sweep, value, status == "ok" ? tris : 0, bMs, bCpu, eMs, pMs, cMs, sMs, peakMb, liveMb, meshMb, stlMb, status);
         }
         catch (Exception ex) when (ex is InvalidOperationException or PartsException or ArgumentException)
         {
-            return new Row(sweep, value, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, "error: " + ex.Message.Replace("|", "/"));
+            return new Row(sweep, value, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, "error: " + ex.Message.Replace("|", "/"));
         }
         finally
         {
