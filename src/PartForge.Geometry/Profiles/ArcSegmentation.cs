@@ -7,13 +7,13 @@ public static class ArcSegmentation
     public const int MaxSegmentsPerCircle = 1 << 20;
 
     /// <summary>
-    /// Segments for a full circle: n = ceil(pi / acos(1 - e / r)), at least 3, rounded up to a multiple of
-    /// <paramref name="multipleOf"/> (the pattern symmetry) when that adds at most 1% (and at least one
-    /// segment is always allowed); otherwise to a multiple of the largest divisor of it that does (a bore of 351
-    /// segments in a 64-fold pattern gets 352 = 11 x 32, not 384), so that symmetry never costs more than 1% of
-    /// the triangles.
+    /// Segments for a full circle: n = ceil(pi / acos(1 - e / r)), at least 3. With a pattern symmetry
+    /// <paramref name="multipleOf"/>, n is rounded up to a multiple of the largest divisor of it that costs at
+    /// most <paramref name="extraAllowed"/> more segments (default none: the symmetry is taken where it is free,
+    /// e.g. 1,408 segments in a 64-fold pattern stay 1,408 and the mesh repeats exactly with the pattern, but
+    /// 1,405 stay 1,405 rather than growing by 3).
     /// </summary>
-    public static int FullCircle(double radius, double chordalTolerance, int multipleOf = 1)
+    public static int FullCircle(double radius, double chordalTolerance, int multipleOf = 1, int extraAllowed = 0)
     {
         if (!(radius > 0) || !(chordalTolerance > 0)) throw new ArgumentOutOfRangeException(nameof(radius));
         int n;
@@ -25,12 +25,11 @@ public static class ArcSegmentation
         }
         if (multipleOf > 1)
         {
-            int allowed = Math.Max(1, n / 100);
             for (int d = multipleOf; d > 1; d--)
             {
                 if (multipleOf % d != 0) continue;
                 int m = (n + d - 1) / d * d;
-                if (m - n <= allowed) return m;
+                if (m - n <= extraAllowed) return m;
             }
         }
         return n;

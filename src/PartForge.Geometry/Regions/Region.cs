@@ -163,7 +163,7 @@ public sealed class Region
     {
         if (!double.IsFinite(mm)) throw new ArgumentOutOfRangeException(nameof(mm), "offset must be finite");
         if (IsEmpty || mm == 0) return this;
-        int n = ArcSegmentation.FullCircle(Math.Abs(mm), Precision.ChordalToleranceMm, 4);
+        int n = ArcSegmentation.FullCircle(Math.Abs(mm), Precision.ChordalToleranceMm, 4, extraAllowed: 3);
         var bp = new BufferParameters { QuadrantSegments = Math.Max(1, n / 4), JoinStyle = JoinStyle.Round, EndCapStyle = EndCapStyle.Round };
         var buffered = BufferOp.Buffer(Geometry, mm, bp);
         return FromGeometry(buffered, Precision);

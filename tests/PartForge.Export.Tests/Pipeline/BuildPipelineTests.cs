@@ -56,6 +56,31 @@ public sealed class BuildPipelineTests : IDisposable
         }
     }
 
+    /// <summary>
+    /// The reference rotor R2 of the shared measurement notes (OD 400, t 10, bore 25, 64 pockets D15.2 x 6 deep
+    /// on r 180, 8 holes D6.6 on a 60 circle, e = 0.0005): a general-purpose CSG mesh library gives 82,996
+    /// triangles for it (../shared/MEASURED.md). The whole build of the design around it must not give more,
+    /// and its volume must be the true volume with circles (1,179,311.3 mm^3, same notes) less the chordal
+    /// error: outer rim vertices lie on the circle (less material), holes are circumscribed (less material),
+    /// so the mesh is below the true volume by at most the polygons' area loss.
+    /// </summary>
+    [Fact]
+    public void TheReferenceRotorR2BuildsWithNoMoreTrianglesThanTheReference()
+    {
+        Directory.CreateDirectory(_dir);
+        var r = BuildPipeline.Build(new BuildRequest
+        {
+            DesignPath = Path.Combine(Report.Pipeline.RepoRoot(), "src", "PartForge.Bench", "Designs", "r2.yaml"),
+            OutputDir = Path.Combine(_dir, "out"), Formats = "stl", Parts = "rotor",
+        });
+        Assert.Equal(PipelineStatus.Ok, r.Status);
+        var rotor = r.Evaluation!.Parts!.Get("rotor");
+        Assert.True(rotor.Mesh.TriangleCount <= 82_996, $"{rotor.Mesh.TriangleCount} triangles");
+        double v = rotor.Mesh.SignedVolume();
+        Assert.InRange(v, 1_179_311.3 - 60, 1_179_311.3);
+        Assert.Equal(84 + 50L * rotor.Mesh.TriangleCount, new FileInfo(Path.Combine(_dir, "out", "r2-rotor.stl")).Length);
+    }
+
     [Fact]
     public void TheStageClockCoversEveryStageInOrder()
     {
