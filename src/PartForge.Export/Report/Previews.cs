@@ -27,7 +27,8 @@ public static class Previews
     public static byte[] Part(PartModel part)
     {
         var view = new RenderView { Width = Width, Height = Height, AzimuthDeg = -60, ElevationDeg = 38 };
-        var img = SoftwareRasteriser.Render([RenderItem.FromMesh(part.Mesh, ColourOf(part.Name))], view).Image;
+        // The kernel's meshes are closed and outward by construction (and validated), so back faces can go.
+        var img = SoftwareRasteriser.Render([RenderItem.FromMesh(part.Mesh, ColourOf(part.Name)) with { ClosedOutward = true }], view).Image;
         return PngEncoder.Encode(img);
     }
 

@@ -39,13 +39,17 @@ public static class SoftwareRasteriser
         double s = scale * ss;
         double cx = (minX + maxX) / 2, cy = (minY + maxY) / 2;
 
-        var depth = new double[w * h];
-        Array.Fill(depth, double.NegativeInfinity);
-        var colour = new byte[w * h * 3];
-        for (int i = 0; i < w * h; i++)
+        // Working buffers from the shared pool (a supersampled 800 x 600 picture needs 8 MB of depth and 6 MB of
+        // colour; fresh arrays would be zeroed by the runtime and then filled again). Every element used is
+        // written below before it is read, so what a rented array held before does not matter.
+        var depth = System.Buffers.ArrayPool<float>.Shared.Rent(w * h);
+        var colour = System.Buffers.ArrayPool<byte>.Shared.Rent(w * h * 3);
+        try
         {
-            colour[3 * i] = view.Background.R; colour[3 * i + 1] = view.Background.G; colour[3 * i + 2] = view.Background.B;
-        }
+        depth.AsSpan(0, w * h).Fill(float.NegativeInfinity);
+        colour[0] = view.Background.R; colour[1] = view.Background.G; colour[2] = view.Background.B;
+        for (int filled = 3, total = w * h * 3; filled < total; filled *= 2)
+            colour.AsSpan(0, Math.Min(filled, total - filled)).CopyTo(colour.AsSpan(filled));
 
         foreach (var it in items)
         {
@@ -67,7 +71,11 @@ public static class SoftwareRasteriser
                 double len = nrm.Length;
                 if (!(len > 0)) continue;
                 nrm = nrm * (1 / len);
-                if (nrm.Dot(f) < 0) nrm = nrm * -1;           // light both sides
+                if (nrm.Dot(f) < 0)
+                {
+                    if (it.ClosedOutward) continue;            // a back face of a closed mesh: always hidden
+                    nrm = nrm * -1;                            // light both sides
+                }
                 double shade = Math.Clamp(view.Ambient + (1 - view.Ambient) * Math.Max(0, nrm.Dot(light)), 0, 1);
                 byte r = (byte)Math.Round(it.Colour.R * shade), g = (byte)Math.Round(it.Colour.G * shade), bl = (byte)Math.Round(it.Colour.B * shade);
                 Fill(px[a], py[a], pz[a], px[b], py[b], pz[b], px[c], py[c], pz[c], w, h, depth, colour, r, g, bl);
@@ -76,10 +84,16 @@ public static class SoftwareRasteriser
 
         if (view.Outlines) DrawOutlines(depth, colour, w, h, view.OutlineDepthFraction * Math.Max(spanX, spanY));
         return new RenderResult(new RgbImage(view.Width, view.Height, Downsample(colour, w, h, ss)), scale);
+        }
+        finally
+        {
+            System.Buffers.ArrayPool<float>.Shared.Return(depth);
+            System.Buffers.ArrayPool<byte>.Shared.Return(colour);
+        }
     }
 
     private static void Fill(double ax, double ay, double az, double bx, double by, double bz, double cx, double cy, double cz,
-        int w, int h, double[] depth, byte[] colour, byte r, byte g, byte b)
+        int w, int h, float[] depth, byte[] colour, byte r, byte g, byte b)
     {
         double area = (bx - ax) * (cy - ay) - (by - ay) * (cx - ax);
         if (area == 0 || !double.IsFinite(area)) return;
@@ -91,7 +105,16 @@ public static class SoftwareRasteriser
         for (int y = y0; y <= y1; y++)
         {
             double qy = y + 0.5;
-            for (int x = x0; x <= x1; x++)
+            // Only the columns where this row crosses the triangle (from its edges, widened by a pixel either
+            // side), so a long thin triangle costs its length, not its bounding box; the barycentric test
+            // below still decides every pixel, so the picture is the same as scanning the whole box.
+            double lo = double.PositiveInfinity, hi = double.NegativeInfinity;
+            Span(ax, ay, bx, by, qy, ref lo, ref hi);
+            Span(bx, by, cx, cy, qy, ref lo, ref hi);
+            Span(cx, cy, ax, ay, qy, ref lo, ref hi);
+            if (lo > hi) continue;
+            int xs = Math.Max(x0, (int)Math.Floor(lo) - 1), xe = Math.Min(x1, (int)Math.Ceiling(hi) + 1);
+            for (int x = xs; x <= xe; x++)
             {
                 double qx = x + 0.5;
                 // Barycentric weights from edge functions; the sign of area makes them positive inside.
@@ -99,7 +122,7 @@ public static class SoftwareRasteriser
                 double w1 = ((cx - qx) * (ay - qy) - (cy - qy) * (ax - qx)) * inv;
                 double w2 = 1 - w0 - w1;
                 if (w0 < 0 || w1 < 0 || w2 < 0) continue;
-                double z = w0 * az + w1 * bz + w2 * cz;
+                float z = (float)(w0 * az + w1 * bz + w2 * cz);
                 int i = y * w + x;
                 if (z <= depth[i]) continue;
                 depth[i] = z;
@@ -108,12 +131,21 @@ public static class SoftwareRasteriser
         }
     }
 
+    /// <summary>Widens [lo, hi] by the x where edge (p, q) crosses the row y (when it does).</summary>
+    private static void Span(double px, double py, double qx, double qy, double y, ref double lo, ref double hi)
+    {
+        if ((py > y) == (qy > y)) return;
+        double x = px + (y - py) * (qx - px) / (qy - py);
+        if (x < lo) lo = x;
+        if (x > hi) hi = x;
+    }
+
     /// <summary>
     /// Darkens pixels where the depth is not locally planar (second difference above the threshold, in mm):
     /// silhouettes, the rims of pockets and holes, steps between layers. Reads the depth buffer only, so it is
     /// as deterministic as the fill.
     /// </summary>
-    private static void DrawOutlines(double[] depth, byte[] colour, int w, int h, double thresholdMm)
+    private static void DrawOutlines(float[] depth, byte[] colour, int w, int h, double thresholdMm)
     {
         var edge = new bool[w * h];
         for (int y = 1; y < h - 1; y++)
@@ -141,7 +173,7 @@ public static class SoftwareRasteriser
 
     private static byte[] Downsample(byte[] src, int w, int h, int ss)
     {
-        if (ss == 1) return src;
+        if (ss == 1) return src.AsSpan(0, w * h * 3).ToArray(); // src is a pooled buffer: copy out
         int ow = w / ss, oh = h / ss, n = ss * ss;
         var dst = new byte[ow * oh * 3];
         for (int y = 0; y < oh; y++)
