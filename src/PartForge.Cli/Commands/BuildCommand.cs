@@ -14,7 +14,7 @@ public static class BuildCommand
         var formats = new Option<string?>("--formats") { Description = $"Comma-separated formats to write: {string.Join(",", ExportFormats.All)} (default: all that apply to each part).", HelpName = "LIST" };
         var parts = new Option<string?>("--parts") { Description = $"Comma-separated parts to write: {string.Join(",", ExportFormats.PartNames)} (default: all).", HelpName = "LIST" };
         var force = new Option<bool>("--force") { Description = "Write even if a check fails; the results and the report are then marked failed." };
-        var timings = new Option<bool>("--timings") { Description = "Print the wall time of each stage (load, electrical, parts, checks, mesh, write) to standard error." };
+        var timings = new Option<bool>("--timings") { Description = "Print the wall time of each stage (load, budget, electrical, parts, checks, mesh, previews, write) to standard error." };
         var cmd = new Command("build", "Check a design, then write its parts (STL, 3MF, DXF, SVG), results, report, BOM and previews. A failed check writes nothing.")
         {
             design, output, formats, parts, force, timings,

@@ -117,6 +117,8 @@ public static class BuildPipeline
         if (MeshProblem(ev, plan.MeshedParts(ev.Parts), request.DesignPath) is { } meshProblem) return Bad([meshProblem]);
         clock.Lap("mesh");
         var doc = ResultsBuilder.Build(ev, plan.FilesByPart, forced: failed, countTriangles: plan.WritesResults);
+        var previews = RenderPreviews(plan, ev.Parts);
+        clock.Lap("previews");
         var written = new List<string>();
         try
         {
@@ -124,7 +126,7 @@ public static class BuildPipeline
             folder.Create();
             foreach (var f in plan.Files)
             {
-                WriteOne(folder, f, ev, doc, failed);
+                WriteOne(folder, f, ev, doc, failed, previews);
                 written.Add(f.Name);
             }
         }
@@ -149,7 +151,7 @@ public static class BuildPipeline
         };
     }
 
-    private static void WriteOne(OutputFolder folder, ExportPlan.FileSpec f, Evaluation ev, ResultsDocument doc, bool forced)
+    private static void WriteOne(OutputFolder folder, ExportPlan.FileSpec f, Evaluation ev, ResultsDocument doc, bool forced, IReadOnlyDictionary<string, byte[]> previews)
     {
         var d = ev.Design;
         var parts = ev.Parts!;
@@ -174,7 +176,7 @@ public static class BuildPipeline
                 folder.Write(f.Name, s => SvgWriter.Write(s, CutSheetOf(d, f.Part!)));
                 break;
             case "png":
-                folder.Write(f.Name, f.Part != null ? Previews.Part(f.Part) : Previews.Assembly(parts));
+                folder.Write(f.Name, previews[f.Part?.Name ?? AssemblyPreview]);
                 break;
             case "json":
                 folder.Write(f.Name, ResultsJson.ToUtf8(doc));
@@ -188,13 +190,34 @@ public static class BuildPipeline
             case "html":
             {
                 var e = ElectricalView.From(d, ev.Electrical);
-                var previews = parts.Parts.Where(p => p.Process == PartProcess.Print).Select(p => (p.Name, Previews.Part(p))).ToArray();
-                folder.WriteText(f.Name, HtmlReport.Render(ReportBuilder.Build(d, e, parts, ev.Checks, forced, previews)));
+                var shown = parts.Parts.Where(p => p.Process == PartProcess.Print).Select(p => (p.Name, previews[p.Name])).ToArray();
+                folder.WriteText(f.Name, HtmlReport.Render(ReportBuilder.Build(d, e, parts, ev.Checks, forced, shown)));
                 break;
             }
             default:
                 throw new InvalidOperationException($"no writer for format {f.Format}");
         }
+    }
+
+    private const string AssemblyPreview = "\0assembly";
+
+    /// <summary>
+    /// Every preview the planned files show (a part's PNG, the assembly PNG, the report's pictures of the
+    /// printed parts), each rendered once and all of them side by side on the machine's cores. Each picture is
+    /// a pure function of its meshes, so the bytes do not depend on the order or the thread.
+    /// </summary>
+    private static IReadOnlyDictionary<string, byte[]> RenderPreviews(ExportPlan plan, PartSet parts)
+    {
+        var keys = new SortedSet<string>(StringComparer.Ordinal);
+        foreach (var f in plan.Files)
+        {
+            if (f.Format == "png") keys.Add(f.Part?.Name ?? AssemblyPreview);
+            if (f.Format == "html") foreach (var p in parts.Parts.Where(p => p.Process == PartProcess.Print)) keys.Add(p.Name);
+        }
+        var result = new System.Collections.Concurrent.ConcurrentDictionary<string, byte[]>(StringComparer.Ordinal);
+        Parallel.ForEach(keys, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, k =>
+            result[k] = k == AssemblyPreview ? Previews.Assembly(parts) : Previews.Part(parts.Get(k)));
+        return result;
     }
 
     private static CutSheet CutSheetOf(Design.Model.Design d, PartModel p) =>
@@ -226,7 +249,15 @@ public static class BuildPipeline
     private static string? MeshProblem(Evaluation ev, IEnumerable<PartModel> parts, string file)
     {
         if (ev.Parts == null) return null;
-        foreach (var p in parts)
+        var list = parts.ToArray();
+        // Mesh the parts side by side on the machine's cores (each mesh is made once, thread-safe, and is a pure
+        // function of its part); then report in part order, so the first problem named is always the same one.
+        Parallel.ForEach(list, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, p =>
+        {
+            try { _ = p.Mesh; }
+            catch (PartsException) { } // reported below, in order
+        });
+        foreach (var p in list)
         {
             try
             {

@@ -18,7 +18,7 @@ public sealed record PipelineResult
     /// <summary>The output folder's full path (build only).</summary>
     public string? OutputFolder { get; init; }
 
-    /// <summary>Wall time per stage, ms, in stage order (load, electrical, parts, checks, mesh, write); stages
+    /// <summary>Wall time per stage, ms, in stage order (load, budget, electrical, parts, checks, mesh, previews, write); stages
     /// that did not run are absent. For benchmarks and <c>build --timings</c>; never part of any output file.</summary>
     public IReadOnlyList<(string Stage, double Ms)> Timings { get; init; } = [];
 }

@@ -18,7 +18,7 @@ public class BuildCommandTests
         w.Write("d.yaml", Crank);
         var r = PartforgeProcess.Run(w.Path, "build", "d.yaml", "-o", "out", "--formats", "stl", "--parts", "rotor", "--timings");
         Assert.True(r.ExitCode == 0, r.ToString());
-        Assert.Matches(@"^timings: load [0-9.]+ ms, budget [0-9.]+ ms, electrical [0-9.]+ ms, parts [0-9.]+ ms, checks [0-9.]+ ms, mesh [0-9.]+ ms, write [0-9.]+ ms; process [0-9]+ ms so far", r.Stderr.Trim());
+        Assert.Matches(@"^timings: load [0-9.]+ ms, budget [0-9.]+ ms, electrical [0-9.]+ ms, parts [0-9.]+ ms, checks [0-9.]+ ms, mesh [0-9.]+ ms, previews [0-9.]+ ms, write [0-9.]+ ms; process [0-9]+ ms so far", r.Stderr.Trim());
         Assert.DoesNotContain("timings", r.Stdout);
         Assert.Equal(["crank-bench-rotor.stl"], Directory.GetFiles(w.File("out")).Select(Path.GetFileName).ToArray());
     }

@@ -85,7 +85,7 @@ public sealed class BuildPipelineTests : IDisposable
     public void TheStageClockCoversEveryStageInOrder()
     {
         var r = Build("crank-bench", "stl", null);
-        Assert.Equal(["load", "budget", "electrical", "parts", "checks", "mesh", "write"], r.Timings.Select(t => t.Stage).ToArray());
+        Assert.Equal(["load", "budget", "electrical", "parts", "checks", "mesh", "previews", "write"], r.Timings.Select(t => t.Stage).ToArray());
         Assert.All(r.Timings, t => Assert.True(t.Ms >= 0));
     }
 }
