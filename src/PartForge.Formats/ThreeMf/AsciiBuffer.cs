@@ -70,9 +70,6 @@ internal sealed class AsciiBuffer
 
     public ReadOnlySpan<byte> Span => _buf.AsSpan(0, _len);
 
-    /// <summary>The text written so far, without a copy (valid until the next append).</summary>
-    public ReadOnlyMemory<byte> Memory => _buf.AsMemory(0, _len);
-
     private void Ensure(int extra)
     {
         if (_len + extra <= _buf.Length) return;

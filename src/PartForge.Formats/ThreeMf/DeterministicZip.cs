@@ -20,9 +20,6 @@ internal static class DeterministicZip
     private const ushort Version = 20; // 2.0: deflate
     private const ushort MethodDeflate = 8;
 
-    public static void Write(Stream output, IReadOnlyList<(string Name, ReadOnlyMemory<byte> Data)> entries, CompressionLevel level) =>
-        Write(output, entries.Select(e => (e.Name, (Action<Stream>)(s => s.Write(e.Data.Span)))).ToArray(), level);
-
     /// <summary>
     /// Writes the package with each entry's content produced by a writer callback. On a seekable output the
     /// content is compressed straight into it and the local header is patched afterwards (the content is never
