@@ -1,6 +1,4 @@
 using NetTopologySuite.Geometries;
-using NetTopologySuite.Noding;
-using NetTopologySuite.Noding.Snapround;
 using PartForge.Geometry.Primitives;
 using PartForge.Geometry.Regions;
 using PartForge.Geometry.Solids;
@@ -12,9 +10,9 @@ internal sealed class MeshAssembly
 {
     private readonly Precision _prec;
     private readonly double _scale;
-    private readonly List<Vec3> _vertices = new();
-    private readonly List<int> _tris = new();
-    private readonly GeometryFactory _f;
+    private readonly ChunkedBuffer<Vec3> _vertices = new();
+    private readonly ChunkedBuffer<int> _tris = new();
+    private readonly List<int> _faceTris = new();
     private readonly bool _collectConflicts;
     private bool _noded;
 
@@ -28,7 +26,6 @@ internal sealed class MeshAssembly
         _collectConflicts = collectConflicts;
         _prec = prec;
         _scale = prec.Scale;
-        _f = new GeometryFactory(new PrecisionModel(_scale));
     }
 
     /// <summary>A ring of one layer on one level: its (possibly noded) points and where its own vertices sit.</summary>
@@ -36,38 +33,84 @@ internal sealed class MeshAssembly
     {
         public required GridPoint[] Orig;
         public GridPoint[] Noded = null!;
-        public int[] OrigPos = null!;     // index in Noded of Orig[i]
+        public int[]? OrigPos;            // index in Noded of Orig[i]; null when Noded is Orig
+        public int Pos(int i) => OrigPos is null ? i : OrigPos[i];
         public bool Changed;
     }
 
+    /// <summary>
+    /// The vertices of one z level: every point of the (noded) rings whose walls end or start there, known
+    /// before any face or wall of the level is made. They are numbered consecutively from <see cref="Base"/>
+    /// in the order of their packed keys, so a look-up is a binary search in one sorted array (8 B a vertex;
+    /// a hash table of the same takes 28 to 56).
+    /// </summary>
     private sealed class Level
     {
         public long Z;
-        public readonly Dictionary<long, int> Ids = new(MixedLongComparer.Instance);
+        public int Base;
+        public long[] Keys = Array.Empty<long>();
+
+        public bool TryGet(long key, out int id)
+        {
+            int i = Array.BinarySearch(Keys, key);
+            id = i >= 0 ? Base + i : -1;
+            return i >= 0;
+        }
     }
 
-    /// <summary>The mesh, or null when conflicts were collected (the caller heals and retries).</summary>
-    public Mesh? Build(LayeredSolid solid)
+    /// <summary>One non-empty layer on the grid: its z range and its rings (what the mesher needs of a region).</summary>
+    internal sealed record PreparedLayer(long Z0, long Z1, GridPoint[][] Rings, int Index);
+
+    /// <summary>
+    /// The rings of every layer thicker than the grid, on the grid, in z order (16 B a vertex, against about
+    /// three times that for the regions, which the caller may then let go). Throws when a coordinate is
+    /// beyond what float32 output can hold or when layers overlap in z after snapping.
+    /// </summary>
+    public List<PreparedLayer> Prepare(LayeredSolid solid)
     {
         var layers = solid.Layers.Select((l, i) => (L: l, I: i)).Where(x => !x.L.Region.IsEmpty).ToList();
-        if (layers.Count == 0) return Mesh.Empty;
+        var res = new List<PreparedLayer>(layers.Count);
+        if (layers.Count == 0) return res;
         CheckFloat32(layers.Select(x => x.L).ToList());
-
-        // Group touching layers into stacks (a gap in z starts a new shell).
-        var stack = new List<(long Z0, long Z1, Region R, int Index)>();
         long? lastTop = null;
         foreach (var (l, index) in layers)
         {
             long z0 = ToGrid(l.Z0), z1 = ToGrid(l.Z1);
             if (z1 <= z0) continue; // thinner than the grid: nothing to mesh
-            if (lastTop is { } t && z0 != t) { BuildStack(stack); stack.Clear(); }
-            if (lastTop is { } t2 && z0 < t2) throw new ArgumentException("layers overlap in z after snapping to the grid");
-            stack.Add((z0, z1, l.Region, index));
+            if (lastTop is { } t && z0 < t) throw new ArgumentException("layers overlap in z after snapping to the grid");
+            res.Add(new PreparedLayer(z0, z1, Rings(l.Region), index));
             lastTop = z1;
         }
+        return res;
+    }
+
+    /// <summary>The mesh, or null when conflicts were collected (the caller heals and retries).</summary>
+    public Mesh? Build(LayeredSolid solid) => Build(Prepare(solid));
+
+    /// <summary>The mesh of prepared layers (their ring arrays may be reordered in place), or null when
+    /// conflicts were collected.</summary>
+    public Mesh? Build(List<PreparedLayer> layers)
+    {
+        if (layers.Count == 0) return Mesh.Empty;
+        // Group touching layers into stacks (a gap in z starts a new shell).
+        var stack = new List<PreparedLayer>();
+        long? lastTop = null;
+        foreach (var l in layers)
+        {
+            if (lastTop is { } t && l.Z0 != t) { BuildStack(stack); stack.Clear(); }
+            stack.Add(l);
+            lastTop = l.Z1;
+        }
         BuildStack(stack);
-        if (_collectConflicts && Conflicts.Count > 0) return null;
-        var mesh = new Mesh(_vertices.ToArray(), _tris.ToArray(), true);
+        if (_collectConflicts && Conflicts.Count > 0)
+        {
+            // The caller heals and tries again: let go of this attempt's mesh before it does.
+            _vertices.Clear();
+            _tris.Clear();
+            return null;
+        }
+        var vertices = _vertices.ToArrayAndClear();
+        var mesh = new Mesh(vertices, _tris.ToArrayAndClear(), true);
         if (_noded)
         {
             // Levels where layer boundaries cross were snap-rounded: verify before the mesh leaves the kernel.
@@ -117,25 +160,50 @@ internal sealed class MeshAssembly
         return pts.ToArray();
     }
 
-    private int Vertex(Level lv, GridPoint p)
+    /// <summary>Use of one undirected edge by the two sides: signed (B, A) and unsigned (NB, NA) counts.</summary>
+    private readonly record struct EdgeUse(short B, short A, short NB, short NA);
+
+    private static int Vertex(Level lv, GridPoint p)
     {
-        long k = p.Key;
-        if (!lv.Ids.TryGetValue(k, out int id))
-        {
-            id = _vertices.Count;
-            _vertices.Add(new Vec3(p.X / _scale, p.Y / _scale, lv.Z / _scale));
-            lv.Ids[k] = id;
-        }
+        if (!lv.TryGet(p.Key, out int id)) throw new InvalidOperationException($"mesher: point {p} is not a vertex of level {lv.Z}");
         return id;
+    }
+
+    /// <summary>
+    /// Numbers the vertices of a level: the points of the below rings that end there (no continuation) and of
+    /// the above rings that start there (not a continuation), after noding.
+    /// </summary>
+    private void RegisterLevel(Level lv, RingUse[] below, RingUse[] above, int[]? continues)
+    {
+        var continued = new bool[above.Length];
+        if (continues is not null) foreach (int c in continues) if (c >= 0) continued[c] = true;
+        int n = 0;
+        for (int i = 0; i < below.Length; i++) if (continues is null || continues[i] < 0) n += below[i].Noded.Length;
+        for (int a = 0; a < above.Length; a++) if (!continued[a]) n += above[a].Noded.Length;
+        var keys = new long[n];
+        n = 0;
+        for (int i = 0; i < below.Length; i++) if (continues is null || continues[i] < 0) foreach (var p in below[i].Noded) keys[n++] = p.Key;
+        for (int a = 0; a < above.Length; a++) if (!continued[a]) foreach (var p in above[a].Noded) keys[n++] = p.Key;
+        Array.Sort(keys);
+        int m = 0;
+        for (int i = 0; i < keys.Length; i++) if (m == 0 || keys[i] != keys[m - 1]) keys[m++] = keys[i];
+        if (m != keys.Length) Array.Resize(ref keys, m);
+        lv.Keys = keys;
+        lv.Base = _vertices.Count;
+        foreach (long k in keys)
+        {
+            var p = GridPoint.FromKey(k);
+            _vertices.Add(new Vec3(p.X / _scale, p.Y / _scale, lv.Z / _scale));
+        }
     }
 
     // ------------------------------------------------------------------------------------------------
 
-    private void BuildStack(List<(long Z0, long Z1, Region R, int Index)> stack)
+    private void BuildStack(List<PreparedLayer> stack)
     {
         int k = stack.Count;
         if (k == 0) return;
-        var rings = stack.Select(s => Rings(s.R)).ToArray();
+        var rings = stack.Select(s => s.Rings).ToArray();
         var levels = new Level[k + 1];
         for (int m = 0; m <= k; m++) levels[m] = new Level { Z = m < k ? stack[m].Z0 : stack[k - 1].Z1 };
 
@@ -155,11 +223,10 @@ internal sealed class MeshAssembly
         {
             RingUse[] below = m > 0 ? top[m - 1] : Array.Empty<RingUse>();
             RingUse[] above = m < k ? bottom[m] : Array.Empty<RingUse>();
-            Region? rb = m > 0 ? stack[m - 1].R : null, ra = m < k ? stack[m].R : null;
-            BuildLevel(levels[m], below, above, rb, ra, m > 0 ? continues[m - 1] : null, m > 0 ? stack[m - 1].Index : -1, m < k ? stack[m].Index : -1);
+            BuildLevel(levels[m], below, above, m > 0 ? continues[m - 1] : null, m > 0 ? stack[m - 1].Index : -1, m < k ? stack[m].Index : -1);
         }
 
-        // Register every chain vertex first, so that wall sides know which vertices exist on their edges.
+        // Walls: one run per ring from the level where it starts to the level where it ends.
         var runs = new List<(int J0, int R0, int J1, int R1)>();
         for (int j = 0; j < k; j++)
         {
@@ -169,8 +236,6 @@ internal sealed class MeshAssembly
                 int jj = j, rr = r;
                 while (continues[jj][rr] >= 0) { rr = continues[jj][rr]; jj++; }
                 runs.Add((j, r, jj, rr));
-                foreach (var p in bottom[j][r].Noded) Vertex(levels[j], p);
-                foreach (var p in top[jj][rr].Noded) Vertex(levels[jj + 1], p);
             }
         }
         foreach (var (j0, r0, j1, r1) in runs) BuildWalls(levels, j0, j1 + 1, bottom[j0][r0], top[j1][r1]);
@@ -184,7 +249,7 @@ internal sealed class MeshAssembly
 
     // ---- one level: noding, classification, faces ----
 
-    private void BuildLevel(Level lv, RingUse[] below, RingUse[] above, Region? rb, Region? ra, int[]? continues, int belowLayer, int aboveLayer)
+    private void BuildLevel(Level lv, RingUse[] below, RingUse[] above, int[]? continues, int belowLayer, int aboveLayer)
     {
         // Rings identical on both sides (same cyclic sequence, same direction) pass straight through.
         var passBelow = new int[below.Length];
@@ -223,6 +288,7 @@ internal sealed class MeshAssembly
             foreach (var u in below) Identity(u);
             foreach (var u in above) Identity(u);
             for (int i = 0; i < below.Length; i++) if (passBelow[i] >= 0) continues![i] = passBelow[i];
+            RegisterLevel(lv, below, above, continues);
             // Whole rings go to the up face (region below minus above) or the down face (above minus below).
             var up = new List<GridPoint[]>();
             var down = new List<GridPoint[]>();
@@ -251,8 +317,7 @@ internal sealed class MeshAssembly
     private static void Identity(RingUse u)
     {
         u.Noded = u.Orig;
-        u.OrigPos = new int[u.Orig.Length];
-        for (int i = 0; i < u.OrigPos.Length; i++) u.OrigPos[i] = i;
+        u.OrigPos = null; // identity
     }
 
     /// <summary>Whether a ring that does not touch the other side's active rings lies inside the other side
@@ -310,20 +375,22 @@ internal sealed class MeshAssembly
         return true;
     }
 
-    private bool Touch(RingUse[] below, List<int> ab, RingUse[] above, List<int> aa)
+    /// <summary>Whether an active ring below and an active ring above have a point in common (exact, on the grid).</summary>
+    private static bool Touch(RingUse[] below, List<int> ab, RingUse[] above, List<int> aa)
     {
-        var gb = _f.CreateMultiLineString(ab.Select(i => (LineString)_f.CreateLineString(Coords(below[i].Orig, true))).ToArray());
-        var ga = _f.CreateMultiLineString(aa.Select(i => (LineString)_f.CreateLineString(Coords(above[i].Orig, true))).ToArray());
-        if (!gb.EnvelopeInternal.Intersects(ga.EnvelopeInternal)) return false;
-        return gb.Intersects(ga);
-    }
-
-    private Coordinate[] Coords(GridPoint[] r, bool closed)
-    {
-        var c = new Coordinate[r.Length + (closed ? 1 : 0)];
-        for (int i = 0; i < r.Length; i++) c[i] = new Coordinate(r[i].X / _scale, r[i].Y / _scale);
-        if (closed) c[^1] = c[0].Copy();
-        return c;
+        var rings = new List<GridPoint[]>(ab.Count + aa.Count);
+        foreach (int i in ab) rings.Add(below[i].Orig);
+        foreach (int i in aa) rings.Add(above[i].Orig);
+        int nb = ab.Count;
+        bool touch = false;
+        SegmentSweep.ForEachNearPair(rings, 0, (r1, s1, r2, s2) =>
+        {
+            if ((r1 < nb) == (r2 < nb)) return true; // same side
+            var p = rings[r1]; var q = rings[r2];
+            touch = SegmentSweep.SegmentsMeet(p[s1], p[(s1 + 1) % p.Length], q[s2], q[(s2 + 1) % q.Length]);
+            return !touch;
+        });
+        return touch;
     }
 
     /// <summary>
@@ -332,36 +399,32 @@ internal sealed class MeshAssembly
     /// </summary>
     private void NodeAndClassify(Level lv, RingUse[] below, RingUse[] above, int[] passBelow, int[] passAbove, int[]? continues, int belowLayer, int aboveLayer)
     {
-        var inputs = new List<ISegmentString>();
+        var rings = new List<GridPoint[]>();
         var owners = new List<(bool Below, int Index)>();
-        for (int i = 0; i < below.Length; i++) { inputs.Add(new NodedSegmentString(GridCoords(below[i].Orig, true), inputs.Count)); owners.Add((true, i)); }
+        for (int i = 0; i < below.Length; i++) { rings.Add(below[i].Orig); owners.Add((true, i)); }
         for (int i = 0; i < above.Length; i++)
         {
             if (passAbove[i] >= 0) continue; // same ring as one below: noded once
-            inputs.Add(new NodedSegmentString(GridCoords(above[i].Orig, true), inputs.Count));
+            rings.Add(above[i].Orig);
             owners.Add((false, i));
         }
         // Snap rounding can leave a vertex on another edge when two rounded edges come close; noding the
-        // output again until nothing changes gives a fully noded arrangement.
-        var pieces = new List<GridPoint>[inputs.Count];
+        // output again until nothing changes gives a fully noded arrangement. Only the segments near another
+        // boundary go through the noder (LocalSnapNoder).
+        var pieces = new List<GridPoint>[rings.Count];
         for (int pass = 0; ; pass++)
         {
-            var noder = new SnapRoundingNoder(new PrecisionModel(1.0)); // in grid units: exact integer input
-            noder.ComputeNodes(inputs);
-            var parts = new List<GridPoint[]>[inputs.Count];
-            for (int i = 0; i < parts.Length; i++) parts[i] = new List<GridPoint[]>();
-            foreach (var ss in noder.GetNodedSubstrings())
-                parts[(int)ss.Context].Add(ss.Coordinates.Select(c => new GridPoint((long)Math.Floor(c.X + 0.5), (long)Math.Floor(c.Y + 0.5))).ToArray());
+            var noded = LocalSnapNoder.Node(rings, out _);
             for (int i = 0; i < pieces.Length; i++)
             {
                 var (isBelow, idx) = owners[i];
-                pieces[i] = RemoveSpikes(Chain(parts[i], FirstPoint(inputs[i])), (isBelow ? below[idx] : above[idx]).Orig);
+                pieces[i] = RemoveSpikes(noded[i], (isBelow ? below[idx] : above[idx]).Orig);
             }
-            int before = inputs.Sum(x => x.Count), after = pieces.Sum(x => x.Count);
+            int before = rings.Sum(x => x.Length + 1), after = pieces.Sum(x => x.Count);
             if (after == before || pass == 4) break;
-            inputs = pieces.Select((pl, i) => (ISegmentString)new NodedSegmentString(GridCoords(Trimmed(pl), true), i)).ToList();
+            rings = pieces.Select(Trimmed).ToList();
         }
-        for (int s = 0; s < inputs.Count; s++)
+        for (int s = 0; s < pieces.Length; s++)
         {
             var (isBelow, idx) = owners[s];
             var use = isBelow ? below[idx] : above[idx];
@@ -373,47 +436,46 @@ internal sealed class MeshAssembly
                 if (!use.Changed) continues![idx] = passBelow[idx];
             }
         }
+        RegisterLevel(lv, below, above, continues);
 
-        // Signed use of each undirected noded edge by each side.
-        var edges = new Dictionary<(long, long), (int B, int A)>();
-        var uses = new Dictionary<(long, long), (int B, int A)>(); // unsigned use counts
+        // Signed and unsigned use of each undirected noded edge by each side (one table, 8 bytes of counts an
+        // edge), keyed by its two end points in key order.
+        var edges = new Dictionary<(long, long), EdgeUse>();
         void Count(GridPoint[] ring, bool isBelow)
         {
             for (int i = 0; i < ring.Length; i++)
             {
-                var p = ring[i]; var q = ring[(i + 1) % ring.Length];
-                long kp = p.Key, kq = q.Key;
+                long kp = ring[i].Key, kq = ring[(i + 1) % ring.Length].Key;
                 var key = kp < kq ? (kp, kq) : (kq, kp);
-                int s = kp < kq ? 1 : -1;
+                short s = (short)(kp < kq ? 1 : -1);
                 edges.TryGetValue(key, out var e);
-                edges[key] = isBelow ? (e.B + s, e.A) : (e.B, e.A + s);
-                uses.TryGetValue(key, out var n);
-                uses[key] = isBelow ? (n.B + 1, n.A) : (n.B, n.A + 1);
+                edges[key] = isBelow ? e with { B = (short)(e.B + s), NB = (short)(e.NB + 1) } : e with { A = (short)(e.A + s), NA = (short)(e.NA + 1) };
             }
         }
         foreach (var u in below) Count(u.Noded, true);
         foreach (var u in above) Count(u.Noded, false);
+        static GridPoint End((long, long) key, bool second) => GridPoint.FromKey(second ? key.Item2 : key.Item1);
         if (_collectConflicts)
         {
             // One side using an edge both ways: two of its rings were pulled onto each other (a wall of zero
             // thickness between them).
-            foreach (var (key, (nb, na)) in uses)
+            foreach (var (key, e) in edges)
             {
-                var (eb, ea) = edges[key];
-                var p = GridPoint.FromKey(key.Item1); var q = GridPoint.FromKey(key.Item2);
-                if (nb > Math.Abs(eb)) Conflicts.Add((belowLayer, p, q));
-                if (na > Math.Abs(ea)) Conflicts.Add((aboveLayer, p, q));
+                var p = End(key, false); var q = End(key, true);
+                if (e.NB > Math.Abs(e.B)) Conflicts.Add((belowLayer, p, q));
+                if (e.NA > Math.Abs(e.A)) Conflicts.Add((aboveLayer, p, q));
             }
         }
 
         // Locate against each side's net edges: back-and-forth steps left by snap rounding cancel out.
-        var locBelow = below.Length > 0 ? new ExactAreaLocator(edges.Where(kv => kv.Value.B != 0).Select(kv => (GridPoint.FromKey(kv.Key.Item1), GridPoint.FromKey(kv.Key.Item2)))) : null;
-        var locAbove = above.Length > 0 ? new ExactAreaLocator(edges.Where(kv => kv.Value.A != 0).Select(kv => (GridPoint.FromKey(kv.Key.Item1), GridPoint.FromKey(kv.Key.Item2)))) : null;
+        var locBelow = below.Length > 0 ? new ExactAreaLocator(edges.Where(kv => kv.Value.B != 0).Select(kv => (End(kv.Key, false), End(kv.Key, true)))) : null;
+        var locAbove = above.Length > 0 ? new ExactAreaLocator(edges.Where(kv => kv.Value.A != 0).Select(kv => (End(kv.Key, false), End(kv.Key, true)))) : null;
         var up = new List<(GridPoint P, GridPoint Q)>();
         var down = new List<(GridPoint P, GridPoint Q)>();
-        foreach (var ((k1, k2), (b, a)) in edges)
+        foreach (var (key, e) in edges)
         {
-            var p = GridPoint.FromKey(k1); var q = GridPoint.FromKey(k2);
+            var p = End(key, false); var q = End(key, true);
+            int b = e.B, a = e.A;
             if (Math.Abs(b) > 1 || Math.Abs(a) > 1) throw new InvalidOperationException("noded rings overlap on one side");
             if (b == a) continue;
             if (b != 0 && a != 0)
@@ -431,47 +493,12 @@ internal sealed class MeshAssembly
                 if (locBelow is not null && Inside(locBelow, p, q)) Add(up, p, q, -a); else Add(down, p, q, a);
             }
         }
+        edges = null!;
+        locBelow = locAbove = null;
         EmitFace(lv, Cycles(up), flip: false);
         EmitFace(lv, Cycles(down), flip: true);
 
         static void Add(List<(GridPoint, GridPoint)> l, GridPoint p, GridPoint q, int s) => l.Add(s > 0 ? (p, q) : (q, p));
-    }
-
-    private static GridPoint FirstPoint(ISegmentString ss) => new((long)Math.Floor(ss.Coordinates[0].X + 0.5), (long)Math.Floor(ss.Coordinates[0].Y + 0.5));
-
-    private static Coordinate[] GridCoords(GridPoint[] r, bool closed)
-    {
-        var c = new Coordinate[r.Length + (closed ? 1 : 0)];
-        for (int i = 0; i < r.Length; i++) c[i] = new Coordinate(r[i].X, r[i].Y);
-        if (closed) c[^1] = c[0].Copy();
-        return c;
-    }
-
-    /// <summary>Joins the noded pieces of one closed ring end to start, beginning at the ring's first vertex
-    /// (the noder does not promise to return them in ring order).</summary>
-    private static List<GridPoint> Chain(List<GridPoint[]> parts, GridPoint start)
-    {
-        var byStart = new Dictionary<long, Queue<int>>(MixedLongComparer.Instance);
-        for (int i = 0; i < parts.Count; i++)
-        {
-            if (parts[i].Length == 0) continue;
-            long k = parts[i][0].Key;
-            if (!byStart.TryGetValue(k, out var q)) byStart[k] = q = new Queue<int>();
-            q.Enqueue(i);
-        }
-        var res = new List<GridPoint>();
-        var at = start;
-        int used = 0;
-        while (used < parts.Count && byStart.TryGetValue(at.Key, out var queue) && queue.Count > 0)
-        {
-            var part = parts[queue.Dequeue()];
-            used++;
-            foreach (var g in part) if (res.Count == 0 || res[^1] != g) res.Add(g);
-            at = part[^1];
-            if (at == start) break;
-        }
-        if (used != parts.Count(p => p.Length > 0) || at != start) throw new InvalidOperationException("noded ring pieces do not close");
-        return res;
     }
 
     /// <summary>
@@ -540,13 +567,14 @@ internal sealed class MeshAssembly
     /// (so each walk bounds one face component).</summary>
     private static List<GridPoint[]> Cycles(List<(GridPoint P, GridPoint Q)> edges)
     {
-        var outs = new Dictionary<long, List<int>>(MixedLongComparer.Instance);
-        for (int i = 0; i < edges.Count; i++)
-        {
-            long k = edges[i].P.Key;
-            if (!outs.TryGetValue(k, out var l)) outs[k] = l = new List<int>(1);
-            l.Add(i);
-        }
+        // Edges by start point (then by index): the ways out of a point are one run of `order`.
+        var startKey = new long[edges.Count];
+        var order = new int[edges.Count];
+        for (int i = 0; i < edges.Count; i++) { startKey[i] = edges[i].P.Key; order[i] = i; }
+        Array.Sort(order, (x, y) => { int c = startKey[x].CompareTo(startKey[y]); return c != 0 ? c : x.CompareTo(y); });
+        var sortedKey = new long[edges.Count];
+        for (int i = 0; i < order.Length; i++) sortedKey[i] = startKey[order[i]];
+        startKey = null!;
         var used = new bool[edges.Count];
         var res = new List<GridPoint[]>();
         for (int s = 0; s < edges.Count; s++)
@@ -560,11 +588,12 @@ internal sealed class MeshAssembly
                 cyc.Add(edges[e].P);
                 var v = edges[e].Q;
                 if (v == edges[s].P) break;
-                var cand = outs[v.Key];
+                int lo = LowerBound(sortedKey, v.Key);
                 int best = -1; double bestTurn = double.PositiveInfinity;
                 double back = Math.Atan2(edges[e].P.Y - v.Y, edges[e].P.X - v.X);
-                foreach (int c in cand)
+                for (int o = lo; o < sortedKey.Length && sortedKey[o] == v.Key; o++)
                 {
+                    int c = order[o];
                     if (used[c]) continue;
                     double a = Math.Atan2(edges[c].Q.Y - v.Y, edges[c].Q.X - v.X);
                     double turn = back - a;
@@ -578,6 +607,18 @@ internal sealed class MeshAssembly
             if (cyc.Count >= 3) res.Add(cyc.ToArray());
         }
         return res;
+    }
+
+    /// <summary>First index whose key is at least <paramref name="key"/> in a sorted array.</summary>
+    private static int LowerBound(long[] sorted, long key)
+    {
+        int lo = 0, hi = sorted.Length;
+        while (lo < hi)
+        {
+            int mid = (lo + hi) >>> 1;
+            if (sorted[mid] < key) lo = mid + 1; else hi = mid;
+        }
+        return lo;
     }
 
     // ---- faces ----
@@ -648,10 +689,11 @@ internal sealed class MeshAssembly
                 }
             }
             var ids = r.Select(p => Vertex(lv, p)).ToArray();
-            int start = _tris.Count;
-            FaceTriangulator.Triangulate(ids, r, holesOf[o], _tris);
+            _faceTris.Clear();
+            FaceTriangulator.Triangulate(ids, r, holesOf[o], _faceTris);
             if (flip)
-                for (int t = start; t < _tris.Count; t += 3) (_tris[t + 1], _tris[t + 2]) = (_tris[t + 2], _tris[t + 1]);
+                for (int t = 0; t < _faceTris.Count; t += 3) (_faceTris[t + 1], _faceTris[t + 2]) = (_faceTris[t + 2], _faceTris[t + 1]);
+            _tris.AddRange(_faceTris);
         }
     }
 
@@ -694,7 +736,7 @@ internal sealed class MeshAssembly
             List<int>? l = null;
             long key = orig[i].Key;
             for (int m = a + 1; m < b; m++)
-                if (levels[m].Ids.TryGetValue(key, out int id)) (l ??= new List<int>()).Add(id);
+                if (levels[m].TryGet(key, out int id)) (l ??= new List<int>()).Add(id);
             side[i] = l!;
         }
         var poly = new List<int>(8);
@@ -703,7 +745,7 @@ internal sealed class MeshAssembly
             int i2 = (i + 1) % n;
             poly.Clear();
             // bottom chain u..v at level a
-            int s0 = bot.OrigPos[i], s1 = i2 == 0 ? bot.Noded.Length : bot.OrigPos[i2];
+            int s0 = bot.Pos(i), s1 = i2 == 0 ? bot.Noded.Length : bot.Pos(i2);
             for (int s = s0; s < s1; s++) poly.Add(Vertex(levels[a], bot.Noded[s]));
             int vA = Vertex(levels[a], orig[i2]);
             poly.Add(vA);
@@ -711,7 +753,7 @@ internal sealed class MeshAssembly
             // up the v side
             if (side[i2] is { } sv) poly.AddRange(sv);
             // top chain v..u at level b (reversed)
-            int t0 = top.OrigPos[i], t1 = i2 == 0 ? top.Noded.Length : top.OrigPos[i2];
+            int t0 = top.Pos(i), t1 = i2 == 0 ? top.Noded.Length : top.Pos(i2);
             poly.Add(Vertex(levels[b], orig[i2]));
             for (int s = t1 - 1; s >= t0; s--) poly.Add(Vertex(levels[b], top.Noded[s]));
             // down the u side

@@ -23,15 +23,45 @@ public static class Mesher
     public static Mesh Build(LayeredSolid solid, Precision prec)
     {
         ArgumentNullException.ThrowIfNull(solid);
+        return Build(() => solid, prec);
+    }
+
+    /// <summary>
+    /// Meshes the solid that <paramref name="source"/> gives, holding its regions only while their rings are
+    /// taken onto the grid: a caller that lets go of the solid (a source that makes or hands it over) does not
+    /// keep the regions alive beside the growing mesh. The source is asked again only if the mesh needs
+    /// healing (and must give the same solid). Throws as <see cref="Build(LayeredSolid, Precision)"/>.
+    /// </summary>
+    public static Mesh Build(Func<LayeredSolid> source, Precision prec)
+    {
+        ArgumentNullException.ThrowIfNull(source);
         ArgumentNullException.ThrowIfNull(prec);
-        var s = solid;
+        var prepared = PrepareFrom(source, prec);
+        // Conflicts of each failed attempt; the healed solid is made again from the source with all the
+        // patches so far, and let go once its rings are taken (the regions are not held while meshing).
+        var heals = new List<List<(int Layer, GridPoint P, GridPoint Q)>>();
         for (int attempt = 0; attempt < MaxHealPasses; attempt++)
         {
             var asm = new MeshAssembly(prec, collectConflicts: true);
-            if (asm.Build(s) is { } mesh) return mesh;
-            s = Heal(s, asm.Conflicts, prec, attempt);
+            if (asm.Build(prepared) is { } mesh) return mesh;
+            heals.Add(asm.Conflicts);
+            prepared = null!;
+            prepared = PrepareHealed(source, heals, prec);
         }
-        return new MeshAssembly(prec).Build(s)!;
+        return new MeshAssembly(prec).Build(prepared)!;
+    }
+
+    /// <summary>The solid's rings on the grid; apart, so that no slot of the caller's frame keeps the solid alive.</summary>
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.NoInlining)]
+    private static List<MeshAssembly.PreparedLayer> PrepareFrom(Func<LayeredSolid> source, Precision prec) =>
+        new MeshAssembly(prec).Prepare(source() ?? throw new ArgumentException("the source gave no solid", nameof(source)));
+
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.NoInlining)]
+    private static List<MeshAssembly.PreparedLayer> PrepareHealed(Func<LayeredSolid> source, List<List<(int Layer, GridPoint P, GridPoint Q)>> heals, Precision prec)
+    {
+        var s = source();
+        for (int k = 0; k < heals.Count; k++) s = Heal(s, heals[k], prec, k);
+        return new MeshAssembly(prec).Prepare(s);
     }
 
     /// <summary>Heal passes before the mesher gives up (each pass doubles the patch width).</summary>
