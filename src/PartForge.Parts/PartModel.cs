@@ -34,14 +34,15 @@ public sealed record PartModel
     /// <summary>
     /// The layered solid in part-local coordinates (z from 0 at the bottom face). Made from the exact layers on
     /// first use (thread-safe): checks work on the exact primitives, so a check or a sweep, or a build that
-    /// writes only some parts, never pays for the regions of the others. Throws <see cref="PartsException"/>
-    /// when the layers cannot be made into regions.
+    /// writes only some parts, never pays for the regions of the others. Once the mesh is made the regions are
+    /// let go (a later read makes them again, the same). Throws <see cref="PartsException"/> when the layers
+    /// cannot be made into regions.
     /// </summary>
     public LayeredSolid Solid => (_solid ?? throw new InvalidOperationException($"{Name}: no solid source")).Value;
 
-    private Lazy<LayeredSolid>? _solid;
+    private SolidSource? _solid;
 
-    internal Lazy<LayeredSolid> SolidSource { init => _solid = value; }
+    internal SolidSource SolidSource { init => _solid = value; }
 
     /// <summary>
     /// The solid's closed, outward-oriented triangle mesh (part-local). Made on first use (thread-safe), so that
@@ -77,7 +78,7 @@ public sealed record PartModel
 
     /// <summary>Volume of one copy in mm^3: sum over the solid's layers of region area x height (the discretised solid,
     /// within the chordal bound of the true-circle volume).</summary>
-    public double VolumeMm3 => Solid.AnalyticVolume;
+    public double VolumeMm3 => (_solid ?? throw new InvalidOperationException($"{Name}: no solid source")).Volume;
 
     /// <summary>Mass of one copy in grams from <see cref="VolumeMm3"/> and the material density (solid, 100% infill).</summary>
     public double MassG => Materials.MassG(Material, VolumeMm3);

@@ -151,11 +151,12 @@ public static partial class PartsBuilder
             ExactGeometry.Support(c, new Vec2(1, 0)) + pad, ExactGeometry.Support(c, new Vec2(0, 1)) + pad);
     }
 
-    private static Mesh MeshOf(string name, LayeredSolid solid, Precision precision)
+    private static Mesh MeshOf(string name, SolidSource solid, Precision precision)
     {
         try
         {
-            return Mesher.Build(solid, precision);
+            // The regions are let go as soon as the mesher has their rings (made again only for a heal).
+            return Mesher.Build(() => { var v = solid.Value; solid.Release(); return v; }, precision);
         }
         catch (ArgumentException ex)
         {
@@ -170,7 +171,7 @@ public static partial class PartsBuilder
 
     private static PartModel ToModel(PartSpec s, Precision precision, int symmetry, string layout)
     {
-        var solid = new Lazy<LayeredSolid>(() =>
+        var solid = new SolidSource(() =>
         {
             try
             {
@@ -180,8 +181,13 @@ public static partial class PartsBuilder
             {
                 throw new PartsException($"{s.Name}: the solid cannot be made ({ex.Message})");
             }
+        });
+        var mesh = new Lazy<Mesh>(() =>
+        {
+            var m = MeshOf(s.Name, solid, precision);
+            solid.Release(); // nothing reads the regions once the mesh exists
+            return m;
         }, LazyThreadSafetyMode.ExecutionAndPublication);
-        var mesh = new Lazy<Mesh>(() => MeshOf(s.Name, solid.Value, precision), LazyThreadSafetyMode.ExecutionAndPublication);
         bool rotating = s.Name.StartsWith("rotor", StringComparison.Ordinal) || s.Name == "back-iron"
             || (s.Name == "spacer" && layout == "dual-rotor");
         return new PartModel
