@@ -92,7 +92,7 @@ public static class ThreeMfWriter
     public static byte[] ModelXml(string title, IReadOnlyList<ThreeMfObject> objects)
     {
         Validate(title, objects);
-        long estimate = objects.Sum(o => (long)o.Mesh.VertexCount * 48 + (long)o.Mesh.TriangleCount * 40) + 1024;
+        long estimate = objects.Sum(o => o.IsDeferred ? 0 : (long)o.Mesh.VertexCount * 48 + (long)o.Mesh.TriangleCount * 40) + 1024;
         var w = new AsciiBuffer((int)Math.Min(estimate, 1 << 30));
         WriteModel(w, title, objects);
         return w.ToArray();
@@ -106,7 +106,7 @@ public static class ThreeMfWriter
         for (int i = 0; i < objects.Count; i++)
         {
             var o = objects[i] ?? throw new ArgumentException($"object {i} is missing", nameof(objects));
-            if (o.Name is null || o.Mesh is null || o.Placements is null) throw new ArgumentException($"object {i} has no name, mesh or placement list", nameof(objects));
+            if (o.Name is null || !o.HasMesh || o.Placements is null) throw new ArgumentException($"object {i} has no name, mesh or placement list", nameof(objects));
             foreach (var t in o.Placements)
             {
                 if (t.Values().Any(v => !double.IsFinite(v))) throw new ArgumentException($"object '{o.Name}': a placement has a value that is not finite", nameof(objects));
@@ -160,45 +160,56 @@ public static class ThreeMfWriter
 
     private static void WriteObject(AsciiBuffer w, int id, ThreeMfObject o)
     {
-        var mesh = o.Mesh;
+        var mesh = o.Mesh; // a deferred object's mesh is made here and dropped when this returns
         var verts = mesh.Vertices;
         var idx = mesh.Indices;
         if (mesh.TriangleCount == 0) throw new ArgumentException($"object '{o.Name}': the mesh has no triangles");
 
-        // Shared vertices: each distinct position once, numbered in order of first use by a triangle.
-        var remap = new int[verts.Count];
-        Array.Fill(remap, -1);
-        var byPosition = new Dictionary<Vec3, int>(verts.Count);
-        var order = new List<Vec3>(verts.Count);
-        var tris = new int[idx.Count];
-        double volume6 = 0;
-        Vec3 origin = verts[idx[0]];
+        // Shared vertices: each distinct position once, numbered in order of first use by a triangle. An open
+        // addressing table of vertex indices finds a position seen before (no per-entry objects: three
+        // integer arrays of about the vertex count in all).
+        var newId = new int[verts.Count];
+        Array.Fill(newId, -1);
+        int bits = 4;
+        while ((1 << bits) < 2 * verts.Count) bits++;
+        int cap = 1 << bits;
+        var table = new int[cap];
+        Array.Fill(table, -1);
+        var byNew = new int[verts.Count];
+        int count = 0;
         for (int k = 0; k < idx.Count; k++)
         {
             int old = idx[k];
-            int n = remap[old];
+            if (newId[old] >= 0) continue;
+            var p = verts[old];
+            if (!double.IsFinite(p.X) || !double.IsFinite(p.Y) || !double.IsFinite(p.Z))
+                throw new ArgumentException($"object '{o.Name}': vertex {old} is not finite");
+            int slot = (int)(((uint)p.GetHashCode() * 0x9E3779B1u) >> (32 - bits)); // Fibonacci hashing: the top bits
+            int n = -1;
+            while (table[slot] >= 0)
+            {
+                if (verts[table[slot]] == p) { n = newId[table[slot]]; break; }
+                slot = (slot + 1) & (cap - 1);
+            }
             if (n < 0)
             {
-                var p = verts[old];
-                if (!double.IsFinite(p.X) || !double.IsFinite(p.Y) || !double.IsFinite(p.Z))
-                    throw new ArgumentException($"object '{o.Name}': vertex {old} is not finite");
-                if (!byPosition.TryGetValue(p, out n))
-                {
-                    n = order.Count;
-                    byPosition.Add(p, n);
-                    order.Add(p);
-                }
-                remap[old] = n;
+                table[slot] = old;
+                n = count++;
+                byNew[n] = old;
             }
-            tris[k] = n;
+            newId[old] = n;
         }
-        for (int t = 0; t < tris.Length; t += 3)
+        table = null!; // not needed past here
+        double volume6 = 0;
+        Vec3 origin = verts[idx[0]];
+        for (int t = 0; t < idx.Count; t += 3)
         {
-            int a = tris[t], b = tris[t + 1], c = tris[t + 2];
+            int a = newId[idx[t]], b = newId[idx[t + 1]], c = newId[idx[t + 2]];
             if (a == b || b == c || a == c)
                 throw new ArgumentException($"object '{o.Name}': triangle {t / 3} uses one vertex twice");
-            Vec3 pa = order[a] - origin, pb = order[b] - origin, pc = order[c] - origin;
-            var cross = (order[b] - order[a]).Cross(order[c] - order[a]);
+            Vec3 va = verts[byNew[a]], vb = verts[byNew[b]], vc = verts[byNew[c]];
+            Vec3 pa = va - origin, pb = vb - origin, pc = vc - origin;
+            var cross = (vb - va).Cross(vc - va);
             if (cross.X == 0 && cross.Y == 0 && cross.Z == 0)
                 throw new ArgumentException($"object '{o.Name}': triangle {t / 3} has zero area");
             volume6 += pa.Dot(pb.Cross(pc));
@@ -211,8 +222,9 @@ public static class ThreeMfWriter
         w.Append("\" type=\"model\" name=\""u8);
         w.AppendText(Escape(o.Name));
         w.Append("\">\n      <mesh>\n        <vertices>\n"u8);
-        foreach (var p in order)
+        for (int n = 0; n < count; n++)
         {
+            var p = verts[byNew[n]];
             w.Append("<vertex x=\""u8);
             w.Append(p.X);
             w.Append("\" y=\""u8);
@@ -222,14 +234,14 @@ public static class ThreeMfWriter
             w.Append("\"/>\n"u8);
         }
         w.Append("        </vertices>\n        <triangles>\n"u8);
-        for (int t = 0; t < tris.Length; t += 3)
+        for (int t = 0; t < idx.Count; t += 3)
         {
             w.Append("<triangle v1=\""u8);
-            w.Append(tris[t]);
+            w.Append(newId[idx[t]]);
             w.Append("\" v2=\""u8);
-            w.Append(tris[t + 1]);
+            w.Append(newId[idx[t + 1]]);
             w.Append("\" v3=\""u8);
-            w.Append(tris[t + 2]);
+            w.Append(newId[idx[t + 2]]);
             w.Append("\"/>\n"u8);
         }
         w.Append("        </triangles>\n      </mesh>\n    </object>\n"u8);

@@ -1,3 +1,4 @@
+using PartForge.Geometry.Meshes;
 using PartForge.Geometry.Primitives;
 
 namespace PartForge.Parts.Placement;
@@ -11,24 +12,40 @@ namespace PartForge.Parts.Placement;
 public static class AssemblyBuilder
 {
     /// <summary>Every copy placed; <paramref name="exploded"/> false gives the nominal (assembled) positions.</summary>
-    public static IReadOnlyList<PlacedPart> Build(PartSet set, bool exploded = true, IReadOnlyCollection<string>? onlyParts = null)
+    public static IReadOnlyList<PlacedPart> Build(PartSet set, bool exploded = true, IReadOnlyCollection<string>? onlyParts = null) =>
+        Places(set, exploded, onlyParts).Select(p => new PlacedPart(p.Name, p.Instance, p.Part, p.PlacedMesh())).ToList();
+
+    /// <summary>Where every copy goes, without moving any mesh yet (<see cref="PartPlace.PlacedMesh"/> does that
+    /// for one copy): a writer can then hold one placed copy at a time.</summary>
+    public static IReadOnlyList<PartPlace> Places(PartSet set, bool exploded = true, IReadOnlyCollection<string>? onlyParts = null)
     {
         ArgumentNullException.ThrowIfNull(set);
-        var result = new List<PlacedPart>();
+        var result = new List<PartPlace>();
         foreach (var part in set.Parts)
         {
             if (onlyParts is not null && !onlyParts.Contains(part.Name)) continue;
             foreach (var inst in part.Instances)
-            {
-                double dz = exploded ? inst.ExplodeRank * set.ExplodeMm : 0;
-                var mesh = part.Mesh.Transformed(p =>
-                {
-                    var q = inst.ToMachine(new Vec2(p.X, p.Y));
-                    return new Vec3(q.X, q.Y, inst.ToMachineZ(p.Z) + dz);
-                });
-                result.Add(new PlacedPart(part.Name, inst.Index, part, mesh));
-            }
+                result.Add(new PartPlace(part.Name, inst.Index, part, inst, exploded ? inst.ExplodeRank * set.ExplodeMm : 0));
         }
         return result;
     }
+}
+
+/// <summary>Where one copy of a part goes in the machine frame.</summary>
+/// <param name="Name">Contract part name.</param>
+/// <param name="Instance">Copy index (<see cref="PartInstance.Index"/>).</param>
+/// <param name="Part">The part model.</param>
+/// <param name="Copy">The copy's placement.</param>
+/// <param name="ExplodeDzMm">Extra z shift of the exploded view, mm.</param>
+public sealed record PartPlace(string Name, int Instance, PartModel Part, PartInstance Copy, double ExplodeDzMm)
+{
+    /// <summary>"former-3" for copies, the bare name for single parts; unique within an assembly.</summary>
+    public string ObjectName => Part.Quantity > 1 ? $"{Name}-{Instance}" : Name;
+
+    /// <summary>The part's mesh moved into the machine frame (a new mesh each call).</summary>
+    public Mesh PlacedMesh() => Part.Mesh.Transformed(p =>
+    {
+        var q = Copy.ToMachine(new Vec2(p.X, p.Y));
+        return new Vec3(q.X, q.Y, Copy.ToMachineZ(p.Z) + ExplodeDzMm);
+    });
 }
