@@ -49,12 +49,46 @@ internal sealed class MeshAssembly
         public long Z;
         public int Base;
         public long[] Keys = Array.Empty<long>();
+        // Directory over the keys' high words (the packed x; the keys sort by it first, as signed values): bucket
+        // b holds the keys whose high word h has h - h0 in [b w, (b + 1) w), from index _start[b] to
+        // _start[b + 1]; about 8 keys a bucket, so a look-up is a division and a short binary search (half a
+        // byte a vertex).
+        private int[] _start = [0, 0];
+        private long _x0, _w = 1;
+
+        public void SetKeys(long[] keys)
+        {
+            Keys = keys;
+            if (keys.Length == 0) return;
+            long x0 = keys[0] >> 32, x1 = keys[^1] >> 32;
+            int buckets = Math.Max(1, keys.Length / 8);
+            _x0 = x0;
+            _w = Math.Max(1, (x1 - x0) / buckets + 1);
+            int nb = (int)((x1 - x0) / _w) + 1;
+            _start = new int[nb + 1];
+            int i = 0;
+            for (int b = 0; b <= nb; b++)
+            {
+                long xb = x0 + b * _w; // first x of bucket b
+                while (i < keys.Length && (keys[i] >> 32) < xb) i++;
+                _start[b] = i;
+            }
+            _start[nb] = keys.Length;
+        }
 
         public bool TryGet(long key, out int id)
         {
-            int i = Array.BinarySearch(Keys, key);
-            id = i >= 0 ? Base + i : -1;
-            return i >= 0;
+            id = -1;
+            if (Keys.Length == 0) return false;
+            long x = (key >> 32) - _x0;
+            if (x < 0) return false;
+            long b = x / _w;
+            if (b >= _start.Length - 1) return false;
+            int lo = _start[b], n = _start[b + 1] - lo;
+            int i = Array.BinarySearch(Keys, lo, n, key);
+            if (i < 0) return false;
+            id = Base + i;
+            return true;
         }
     }
 
@@ -188,7 +222,7 @@ internal sealed class MeshAssembly
         int m = 0;
         for (int i = 0; i < keys.Length; i++) if (m == 0 || keys[i] != keys[m - 1]) keys[m++] = keys[i];
         if (m != keys.Length) Array.Resize(ref keys, m);
-        lv.Keys = keys;
+        lv.SetKeys(keys);
         lv.Base = _vertices.Count;
         foreach (long k in keys)
         {
