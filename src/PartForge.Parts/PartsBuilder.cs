@@ -133,6 +133,28 @@ public static partial class PartsBuilder
         return new LayeredSolid(result);
     }
 
+    /// <summary>
+    /// Whether two cuts of the layer may overlap, judged by circles round their centres of radius half the
+    /// larger side of their bounding box (exact for round cuts): a pattern of separate round pockets says no,
+    /// a channel running into a seat says yes. Then the layer's region is likely made by booleans rather than
+    /// assembled directly, which needs about twice the working memory. For planning work only, never for
+    /// geometry.
+    /// </summary>
+    public static bool CutsMayOverlap(ExactLayer layer)
+    {
+        ArgumentNullException.ThrowIfNull(layer);
+        if (layer.Cuts.Count < 2) return false;
+        var c = layer.Cuts.Select(Box).Select(b => (X: (b.X0 + b.X1) / 2, Y: (b.Y0 + b.Y1) / 2, R: 0.5 * Math.Max(b.X1 - b.X0, b.Y1 - b.Y0)))
+            .OrderBy(x => x.X - x.R).ToArray();
+        for (int i = 0; i < c.Length; i++)
+            for (int j = i + 1; j < c.Length && c[j].X - c[j].R <= c[i].X + c[i].R; j++)
+            {
+                double dx = c[i].X - c[j].X, dy = c[i].Y - c[j].Y, rr = c[i].R + c[j].R;
+                if (dx * dx + dy * dy < rr * rr) return true;
+            }
+        return false;
+    }
+
     /// <summary>True when the cuts' bounding boxes are pairwise apart (then no union is needed).</summary>
     private static bool PairwiseApart(IReadOnlyList<Contour> cuts)
     {
