@@ -243,7 +243,8 @@ print(json.dumps(out))
         var bad = CutSheet.Of("p", Profile.Of(Contour.Rectangle(new Vec2(0, 0), 10, 10, 0), Contour.FullCircle(new Vec2(0, 0), 0.05)), 0.15);
         Assert.Throws<KerfCompensationException>(() => DxfWriter.WriteFile(path, bad));
         Assert.Equal(Write(SamplePlate.Sheet()), File.ReadAllBytes(path)); // the previous file is untouched
-        Assert.Empty(Directory.GetFiles(Path.GetDirectoryName(path)!, "*.partial"));
+        // Only this file's temporary name (".<name>.<random>.partial"): other tests write beside it at the same time.
+        Assert.Empty(Directory.GetFiles(Path.GetDirectoryName(path)!, "." + Path.GetFileName(path) + ".*.partial"));
         File.Delete(path);
     }
 
