@@ -11,7 +11,8 @@ namespace PartForge.Export.Pipeline;
 /// parts), in the machine's part order and copy order. For a visual check in a slicer or viewer, not for printing.
 /// </summary>
 /// <remarks>
-/// The placement is baked into each object's mesh (made copy by copy as the writer goes) (machine-frame millimetres) and every build item is untransformed.
+/// The placement is baked into each object's mesh (machine-frame millimetres; each copy is made when the writer comes to it)
+/// and every build item is untransformed.
 /// Sharing one mesh among identical copies would need one object with several build items, and build items carry no
 /// names in the 3MF Core Specification, so the copies could not be told apart; a viewer that ignores build
 /// transforms also shows the baked machine correctly. The placements are proper motions (a copy turned over is

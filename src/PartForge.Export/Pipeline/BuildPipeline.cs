@@ -250,9 +250,9 @@ public static class BuildPipeline
     {
         if (ev.Parts == null) return null;
         var list = parts.ToArray();
-        // Mesh the parts side by side on the machine's cores, largest first and never more than half of the
-        // triangles at once (MeshSchedule; each mesh is made once, thread-safe, and is a pure function of its
-        // part); then report in part order, so the first problem named is always the same one.
+        // Mesh the parts side by side on the machine's cores, heaviest first and never more than half of the
+        // estimated work at once (MeshSchedule; each mesh is made once, thread-safe, and is a pure function of
+        // its part); then report in part order, so the first problem named is always the same one.
         MeshSchedule.MeshAll(list, ev.Design.Mesh.ChordalTolerance);
         foreach (var p in list)
         {
