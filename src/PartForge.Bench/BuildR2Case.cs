@@ -31,7 +31,7 @@ public sealed class BuildR2Case : IBenchCase
     {
         var r = BuildPipeline.Build(new BuildRequest { DesignPath = _design, OutputDir = Path.Combine(_dir, "out"), Formats = "stl", Parts = "rotor" });
         if (r.Status != PipelineStatus.Ok) throw new InvalidOperationException("build-r2: " + string.Join("; ", r.Problems));
-        var figures = new Dictionary<string, double> { ["triangles"] = r.Evaluation!.Parts!.Get("rotor").Mesh.TriangleCount };
+        var figures = new Dictionary<string, double> { ["triangles"] = r.Evaluation!.Parts!.Get(PartForge.Design.Parts.PartId.Rotor).Mesh.TriangleCount };
         foreach (var (stage, ms) in r.Timings) figures[stage + "_ms"] = ms;
         return figures;
     }

@@ -13,7 +13,7 @@ namespace PartForge.Bench;
 /// </summary>
 public sealed class ChecksAllBench : IBenchCase
 {
-    private Design.Model.Design _design = new();
+    private PartForge.Design.Machines.MachineModel _design = ElectricalBenchCase.Largest();
     private ElectricalResult? _electrical;
     private PartSet? _parts;
 
@@ -25,7 +25,7 @@ public sealed class ChecksAllBench : IBenchCase
     {
         _design = ElectricalBenchCase.Largest();
         _electrical = ElectricalEngine.Evaluate(_design);
-        _parts = PartsBuilder.Build(_design, _electrical, Precision.FromChordalTolerance(_design.Mesh.ChordalTolerance));
+        _parts = PartsBuilder.Build(_design, _electrical);
     }
 
     public IReadOnlyDictionary<string, double> Run()

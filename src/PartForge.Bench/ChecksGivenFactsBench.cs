@@ -12,7 +12,7 @@ namespace PartForge.Bench;
 /// </summary>
 public sealed class ChecksGivenFactsBench : IBenchCase
 {
-    private Design.Model.Design _design = new();
+    private PartForge.Design.Machines.MachineModel _design = ElectricalBenchCase.Largest();
     private ElectricalFacts? _facts;
     private IReadOnlyList<PartView> _views = Array.Empty<PartView>();
 
@@ -24,7 +24,7 @@ public sealed class ChecksGivenFactsBench : IBenchCase
     {
         _design = ElectricalBenchCase.Largest();
         var e = ElectricalEngine.Evaluate(_design);
-        var parts = PartsBuilder.Build(_design, e, Precision.FromChordalTolerance(_design.Mesh.ChordalTolerance));
+        var parts = PartsBuilder.Build(_design, e);
         _facts = CheckRunner.FactsFrom(_design, e) ?? throw new InvalidOperationException("the bench design's coil did not resolve");
         _views = CheckRunner.ViewsFrom(parts);
     }

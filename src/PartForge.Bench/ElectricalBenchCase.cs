@@ -11,7 +11,7 @@ namespace PartForge.Bench;
 /// </summary>
 public sealed class ElectricalBenchCase : IBenchCase
 {
-    private M.Design _design = new();
+    private PartForge.Design.Machines.MachineModel _design = Largest();
 
     public string Name => "electrical-eval";
 
@@ -31,7 +31,10 @@ public sealed class ElectricalBenchCase : IBenchCase
     }
 
     /// <summary>The invented bench machine.</summary>
-    public static M.Design Largest() => new()
+    public static PartForge.Design.Machines.MachineModel Largest() => PartForge.Design.Machines.MachineModel.From(LargestDesign());
+
+    /// <summary>The invented bench machine as a design file would give it.</summary>
+    public static M.Design LargestDesign() => new()
     {
         Name = "bench-large",
         Machine = new Machine { Layout = "dual-rotor", Poles = 24, Coils = 18, Phases = 3, Connection = "star", RatedRpm = 300, MaxRpm = 600 },

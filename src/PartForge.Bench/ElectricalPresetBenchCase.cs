@@ -10,7 +10,7 @@ namespace PartForge.Bench;
 /// </summary>
 public sealed class ElectricalPresetBenchCase : IBenchCase
 {
-    private PartForge.Design.Model.Design _design = new();
+    private PartForge.Design.Machines.MachineModel? _design;
 
     public string Name => "electrical-preset";
 
@@ -19,23 +19,23 @@ public sealed class ElectricalPresetBenchCase : IBenchCase
     public void Setup()
     {
         var designs = PresetLibrary.All
-            .Select(p => DesignLoader.LoadText(p.Text, p.Name + ".yaml").Design)
+            .Select(p => DesignLoader.LoadText(p.Text, p.Name + ".yaml").Machine)
             .Where(d => d is not null)
             .Select(d => d!)
             .ToList();
         _design = designs
-            .OrderByDescending(d => d.Machine.Poles * d.Machine.Coils * (d.Machine.Layout == "single-rotor" ? 1 : 2))
+            .OrderByDescending(d => d.Poles * d.CoilsPerStator * (d.Layout.Rotors.Count + d.Layout.Stators.Count - 1))
             .ThenBy(d => d.Name, StringComparer.Ordinal)
             .FirstOrDefault() ?? ElectricalBenchCase.Largest();
     }
 
     public IReadOnlyDictionary<string, double> Run()
     {
-        var r = ElectricalEngine.Evaluate(_design);
+        var r = ElectricalEngine.Evaluate(_design!);
         return new Dictionary<string, double>
         {
-            ["poles"] = _design.Machine.Poles,
-            ["coils"] = _design.Machine.Coils,
+            ["poles"] = _design!.Poles,
+            ["coils"] = _design.CoilsPerStator,
             ["line_emf_rms_v"] = r.LineEmfRmsV,
         };
     }

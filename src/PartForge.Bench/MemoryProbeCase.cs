@@ -36,11 +36,11 @@ public sealed class MemoryProbeCase : IBenchCase
             string design = Path.Combine(dir, "memory.yaml");
             File.WriteAllText(design, ScalingDesigns.Yaml(pockets, ScalingDesigns.CoilsFor(pockets), tol));
             long a0 = Live();
-            var d = DesignLoader.Load(design).Design!;
+            var d = DesignLoader.Load(design).Machine!;
             long a1 = Live();
             var el = ElectricalEngine.Evaluate(d);
             long a2 = Live();
-            var parts = PartsBuilder.Build(d, el, Precision.FromChordalTolerance(d.Mesh.ChordalTolerance));
+            var parts = PartsBuilder.Build(d, el);
             long a3 = Live();
             var checks = CheckRunner.Run(d, el, parts);
             long a4 = Live();

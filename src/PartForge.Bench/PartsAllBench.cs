@@ -11,7 +11,7 @@ namespace PartForge.Bench;
 /// </summary>
 public sealed class PartsAllBench : IBenchCase
 {
-    private Design.Model.Design _design = new();
+    private PartForge.Design.Machines.MachineModel _design = ElectricalBenchCase.Largest();
     private ElectricalResult? _electrical;
     private Precision _precision = Precision.FromChordalTolerance(0.01);
 
@@ -23,7 +23,7 @@ public sealed class PartsAllBench : IBenchCase
     {
         _design = ElectricalBenchCase.Largest();
         _electrical = ElectricalEngine.Evaluate(_design);
-        _precision = Precision.FromChordalTolerance(_design.Mesh.ChordalTolerance);
+        _precision = _design.Precision;
     }
 
     public IReadOnlyDictionary<string, double> Run()

@@ -89,7 +89,7 @@ public sealed class ScalingBuildCase : IBenchCase
         try
         {
             // Stage split (one evaluation by hand, stage by stage, best of 3).
-            var d = DesignLoader.Load(design).Design ?? throw new InvalidOperationException("scaling design does not load: " + string.Join("; ", DesignLoader.Load(design).Errors));
+            var d = DesignLoader.Load(design).Machine ?? throw new InvalidOperationException("scaling design does not load: " + string.Join("; ", DesignLoader.Load(design).Errors));
             double eMs = double.MaxValue, pMs = double.MaxValue, cMs = double.MaxValue, sMs = double.MaxValue, bMs = double.MaxValue;
             int tris = 0;
             double meshMb = 0, stlMb = 0;
@@ -100,13 +100,13 @@ public sealed class ScalingBuildCase : IBenchCase
                 var el = ElectricalEngine.Evaluate(d);
                 eMs = Math.Min(eMs, CpuMs() - c0);
                 c0 = CpuMs();
-                var parts = PartsBuilder.Build(d, el, Precision.FromChordalTolerance(d.Mesh.ChordalTolerance));
+                var parts = PartsBuilder.Build(d, el);
                 tris = parts.Parts.Sum(p => p.Mesh.TriangleCount); // meshes are made on first use: force them here
                 pMs = Math.Min(pMs, CpuMs() - c0);
                 c0 = CpuMs();
                 CheckRunner.Run(d, el, parts);
                 cMs = Math.Min(cMs, CpuMs() - c0);
-                var printed = parts.Parts.Where(p => p.Process == PartProcess.Print).ToArray();
+                var printed = parts.Parts.Where(p => p.Process == PartForge.Design.Machines.PartProcess.Print).ToArray();
                 c0 = CpuMs();
                 long bytes = 0;
                 foreach (var p in printed) bytes += StlWriter.ToBinaryBytes(p.Mesh, p.Name).Length;

@@ -74,9 +74,9 @@ public sealed class ScalingCheckCase : IBenchCase
 
     private static (double Ms, int Checks) Measure(string yaml, CheckOptions options)
     {
-        var d = DesignLoader.LoadText(yaml, "scaling.yaml").Design ?? throw new InvalidOperationException("scaling design does not load: " + string.Join("; ", DesignLoader.LoadText(yaml, "scaling.yaml").Errors));
+        var d = DesignLoader.LoadText(yaml, "scaling.yaml").Machine ?? throw new InvalidOperationException("scaling design does not load: " + string.Join("; ", DesignLoader.LoadText(yaml, "scaling.yaml").Errors));
         var el = ElectricalEngine.Evaluate(d);
-        var parts = PartsBuilder.Build(d, el, Precision.FromChordalTolerance(d.Mesh.ChordalTolerance));
+        var parts = PartsBuilder.Build(d, el);
         double best = double.MaxValue;
         int count = 0;
         for (int k = 0; k < 2; k++)

@@ -1,18 +1,33 @@
+using PartForge.Design.Parts;
+
 namespace PartForge.Checks;
 
 /// <summary>
 /// The result of one check. <see cref="Margin"/> is signed so that positive means "on the good side of the
 /// limit" whatever the direction of the check: value - limit for a minimum (a clearance), limit - value for a
 /// maximum (a stress). <see cref="Message"/> says what was found and, unless the check passes, the change
-/// that fixes it, computed by solving for the limiting value.
+/// that fixes it, computed by solving for the limiting value. A result is keyed by (id, part, counterpart):
+/// no two results of one report share all three.
 /// </summary>
 public sealed record CheckResult
 {
     /// <summary>Stable identifier, one of <see cref="CheckIds"/>.</summary>
     public required string Id { get; init; }
 
-    /// <summary>Part name from the contract (rotor, rotor-front, stator, former, ...), or "machine".</summary>
-    public required string Part { get; init; }
+    /// <summary>The part the check is about; null for the machine as a whole.</summary>
+    public required PartId? Part { get; init; }
+
+    /// <summary>The other part of a pair (the stator facing a rotor, the stationary part a rotating one passes); null when there is none.</summary>
+    public PartId? Counterpart { get; init; }
+
+    /// <summary>The part's contract name, or "machine".</summary>
+    public string PartName => Part?.Name ?? MachineName;
+
+    /// <summary>The counterpart's contract name, or null.</summary>
+    public string? CounterpartName => Counterpart?.Name;
+
+    /// <summary>What a machine-level result names as its part.</summary>
+    public const string MachineName = "machine";
 
     public required CheckStatus Status { get; init; }
     public required double Value { get; init; }

@@ -1,6 +1,7 @@
 using PartForge.Checks.Inputs;
+using PartForge.Design.Machines;
+using PartForge.Design.Parts;
 using PartForge.Electrical;
-using PartForge.Electrical.Field;
 using PartForge.Parts;
 
 namespace PartForge.Checks;
@@ -8,57 +9,45 @@ namespace PartForge.Checks;
 public static partial class CheckRunner
 {
     /// <summary>
-    /// Every check on a design with the electrical engine's results and the part builders' parts: the
-    /// entry point of the `check` and `build` commands.
+    /// Every check on a machine with the electrical engine's results and the part builders' parts: the entry
+    /// point of the stage orchestrator. <paramref name="parts"/> is null when no parts could be made (the coil
+    /// could not be resolved): then only the electrical engine's diagnostics are reported, with one failing check
+    /// that says why nothing else could run. The electrical diagnostics become check results here and only here.
     /// </summary>
-    public static CheckReport Run(Design.Model.Design design, ElectricalResult electrical, PartSet parts, CheckOptions? options = null)
+    public static CheckReport Run(MachineModel design, ElectricalResult electrical, PartSet? parts, CheckOptions? options = null)
     {
-        var facts = FactsFrom(design, electrical);
-        var views = ViewsFrom(parts);
+        var facts = parts is null ? null : FactsFrom(design, electrical);
         if (facts is null)
         {
-            // Without a resolved coil the geometry checks cannot run; the electrical errors say why.
-            var list = electrical.Diagnostics.Select(d => new CheckResult
-            {
-                Id = $"{CheckIds.Electrical}-{d.Id}", Part = "machine",
-                Status = d.Severity == Electrical.DiagnosticSeverity.Error ? CheckStatus.Fail : CheckStatus.Warn,
-                Value = 0, Limit = 0, Unit = "", Margin = 0, Message = d.Message, Where = new CheckLocation(d.Key),
-                Basis = "electrical engine diagnostic",
-            }).ToList();
+            var list = DiagnosticChecks(electrical).ToList();
             list.Add(new CheckResult
             {
-                Id = "coil-unresolved", Part = "former", Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0,
-                Message = "the coil could not be resolved, so no clearance check could run; fix the electrical errors first",
+                Id = "coil-unresolved", Part = PartId.Former, Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0,
+                Message = "the coil could not be resolved, so no part could be made and no clearance check could run; fix the electrical errors first",
             });
-            return new CheckReport(list.Concat(PartErrors(parts)).ToList());
+            return new CheckReport(list.Concat(parts is null ? [] : PartErrors(parts)).ToList());
         }
-        var report = Run(design, facts, views, options);
-        return new CheckReport(report.Checks.Concat(PartErrors(parts)).ToList());
+        var report = Run(design, facts, ViewsFrom(parts!), options);
+        return new CheckReport(report.Checks.Concat(PartErrors(parts!)).ToList());
     }
 
+    /// <summary>The electrical engine's diagnostics as checks: errors fail, warnings warn.</summary>
+    public static IEnumerable<CheckResult> DiagnosticChecks(ElectricalResult e) =>
+        Rules.ElectricalRules.Checks(e.Diagnostics.Select(d => (d.Id, d.Severity == Electrical.DiagnosticSeverity.Error, d.Key, d.Message)));
+
     /// <summary>The checker's view of the electrical results (null when the coil is unresolved).</summary>
-    public static ElectricalFacts? FactsFrom(Design.Model.Design design, ElectricalResult e)
+    public static ElectricalFacts? FactsFrom(MachineModel design, ElectricalResult e)
     {
         if (e.Coil is not { Outline: { } outline } coil) return null;
         // Which operating point: a machine with a timing sensor is driven as a motor (the sensor switches
         // the coils), one without is a generator into operation.load_resistance. Both at rated rpm.
-        bool motor = design.Sensor.Kind != "none" && e.Motor is not null;
+        bool motor = design.Sensor.Kind != SensorKind.None && e.Motor is not null;
         double j = motor ? e.Motor!.CurrentDensityAtRatedAPerMm2 : e.Generator?.CurrentDensityAPerMm2 ?? 0;
         string point = motor
-            ? $"motor operating point (rated {Judge.F(design.Machine.RatedRpm)} rpm, operation.supply_voltage {Judge.F(design.Operation.SupplyVoltage)} V)"
-            : $"generator operating point (rated {Judge.F(design.Machine.RatedRpm)} rpm into operation.load_resistance {Judge.F(design.Operation.LoadResistance)} ohm)";
-        var pulls = new Dictionary<string, double>();
-        // Only dual-rotor machines feel a net axial pull on a rotor (the coreless stator holds no iron; a
-        // magnet's attraction to its own back iron is internal to the rotor): skip the field work otherwise.
-        MagneticPullResult? pull = null;
-        if (design.Machine.Layout == "dual-rotor")
-        {
-            try { pull = MagneticPull.Compute(design); }
-            catch (ArgumentException) { pull = null; }
-        }
-        var stack = Design.Stack.AxialStack.From(design);
-        foreach (var rotor in stack.Slabs.Where(s => s.Kind == Design.Stack.SlabKind.Rotor).Select(s => s.Owner).Distinct())
-            pulls[rotor] = pull?.RotorToRotorN ?? 0;
+            ? $"motor operating point (rated {Judge.F(design.RatedRpm)} rpm, operation.supply_voltage {Judge.F(design.Operation.SupplyVoltageV)} V)"
+            : $"generator operating point (rated {Judge.F(design.RatedRpm)} rpm into operation.load_resistance {Judge.F(design.Operation.LoadResistanceOhm)} ohm)";
+        // The pull is the electrical engine's (only dual-rotor machines feel a net axial pull on a rotor).
+        var pulls = design.Layout.Rotors.ToDictionary(r => r, _ => e.Pull?.RotorToRotorN ?? 0);
         return new ElectricalFacts
         {
             Turns = coil.Turns,
@@ -75,7 +64,7 @@ public static partial class CheckRunner
 
     /// <summary>The checker's view of the parts.</summary>
     public static IReadOnlyList<PartView> ViewsFrom(PartSet parts) =>
-        parts.Parts.Select(p => new PartView(p.Name, p.Process, p.Material, p.ExactLayers, p.Features, p.Instances, p.Rotating)).ToArray();
+        parts.Parts.Select(p => new PartView(p.Id, p.Process, p.Material, p.ExactLayers, p.Features, p.Instances, p.Rotating)).ToArray();
 
     private static IEnumerable<CheckResult> PartErrors(PartSet parts) =>
         parts.Diagnostics.Where(d => d.Severity == Parts.DiagnosticSeverity.Error).Select(d => new CheckResult

@@ -1,6 +1,6 @@
 using PartForge.Checks.Inputs;
 using PartForge.Checks.Rules;
-using PartForge.Design.Stack;
+using PartForge.Design.Machines;
 
 namespace PartForge.Checks;
 
@@ -10,11 +10,10 @@ namespace PartForge.Checks;
 /// </summary>
 public static partial class CheckRunner
 {
-    public static CheckReport Run(Design.Model.Design design, ElectricalFacts electrical, IReadOnlyList<PartView> parts, CheckOptions? options = null)
+    public static CheckReport Run(MachineModel design, ElectricalFacts electrical, IReadOnlyList<PartView> parts, CheckOptions? options = null)
     {
         options ??= CheckOptions.Default;
-        var stack = AxialStack.From(design);
-        var c = new CheckContext(design, stack, electrical, parts, options.SweepStepDeg);
+        var c = new CheckContext(design, electrical, parts, options.SweepStepDeg);
         var results = new List<CheckResult>();
         Collect(results, "stack-up", () => GapRules.Run(c));
         Collect(results, "rotation sweep", () => SweepRules.Run(c));
@@ -35,7 +34,7 @@ public static partial class CheckRunner
         {
             into.Add(new CheckResult
             {
-                Id = "check-error", Part = "machine", Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0,
+                Id = "check-error", Part = null, Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0,
                 Message = $"the {group} checks could not be evaluated for this design ({ex.Message}); treat it as failed",
             });
         }

@@ -1,6 +1,6 @@
 using System.Globalization;
 using System.Numerics;
-using PartForge.Design.Stack;
+using PartForge.Design.Machines;
 using PartForge.Electrical.Coils;
 using PartForge.Electrical.Field;
 using PartForge.Electrical.Flux;
@@ -23,64 +23,55 @@ namespace PartForge.Electrical;
 /// </summary>
 public static class ElectricalEngine
 {
-    /// <summary>Evaluates a design with the default quadrature.</summary>
-    public static ElectricalResult Evaluate(PartForge.Design.Model.Design d) => Evaluate(d, FluxQuadrature.Default);
+    /// <summary>Evaluates a machine with the default quadrature.</summary>
+    public static ElectricalResult Evaluate(MachineModel machine) => Evaluate(machine, FluxQuadrature.Default);
 
-    /// <summary>Evaluates a design with the given quadrature (tests use <see cref="FluxQuadrature.Fine"/> to check convergence).</summary>
-    public static ElectricalResult Evaluate(PartForge.Design.Model.Design d, FluxQuadrature q)
+    /// <summary>Evaluates a machine with the given quadrature (tests use <see cref="FluxQuadrature.Fine"/> to check convergence).</summary>
+    public static ElectricalResult Evaluate(MachineModel machine, FluxQuadrature q)
     {
+        ArgumentNullException.ThrowIfNull(machine);
         var diags = new List<Diagnostic>();
         try
         {
-            return Core(d, q, diags);
+            return Core(machine, q, diags);
         }
         catch (ArgumentException ex)
         {
             // A value outside what a kernel primitive accepts (e.g. a zero radius): report it, do not crash.
             diags.Add(new Diagnostic("electrical-unsupported", DiagnosticSeverity.Error, "coils",
                 "the electrical model could not be built from these values (" + ex.Message + "); check coils and magnets sizes."));
-            return Empty(d, diags, WindingLayout.For(d.Machine.Coils, d.Machine.Poles, d.Machine.Phases), 0, null, null);
+            return Empty(machine, diags, WindingLayout.For(machine.CoilsPerStator, machine.Poles, machine.Phases), 0, null);
         }
     }
 
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
-    private static ElectricalResult Core(PartForge.Design.Model.Design d, FluxQuadrature q, List<Diagnostic> diags)
+    private static ElectricalResult Core(MachineModel d, FluxQuadrature q, List<Diagnostic> diags)
     {
-        var m = d.Machine;
-        int poles = m.Poles, coils = m.Coils, phases = m.Phases;
-        string conn = m.Connection ?? (phases == 3 ? "star" : "series");
-        if (phases == 3 && conn is not ("star" or "delta"))
-            diags.Add(new Diagnostic("connection-invalid", DiagnosticSeverity.Error, "machine.connection", $"machine.connection '{conn}' does not apply to 3 phases; use star or delta."));
-        if (phases == 1 && conn is not ("series" or "parallel"))
-            diags.Add(new Diagnostic("connection-invalid", DiagnosticSeverity.Error, "machine.connection", $"machine.connection '{conn}' does not apply to 1 phase; use series or parallel."));
+        int poles = d.Poles, coils = d.CoilsPerStator, phases = d.Phases;
+        var conn = d.Connection;
 
         var layout = WindingLayout.For(coils, poles, phases);
         if (!layout.IsValid)
             diags.Add(new Diagnostic("winding-invalid", DiagnosticSeverity.Error, "machine.coils", layout.Reason!));
 
-        var stack = AxialStack.From(d);
+        var stack = d.Stack;
         double gap = stack.MagneticGapMm;
         if (!(gap > 0))
             diags.Add(new Diagnostic("magnetic-gap", DiagnosticSeverity.Error, "gap.air_gap",
                 string.Format(Inv, "the magnet faces reach the copper (magnetic gap {0:0.###} mm); raise gap.air_gap or former.flange.", gap)));
 
-        double? br = MagnetGrades.FromDesign(d.Magnets, diags);
-        var mg = MagnetGeometry.FromDesign(d, diags);
-        var wire = WireSpec.FromDesign(d.Coils, diags);
-        var spec = wire is null ? null : CoilSpec.FromDesign(d, mg, wire, diags);
-        if (!(m.RatedRpm > 0))
-            diags.Add(new Diagnostic("rated-rpm", DiagnosticSeverity.Error, "machine.rated_rpm", "machine.rated_rpm must be positive."));
+        var wire = WireSpec.From(d.Coils.Wire, d.Coils.EnamelGrade);
+        var spec = CoilSpec.From(d, wire, diags);
 
-        bool fieldOk = br is not null && mg is not null && gap > 0 && layout.IsValid && poles >= 2 && poles % 2 == 0 && m.RatedRpm > 0
-                       && !diags.Any(x => x.Severity == DiagnosticSeverity.Error && x.Id.StartsWith("magnet", StringComparison.Ordinal));
-        RotorField? field = fieldOk ? RotorField.FromDesign(d, mg!, br!.Value, stack, diags, q.FarFactor) : null;
+        bool fieldOk = gap > 0 && layout.IsValid && poles >= 2 && poles % 2 == 0;
+        RotorField? field = fieldOk ? RotorField.From(d, q.FarFactor) : null;
 
-        if (spec is null) return Empty(d, diags, layout, gap, br, mg, field);
+        if (spec is null) return Empty(d, diags, layout, gap, field);
 
         int p = Math.Max(1, poles / 2);
-        int statorFactor = m.Layout == "dual-stator" ? 2 : 1;
-        bool parallel = phases == 1 && conn == "parallel";
+        int statorFactor = d.Layout.Stators.Count;
+        bool parallel = phases == 1 && conn == Connection.Parallel;
         int inSeries = (phases == 3 ? coils / 3 : parallel ? 1 : coils) * statorFactor;
         int paths = parallel ? coils : 1;
         double mult = statorFactor * (parallel ? 1.0 / coils : 1.0);
@@ -89,13 +80,13 @@ public static class ElectricalEngine
         int turns;
         bool solved = false;
         if (d.Coils.Turns is { } nGiven && nGiven >= 1) turns = nGiven;
-        else if (d.Coils.TargetEmf is { } target)
+        else if (d.Coils.Target is { } target)
         {
             if (field is null || !layout.IsValid)
             {
                 diags.Add(new Diagnostic("target-emf-unsolvable", DiagnosticSeverity.Error, "coils.target_emf",
                     "coils.target_emf cannot be solved while the magnets, gap or winding have errors; fix those or give coils.turns."));
-                return Empty(d, diags, layout, gap, br, mg, field);
+                return Empty(d, diags, layout, gap, field);
             }
             turns = SolveTurns(spec, field, layout, q, mult, target, diags);
             solved = true;
@@ -103,7 +94,7 @@ public static class ElectricalEngine
         else
         {
             diags.Add(new Diagnostic("coil-turns-missing", DiagnosticSeverity.Error, "coils.turns", "give coils.turns, or coils.target_emf to have the turns solved."));
-            return Empty(d, diags, layout, gap, br, mg, field);
+            return Empty(d, diags, layout, gap, field);
         }
 
         var coil = spec.Wind(turns);
@@ -116,7 +107,7 @@ public static class ElectricalEngine
 
         if (field is null || !layout.IsValid)
         {
-            var e = Empty(d, diags, layout, gap, br, mg, field);
+            var e = Empty(d, diags, layout, gap, field);
             return e with
             {
                 Coil = coilResult,
@@ -129,7 +120,7 @@ public static class ElectricalEngine
         }
 
         var series = CoilFlux.Compute(field, coil.Outline, turns, q);
-        double w = 2 * Math.PI * m.RatedRpm / 60;
+        double w = 2 * Math.PI * d.RatedRpm / 60;
         var phaseNames = phases == 3 ? new[] { 'A', 'B', 'C' } : new[] { 'A' };
         var k = phaseNames.Select(x => PhaseHarmonics(series, layout, x, mult)).ToArray(); // per rad/s
         Complex[] line = LineHarmonics(k, series.Orders, phases, conn);
@@ -150,7 +141,7 @@ public static class ElectricalEngine
 
         double ke = lineRmsPerW * 2 * Math.PI * 1000 / 60;
         double kt = phases == 3 ? Math.Sqrt(3) * line[0].Magnitude / Math.Sqrt(2) : k[0][0].Magnitude / Math.Sqrt(2);
-        double wMax = 2 * Math.PI * m.MaxRpm / 60;
+        double wMax = 2 * Math.PI * d.MaxRpm / 60;
         double lineRmsMax = lineRmsPerW * wMax, linePeakMax = linePeakPerW * wMax;
         if (lineRmsMax > 50)
             diags.Add(new Diagnostic("emf-above-elv-ac", DiagnosticSeverity.Warning, "machine.max_rpm",
@@ -185,38 +176,39 @@ public static class ElectricalEngine
         int fine = 720;
         if (phases == 3)
         {
-            double ry = conn == "star" ? ohmPhHot : ohmPhHot / 3, ly = conn == "star" ? lPh : lPh / 3;
-            gen = OperatingPoints.Generator(3, lineRms / Math.Sqrt(3), ry, ly, op.LoadResistance, m.RatedRpm, p,
-                conn == "star" ? 1 : 1 / Math.Sqrt(3), wire!.CopperAreaMm2);
-            Complex[][] pairs = conn == "star"
+            bool star = conn == Connection.Star;
+            double ry = star ? ohmPhHot : ohmPhHot / 3, ly = star ? lPh : lPh / 3;
+            gen = OperatingPoints.Generator(3, lineRms / Math.Sqrt(3), ry, ly, op.LoadResistanceOhm, d.RatedRpm, p,
+                star ? 1 : 1 / Math.Sqrt(3), wire.CopperAreaMm2);
+            Complex[][] pairs = star
                 ? new[] { Sub(k[0], k[1]), Sub(k[1], k[2]), Sub(k[2], k[0]) }
                 : new[] { NoTriplen(k[0], series.Orders), NoTriplen(k[1], series.Orders), NoTriplen(k[2], series.Orders) };
             var pw = pairs.Select(pp => HarmonicSynth.Sample(pp, series.Orders, fine)).ToArray();
             var kc = new double[fine];
             for (int i = 0; i < fine; i++) kc[i] = Math.Max(Math.Abs(pw[0][i]), Math.Max(Math.Abs(pw[1][i]), Math.Abs(pw[2][i])));
-            mot = OperatingPoints.Motor("six-step", op.SupplyVoltage, 2 * op.SwitchDrop, conn == "star" ? 2 * ohmPhHot : 2 * ohmPhHot / 3,
-                kc, Enumerable.Repeat(true, fine).ToArray(), m.RatedRpm, conn == "star" ? 1 : 2.0 / 3, wire.CopperAreaMm2);
+            mot = OperatingPoints.Motor("six-step", op.SupplyVoltageV, 2 * op.SwitchDropV, star ? 2 * ohmPhHot : 2 * ohmPhHot / 3,
+                kc, Enumerable.Repeat(true, fine).ToArray(), d.RatedRpm, star ? 1 : 2.0 / 3, wire.CopperAreaMm2);
         }
         else
         {
             double ratio = parallel ? 1.0 / coils : 1;
-            gen = OperatingPoints.Generator(1, phaseRms, ohmPhHot, lPh, op.LoadResistance, m.RatedRpm, p, ratio, wire!.CopperAreaMm2);
-            double on = zeroCross[0] - d.Sensor.AdvanceElec;
+            gen = OperatingPoints.Generator(1, phaseRms, ohmPhHot, lPh, op.LoadResistanceOhm, d.RatedRpm, p, ratio, wire.CopperAreaMm2);
+            double on = zeroCross[0] - d.Sensor.AdvanceElecDeg;
             var kc = HarmonicSynth.Sample(k[0], series.Orders, fine);
             var cond = new bool[fine];
             for (int i = 0; i < fine; i++) cond[i] = Norm(360.0 * i / fine - on) < 180;
-            mot = OperatingPoints.Motor("pulse", op.SupplyVoltage, op.SwitchDrop, ohmPhHot, kc, cond, m.RatedRpm, ratio, wire.CopperAreaMm2);
+            mot = OperatingPoints.Motor("pulse", op.SupplyVoltageV, op.SwitchDropV, ohmPhHot, kc, cond, d.RatedRpm, ratio, wire.CopperAreaMm2);
         }
 
         double peakLink = series.PeakWb();
         return new ElectricalResult
         {
             PolePairs = p,
-            RatedRpm = m.RatedRpm,
-            ElectricalHz = p * m.RatedRpm / 60,
+            RatedRpm = d.RatedRpm,
+            ElectricalHz = p * d.RatedRpm / 60,
             MagneticGapMm = gap,
             WindingFactor = layout.WindingFactor,
-            Magnet = new MagnetResult { BrTesla = br!.Value, BrSource = d.Magnets.Br is null ? d.Magnets.Grade : "br", Geometry = mg, BackIronImageModel = field.HasBackIron },
+            Magnet = new MagnetResult { BrTesla = d.Magnets.BrTesla, BrSource = d.Magnets.BrSource, BackIronImageModel = field.HasBackIron },
             Coil = coilResult,
             CoilFluxLinkagePeakWb = peakLink,
             FluxPerTurnPeakWb = peakLink / turns,
@@ -239,12 +231,21 @@ public static class ElectricalEngine
             Generator = gen,
             Motor = mot,
             Waveforms = waves,
+            Pull = PullOf(d, diags),
             Diagnostics = diags,
         };
     }
 
+    /// <summary>The axial pull between the rotors of a dual-rotor machine (the only layout where a rotor feels a net
+    /// axial pull: a coreless stator holds no iron, and a magnet's pull on its own back iron is internal to its rotor).</summary>
+    private static MagneticPullResult? PullOf(MachineModel d, List<Diagnostic> diags)
+    {
+        if (!d.Layout.StatorBetweenRotors) return null;
+        return MagneticPull.Compute(d);
+    }
+
     private static int SolveTurns(CoilSpec spec, RotorField field, WindingLayout layout, FluxQuadrature q, double mult,
-        PartForge.Design.Model.TargetEmf target, List<Diagnostic> diags)
+        EmfTarget target, List<Diagnostic> diags)
     {
         double w = 2 * Math.PI * target.Rpm / 60;
         double Emf(int n)
@@ -259,17 +260,17 @@ public static class ElectricalEngine
             diags.Add(new Diagnostic("target-emf-unsolvable", DiagnosticSeverity.Error, "coils.target_emf", "the coil links no flux, so no number of turns reaches coils.target_emf; check the magnets and the coil position."));
             return 1;
         }
-        nCur = (int)Math.Clamp(Math.Round(target.Rms / e1), 1, 100000);
+        nCur = (int)Math.Clamp(Math.Round(target.RmsV / e1), 1, 100000);
         var seen = new HashSet<int>();
         int best = nCur;
         double bestErr = double.MaxValue;
         for (int it = 0; it < 30 && seen.Add(nCur); it++)
         {
             double e = Emf(nCur);
-            double err = Math.Abs(e - target.Rms);
+            double err = Math.Abs(e - target.RmsV);
             if (err < bestErr) { bestErr = err; best = nCur; }
             if (!(e > 0)) break;
-            int next = (int)Math.Clamp(Math.Round(nCur * target.Rms / e), 1, 100000);
+            int next = (int)Math.Clamp(Math.Round(nCur * target.RmsV / e), 1, 100000);
             if (next == nCur) break;
             nCur = next;
         }
@@ -319,14 +320,14 @@ public static class ElectricalEngine
         };
     }
 
-    private static ElectricalResult Empty(PartForge.Design.Model.Design d, List<Diagnostic> diags, WindingLayout layout, double gap, double? br, MagnetGeometry? mg, RotorField? field = null)
+    private static ElectricalResult Empty(MachineModel d, List<Diagnostic> diags, WindingLayout layout, double gap, RotorField? field = null)
     {
-        int p = Math.Max(0, d.Machine.Poles / 2);
+        int p = Math.Max(0, d.Poles / 2);
         return new ElectricalResult
         {
-            PolePairs = p, RatedRpm = d.Machine.RatedRpm, ElectricalHz = p * d.Machine.RatedRpm / 60,
+            PolePairs = p, RatedRpm = d.RatedRpm, ElectricalHz = p * d.RatedRpm / 60,
             MagneticGapMm = double.IsFinite(gap) ? gap : 0, WindingFactor = layout.IsValid ? layout.WindingFactor : 0,
-            Magnet = new MagnetResult { BrTesla = br ?? 0, BrSource = d.Magnets.Br is null ? d.Magnets.Grade : "br", Geometry = mg, BackIronImageModel = field?.HasBackIron ?? false },
+            Magnet = new MagnetResult { BrTesla = d.Magnets.BrTesla, BrSource = d.Magnets.BrSource, BackIronImageModel = field?.HasBackIron ?? false },
             CoilFluxLinkagePeakWb = 0, FluxPerTurnPeakWb = 0, CoilEmfRmsV = 0, LineEmfRmsV = 0, LineEmfPeakV = 0, KeVPerKrpm = 0, KtNmPerA = 0,
             LineEmfRmsAtMaxRpmV = 0, LineEmfPeakAtMaxRpmV = 0, Harmonics = Array.Empty<Harmonic>(), Winding = layout, Diagnostics = diags,
         };
@@ -344,10 +345,10 @@ public static class ElectricalEngine
         return r;
     }
 
-    private static Complex[] LineHarmonics(Complex[][] k, IReadOnlyList<int> orders, int phases, string conn)
+    private static Complex[] LineHarmonics(Complex[][] k, IReadOnlyList<int> orders, int phases, Connection conn)
     {
         if (phases != 3) return k[0];
-        return conn == "star" ? Sub(k[0], k[1]) : NoTriplen(k[0], orders);
+        return conn == Connection.Star ? Sub(k[0], k[1]) : NoTriplen(k[0], orders);
     }
 
     private static Complex[] Sub(Complex[] a, Complex[] b) => a.Select((x, i) => x - b[i]).ToArray();

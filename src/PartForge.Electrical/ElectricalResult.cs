@@ -1,3 +1,4 @@
+using PartForge.Electrical.Field;
 using PartForge.Electrical.Flux;
 using PartForge.Electrical.Operation;
 using PartForge.Electrical.Sensors;
@@ -69,6 +70,9 @@ public sealed record ElectricalResult
     public GeneratorPoint? Generator { get; init; }
     public MotorPoint? Motor { get; init; }
     public Waveforms? Waveforms { get; init; }
+
+    /// <summary>Axial magnetic forces on the rotors (computed where a rotor feels a net pull: dual-rotor); null otherwise.</summary>
+    public MagneticPullResult? Pull { get; init; }
 
     public required IReadOnlyList<Diagnostic> Diagnostics { get; init; }
 

@@ -1,5 +1,3 @@
-using PartForge.Electrical.Field;
-
 namespace PartForge.Electrical;
 
 /// <summary>The magnets as the engine used them.</summary>
@@ -10,9 +8,6 @@ public sealed record MagnetResult
 
     /// <summary>"br" when `magnets.br` was given, else the grade name (mid-range value).</summary>
     public required string BrSource { get; init; }
-
-    /// <summary>Resolved size and placement (null when the magnets section has an error).</summary>
-    public MagnetGeometry? Geometry { get; init; }
 
     /// <summary>True when back-iron images were part of the field model (an approximation, see RotorField).</summary>
     public required bool BackIronImageModel { get; init; }

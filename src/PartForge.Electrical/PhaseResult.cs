@@ -1,3 +1,5 @@
+using PartForge.Design.Machines;
+
 namespace PartForge.Electrical;
 
 /// <summary>
@@ -7,7 +9,7 @@ namespace PartForge.Electrical;
 /// </summary>
 public sealed record PhaseResult
 {
-    public required string Connection { get; init; }
+    public required Connection Connection { get; init; }
     public required int CoilsInSeries { get; init; }
     public required int ParallelPaths { get; init; }
     public required double EmfPeakV { get; init; }

@@ -1,3 +1,5 @@
+using PartForge.Design.Parts;
+
 namespace PartForge.Parts;
 
 /// <summary>How serious a part-building diagnostic is.</summary>
@@ -11,7 +13,7 @@ public enum DiagnosticSeverity
 
 /// <summary>One message from the part builders, naming the part and the design key to change.</summary>
 /// <param name="Severity">Note or error.</param>
-/// <param name="Part">Contract part name.</param>
+/// <param name="Part">The part.</param>
 /// <param name="Code">Short stable identifier, e.g. "cut-not-prismatic".</param>
 /// <param name="Message">One line for the user.</param>
-public sealed record PartDiagnostic(DiagnosticSeverity Severity, string Part, string Code, string Message);
+public sealed record PartDiagnostic(DiagnosticSeverity Severity, PartId Part, string Code, string Message);

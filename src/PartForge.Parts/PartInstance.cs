@@ -1,3 +1,4 @@
+using PartForge.Design.Parts;
 using PartForge.Geometry.Primitives;
 using PartForge.Geometry.Profiles;
 
@@ -18,14 +19,14 @@ namespace PartForge.Parts;
 /// </summary>
 /// <param name="Index">Copy number (0 for a single part; for formers stator index x coils + k, where k is the machine
 /// coil index: the copy sits in seat-k of its host stator, at machine angle k x 360 / coils).</param>
-/// <param name="Host">For formers: the stator part they sit in; otherwise the part's own name.</param>
+/// <param name="Host">For formers: the stator part they sit in; otherwise the part itself.</param>
 /// <param name="BottomZMm">Machine z of the part's lowest face.</param>
 /// <param name="HeightMm">Part height (thickness of the layered solid).</param>
 /// <param name="Flipped">Part faces -z (its local top face points down in the machine).</param>
 /// <param name="RotationDeg">Rotation about the axis, after the offset.</param>
 /// <param name="OffsetXMm">Radial offset before the rotation (a former's coil pitch radius), else 0.</param>
 /// <param name="ExplodeRank">Signed multiple of <c>assembly.explode</c> added to z in the exploded assembly.</param>
-public readonly record struct PartInstance(int Index, string Host, double BottomZMm, double HeightMm, bool Flipped,
+public readonly record struct PartInstance(int Index, PartId Host, double BottomZMm, double HeightMm, bool Flipped,
     double RotationDeg, double OffsetXMm, double ExplodeRank)
 {
     /// <summary>A part-local xy point in the machine frame.</summary>

@@ -1,3 +1,6 @@
+using PartForge.Design.Machines;
+using PartForge.Design.Materials;
+using PartForge.Design.Parts;
 using PartForge.Geometry.Meshes;
 using PartForge.Geometry.Profiles;
 using PartForge.Geometry.Solids;
@@ -10,8 +13,14 @@ namespace PartForge.Parts;
 /// </summary>
 public sealed record PartModel
 {
-    /// <summary>Contract part name: rotor | rotor-front | rotor-back | back-iron | former | stator | stator-front | stator-back | spacer.</summary>
-    public required string Name { get; init; }
+    /// <summary>Which part (role and side).</summary>
+    public required PartId Id { get; init; }
+
+    /// <summary>The contract part name (rotor-front, back-iron, ...), for file names and messages.</summary>
+    public string Name => Id.Name;
+
+    /// <summary>What the part is for.</summary>
+    public PartRole Role => Id.Role;
 
     /// <summary>Printed or cut.</summary>
     public required PartProcess Process { get; init; }
@@ -19,11 +28,8 @@ public sealed record PartModel
     /// <summary>How many copies the machine needs (= <see cref="Instances"/>.Count).</summary>
     public int Quantity => Instances.Count;
 
-    /// <summary>Material, in the design file's spelling (PLA, steel, acrylic, ...).</summary>
-    public required string Material { get; init; }
-
-    /// <summary>Material density, g/cm^3 (<see cref="Materials"/>).</summary>
-    public double DensityGPerCm3 => Materials.DensityGPerCm3(Material);
+    /// <summary>Material (from the one material table).</summary>
+    public required Material Material { get; init; }
 
     /// <summary>Height of the part (its solid spans z = 0 .. HeightMm in part-local coordinates).</summary>
     public required double HeightMm { get; init; }
@@ -71,7 +77,7 @@ public sealed record PartModel
     public required IReadOnlyList<PartInstance> Instances { get; init; }
 
     /// <summary>True for parts that turn with the shaft (rotors, their back irons, the dual-rotor hub spacer).</summary>
-    public required bool Rotating { get; init; }
+    public bool Rotating => Id.Facts.Rotates;
 
     /// <summary>Builder's instructions and the geometry choices worth telling the user (which way up magnets go, ...).</summary>
     public IReadOnlyList<string> Notes { get; init; } = Array.Empty<string>();
@@ -81,7 +87,7 @@ public sealed record PartModel
     public double VolumeMm3 => (_solid ?? throw new InvalidOperationException($"{Name}: no solid source")).Volume;
 
     /// <summary>Mass of one copy in grams from <see cref="VolumeMm3"/> and the material density (solid, 100% infill).</summary>
-    public double MassG => Materials.MassG(Material, VolumeMm3);
+    public double MassG => Material.MassG(VolumeMm3);
 
     /// <summary>Features of one kind, in index order.</summary>
     public IEnumerable<PartFeature> FeaturesOf(FeatureKind kind) => Features.Where(f => f.Kind == kind).OrderBy(f => f.Index);

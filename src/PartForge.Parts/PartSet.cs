@@ -1,3 +1,4 @@
+using PartForge.Design.Parts;
 using PartForge.Design.Stack;
 
 namespace PartForge.Parts;
@@ -19,9 +20,12 @@ public sealed record PartSet
 
     public bool HasErrors => Diagnostics.Any(x => x.Severity == DiagnosticSeverity.Error);
 
-    /// <summary>The part with this contract name, or null.</summary>
-    public PartModel? Find(string name) => Parts.FirstOrDefault(p => p.Name == name);
+    /// <summary>The part, or null.</summary>
+    public PartModel? Find(PartId id) => Parts.FirstOrDefault(p => p.Id == id);
 
-    /// <summary>The part with this contract name (throws if absent).</summary>
-    public PartModel Get(string name) => Find(name) ?? throw new KeyNotFoundException($"no part named '{name}'");
+    /// <summary>The part (throws if absent).</summary>
+    public PartModel Get(PartId id) => Find(id) ?? throw new KeyNotFoundException($"no part '{id.Name}'");
+
+    /// <summary>The parts of one role, in part order.</summary>
+    public IEnumerable<PartModel> OfRole(PartRole role) => Parts.Where(p => p.Role == role);
 }

@@ -1,4 +1,8 @@
+using PartForge.Design.Machines;
+using PartForge.Design.Materials;
+using PartForge.Design.Parts;
 using PartForge.Geometry.Profiles;
+using PartForge.Geometry.Solids;
 
 namespace PartForge.Parts;
 
@@ -8,9 +12,9 @@ namespace PartForge.Parts;
 /// </summary>
 internal sealed record PartSpec
 {
-    public required string Name { get; init; }
+    public required PartId Id { get; init; }
     public required PartProcess Process { get; init; }
-    public required string Material { get; init; }
+    public required Material Material { get; init; }
     public required double HeightMm { get; init; }
     public required IReadOnlyList<ExactLayer> Layers { get; init; }
     public required IReadOnlyList<PartFeature> Features { get; init; }

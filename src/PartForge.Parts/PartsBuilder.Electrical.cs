@@ -1,13 +1,13 @@
 using PartForge.Electrical;
 using PartForge.Geometry;
-using D = PartForge.Design.Model;
+using PartForge.Design.Machines;
 
 namespace PartForge.Parts;
 
 public static partial class PartsBuilder
 {
     /// <summary>Builds the parts from the design and the electrical engine's results (coil outline, turns, wire, sensors).</summary>
-    public static PartSet Build(D.Design design, ElectricalResult electrical, Precision precision) =>
+    public static PartSet Build(MachineModel design, ElectricalResult electrical, Precision? precision = null) =>
         Build(design, CoilFrom(electrical), precision);
 
     /// <summary>What the part builders take from the electrical results.</summary>

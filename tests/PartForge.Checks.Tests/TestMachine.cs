@@ -64,7 +64,7 @@ public sealed class TestMachine
 
     public ElectricalFacts ToFacts()
     {
-        var rotors = Layout == "dual-rotor" ? new[] { "rotor-front", "rotor-back" } : new[] { "rotor" };
+        var rotors = Layout == "dual-rotor" ? new[] { PartForge.Design.Parts.PartId.RotorFront, PartForge.Design.Parts.PartId.RotorBack } : new[] { PartForge.Design.Parts.PartId.Rotor };
         return new ElectricalFacts
         {
             Turns = Turns, WireBareMm = WireBare, WireOverallMm = WireOverall,
@@ -75,13 +75,13 @@ public sealed class TestMachine
     }
 
     public CheckReport Check(IReadOnlyList<PartView>? parts = null) =>
-        CheckRunner.Run(ToDesign(), ToFacts(), parts ?? Array.Empty<PartView>());
+        CheckRunner.Run(PartForge.Design.Machines.MachineModel.From(ToDesign()), ToFacts(), parts ?? Array.Empty<PartView>());
 
     /// <summary>The real part builders' parts for this machine (sized from the real electrical engine's coil).</summary>
     public PartSet Parts()
     {
         var d = ToDesign();
-        return PartsBuilder.Build(d, ElectricalEngine.Evaluate(d), Precision.FromChordalTolerance(d.Mesh.ChordalTolerance));
+        return PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(d)), Precision.FromChordalTolerance(d.Mesh.ChordalTolerance));
     }
 
     /// <summary>Every check with the real parts (printability and fit included) and this machine's electrical facts.</summary>

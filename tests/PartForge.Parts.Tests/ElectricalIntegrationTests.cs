@@ -26,10 +26,10 @@ public class ElectricalIntegrationTests
     public void FormerWindowIsTheEnginesCoilWindow(string shape)
     {
         var d = shape == "round" ? TestDesigns.SingleRotor() : Keystone();
-        var e = ElectricalEngine.Evaluate(d);
+        var e = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(d));
         var outline = e.Coil!.Outline!;
-        var set = PartsBuilder.Build(d, e, TestDesigns.Prec(d));
-        var former = set.Get("former");
+        var set = PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), e, TestDesigns.Prec(d));
+        var former = set.Get(PartForge.Design.Parts.PartId.Former);
         var core = former.Feature("core").Contour.Translated(new PartForge.Geometry.Primitives.Vec2(outline.PitchRadiusMm, 0));
         // Same exact contour: segment for segment (or the same circle).
         Assert.Equal(outline.Window.Circle, core.Circle);
@@ -57,9 +57,9 @@ public class ElectricalIntegrationTests
     public void SensorPocketsAtTheEnginesAngles()
     {
         var d = TestDesigns.SingleRotor();
-        var e = ElectricalEngine.Evaluate(d);
-        var set = PartsBuilder.Build(d, e, TestDesigns.Prec(d));
-        var stator = set.Get("stator");
+        var e = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(d));
+        var set = PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), e, TestDesigns.Prec(d));
+        var stator = set.Get(PartForge.Design.Parts.PartId.Stator);
         var inst = stator.Instances.Single();
         var want = e.Sensors!.Sensors;
         var got = stator.FeaturesOf(FeatureKind.SensorPocket).ToList();
@@ -76,10 +76,10 @@ public class ElectricalIntegrationTests
     public void KeystonePartsAreValidAndFitTheirSeats()
     {
         var d = Keystone();
-        var e = ElectricalEngine.Evaluate(d);
-        var set = PartsBuilder.Build(d, e, TestDesigns.Prec(d));
-        var former = set.Get("former");
-        var stator = set.Get("stator");
+        var e = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(d));
+        var set = PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), e, TestDesigns.Prec(d));
+        var former = set.Get(PartForge.Design.Parts.PartId.Former);
+        var stator = set.Get(PartForge.Design.Parts.PartId.Stator);
         var si = stator.Instances.Single();
         foreach (var inst in former.Instances.Take(2))
         {

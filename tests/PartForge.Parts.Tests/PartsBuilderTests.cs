@@ -1,3 +1,4 @@
+using PartForge.Design.Machines;
 namespace PartForge.Parts.Tests;
 
 public class PartsBuilderTests
@@ -6,7 +7,7 @@ public class PartsBuilderTests
     public void ProcessDefaultsAndMasses()
     {
         var d = TestDesigns.DualRotor();
-        var set = PartsBuilder.Build(d, TestDesigns.RoundCoil(d, 6, 15, 45, 75), TestDesigns.Prec(d));
+        var set = PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), TestDesigns.RoundCoil(d, 6, 15, 45, 75), TestDesigns.Prec(d));
         Assert.Equal(new[] { "rotor-front", "rotor-back", "back-iron", "former", "stator", "spacer" }, set.Parts.Select(p => p.Name));
         foreach (var p in set.Parts)
         {
@@ -17,7 +18,7 @@ public class PartsBuilderTests
                 _ => (PartProcess.Print, "PLA"),
             };
             Assert.Equal(proc, p.Process);
-            Assert.Equal(mat, p.Material);
+            Assert.Equal(mat, p.Material.Name);
             Assert.Equal(proc == PartProcess.Cut, p.CutProfile is not null);
             // Density: PLA 1.24 g/cm^3 (../shared/REFERENCE.md section 4), steel 7.85 (EN 1993-1-1 3.2.6), acrylic 1.18 (datasheets, from memory).
             double rho = mat switch { "PLA" => 1.24, "steel" => 7.85, _ => 1.18 };
@@ -42,14 +43,14 @@ public class PartsBuilderTests
                 Stator = new PartForge.Design.Model.PartOverride { Process = "cut" },
             },
         };
-        var set = PartsBuilder.Build(over, TestDesigns.RoundCoil(over, 6, 15, 45, 75), TestDesigns.Prec(over));
-        Assert.Equal(PartProcess.Print, set.Get("spacer").Process);
-        Assert.Equal("PETG", set.Get("spacer").Material);
-        Assert.Null(set.Get("spacer").CutProfile);
-        Assert.Equal("ABS", set.Get("former").Material);
+        var set = PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(over), TestDesigns.RoundCoil(over, 6, 15, 45, 75), TestDesigns.Prec(over));
+        Assert.Equal(PartProcess.Print, set.Get(PartForge.Design.Parts.PartId.HubSpacer).Process);
+        Assert.Equal("PETG", set.Get(PartForge.Design.Parts.PartId.HubSpacer).Material.Name);
+        Assert.Null(set.Get(PartForge.Design.Parts.PartId.HubSpacer).CutProfile);
+        Assert.Equal("ABS", set.Get(PartForge.Design.Parts.PartId.Former).Material.Name);
         // A stator ring has grooves and blind pockets: cut is refused with a diagnostic naming the key.
         var err = Assert.Single(set.Diagnostics, x => x.Severity == DiagnosticSeverity.Error);
-        Assert.Equal("stator", err.Part);
+        Assert.Equal(PartForge.Design.Parts.PartId.Stator, err.Part);
         Assert.Contains("parts.stator.process", err.Message, StringComparison.Ordinal);
     }
 
@@ -57,8 +58,8 @@ public class PartsBuilderTests
     public void SameDesignSameParts()
     {
         var d = TestDesigns.SingleRotor();
-        var a = PartsBuilder.Build(d, TestDesigns.RoundCoil(d, 5, 20, 60, 100), TestDesigns.Prec(d));
-        var b = PartsBuilder.Build(d, TestDesigns.RoundCoil(d, 5, 20, 60, 100), TestDesigns.Prec(d));
+        var a = PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), TestDesigns.RoundCoil(d, 5, 20, 60, 100), TestDesigns.Prec(d));
+        var b = PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), TestDesigns.RoundCoil(d, 5, 20, 60, 100), TestDesigns.Prec(d));
         foreach (var (p, q) in a.Parts.Zip(b.Parts))
         {
             Assert.Equal(p.Mesh.Vertices, q.Mesh.Vertices);

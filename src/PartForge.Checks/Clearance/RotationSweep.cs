@@ -1,3 +1,4 @@
+using PartForge.Geometry.Exact;
 using NetTopologySuite.Geometries;
 using NetTopologySuite.Index.Strtree;
 
@@ -95,8 +96,8 @@ public static class RotationSweep
 
     private static Bounds LowerBounds(SweepScene scene)
     {
-        var rr = scene.Rotating.Select(p => ExactDistance.RadialRange(p.Shape)).ToArray();
-        var sr = scene.Stationary.Select(p => ExactDistance.RadialRange(p.Shape)).ToArray();
+        var rr = scene.Rotating.Select(p => Exact2D.RadialRange(p.Shape)).ToArray();
+        var sr = scene.Stationary.Select(p => Exact2D.RadialRange(p.Shape)).ToArray();
         var pair = new double[rr.Length, sr.Length];
         var prism = new double[rr.Length];
         for (int r = 0; r < rr.Length; r++)
@@ -144,7 +145,7 @@ public static class RotationSweep
                 if (dz >= 0)
                 {
                     double budget = double.IsFinite(best.Distance) ? Math.Sqrt(best.Distance * best.Distance - dz * dz) : double.PositiveInfinity;
-                    double d2 = ExactDistance.ShapeShape(shape, sp.Shape, budget, out bool overlap);
+                    double d2 = Exact2D.ShapeShape(shape, sp.Shape, budget, out bool overlap);
                     if (overlap) d2 = 0;
                     if (!double.IsFinite(d2)) continue;
                     double d = Math.Sqrt(dz * dz + d2 * d2);
@@ -152,7 +153,7 @@ public static class RotationSweep
                 }
                 else
                 {
-                    double d2 = ExactDistance.ShapeShape(shape, sp.Shape, double.IsFinite(best.Distance) && best.Distance > 0 ? best.Distance : double.PositiveInfinity, out bool overlap);
+                    double d2 = Exact2D.ShapeShape(shape, sp.Shape, double.IsFinite(best.Distance) && best.Distance > 0 ? best.Distance : double.PositiveInfinity, out bool overlap);
                     double d = overlap ? dz : d2;   // interference: minus the axial shift that separates them
                     if (d < best.Distance) best = new Candidate(d, angleDeg, r, s, 0, overlap ? 0 : d2);
                 }

@@ -1,3 +1,4 @@
+using PartForge.Design.Parts;
 using PartForge.Electrical.Coils;
 
 namespace PartForge.Checks.Inputs;
@@ -26,8 +27,8 @@ public sealed record ElectricalFacts
     /// <summary>Which operating point the current density belongs to ("generator into 10 ohm", ...).</summary>
     public string OperatingPoint { get; init; } = "operating point";
 
-    /// <summary>Axial magnetic pull on each rotor toward the stator side, N, by rotor part name.</summary>
-    public IReadOnlyDictionary<string, double> PullOnRotorN { get; init; } = new Dictionary<string, double>();
+    /// <summary>Axial magnetic pull on each rotor toward the stator side, N, by rotor.</summary>
+    public IReadOnlyDictionary<PartId, double> PullOnRotorN { get; init; } = new Dictionary<PartId, double>();
 
     /// <summary>Mechanical sensor angles (machine frame), degrees.</summary>
     public IReadOnlyList<double> SensorAnglesDeg { get; init; } = Array.Empty<double>();

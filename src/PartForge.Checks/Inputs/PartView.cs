@@ -1,3 +1,7 @@
+using PartForge.Design.Machines;
+using PartForge.Design.Materials;
+using PartForge.Design.Parts;
+using PartForge.Geometry.Solids;
 using PartForge.Parts;
 
 namespace PartForge.Checks.Inputs;
@@ -8,13 +12,15 @@ namespace PartForge.Checks.Inputs;
 /// with the shaft.
 /// </summary>
 public sealed record PartView(
-    string Name,
+    PartId Id,
     PartProcess Process,
-    string Material,
+    Material Material,
     IReadOnlyList<ExactLayer> Layers,
     IReadOnlyList<PartFeature> Features,
     IReadOnlyList<PartInstance> Instances,
     bool Rotating)
 {
+    public string Name => Id.Name;
+
     public IEnumerable<PartFeature> OfKind(FeatureKind kind) => Features.Where(f => f.Kind == kind);
 }

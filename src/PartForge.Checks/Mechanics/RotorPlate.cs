@@ -1,4 +1,5 @@
-using PartForge.Checks.Materials;
+using PartForge.Design.Machines;
+using PartForge.Design.Materials;
 
 namespace PartForge.Checks.Mechanics;
 
@@ -20,8 +21,8 @@ public sealed record RotorPlate(double OuterRadiusMm, double HubRadiusMm, double
 {
     public const double CollarMm = 5;
 
-    public static double HubRadius(Design.Model.Rotor rotor) =>
-        rotor.BoltCircle is { } bc ? Math.Max(bc.Diameter / 2, 1e-3) : Math.Max(rotor.Bore / 2 + CollarMm, CollarMm);
+    public static double HubRadius(RotorSpec rotor) =>
+        rotor.BoltCircle is { } bc ? Math.Max(bc.CircleDiameterMm / 2, 1e-3) : Math.Max(rotor.BoreMm / 2 + CollarMm, CollarMm);
 
     /// <summary>True when the clamp reaches the load (a hub as large as the magnet ring): no bending.</summary>
     public bool Rigid => HubRadiusMm >= LoadRadiusMm || HubRadiusMm >= OuterRadiusMm;

@@ -1,6 +1,8 @@
 using PartForge.Checks.Clearance;
 using PartForge.Checks.Inputs;
+using PartForge.Design.Parts;
 using PartForge.Design.Stack;
+using PartForge.Geometry.Exact;
 using PartForge.Geometry.Primitives;
 using PartForge.Geometry.Profiles;
 using PartForge.Parts;
@@ -16,9 +18,9 @@ internal static class SweepRules
         var scene = BuildScene(c);
         var r = RotationSweep.Run(scene, c.SweepStepDeg);
         if (r.Rotating is null || r.Stationary is null) yield break;
-        double limit = c.D.Gap.MinRunningGap;
+        double limit = c.D.Gap.MinRunningGapMm;
         var (status, margin) = AtLeast(r.ClearanceMm, limit, MinBand(limit));
-        string where = $"{r.Rotating.Part} {r.Rotating.Feature} / {r.Stationary.Part} {r.Stationary.Feature}";
+        string where = $"{r.Rotating.Part.Name} {r.Rotating.Feature} / {r.Stationary.Part.Name} {r.Stationary.Feature}";
         string msg = r.Interference
             ? $"{where} interfere at rotor angle {F(r.AngleDeg)} degrees: {F(-r.ClearanceMm)} mm of axial shift would separate them"
             : $"minimum clearance {F(r.ClearanceMm)} mm ({F(r.AxialMm)} axial, {F(r.PlanarMm)} in plane) between {where} at rotor angle {F(r.AngleDeg)} degrees (sweep over {F(scene.PeriodDeg)} degrees, step {F(r.StepDeg)})";
@@ -30,20 +32,20 @@ internal static class SweepRules
                 // Overlapping in the plane where their z-ranges overlap: the radial ranges say by how much.
                 var (overlap, rotatingInside) = radial;
                 msg += rotatingInside
-                    ? $"; the {r.Rotating.Part} reaches {F(overlap)} mm past the inner edge of the {r.Stationary.Part}: make the {r.Stationary.Part}'s inner radius {Up(overlap + need)} mm larger or the {r.Rotating.Part}'s outer radius that much smaller"
-                    : $"; the {r.Stationary.Part} reaches {F(overlap)} mm inside the outer edge of the {r.Rotating.Part}: make the {r.Rotating.Part}'s outer radius {Up(overlap + need)} mm smaller or the {r.Stationary.Part}'s inner radius that much larger";
+                    ? $"; the {r.Rotating.Part.Name} reaches {F(overlap)} mm past the inner edge of the {r.Stationary.Part.Name}: make the {r.Stationary.Part.Name}'s inner radius {Up(overlap + need)} mm larger or the {r.Rotating.Part.Name}'s outer radius that much smaller"
+                    : $"; the {r.Stationary.Part.Name} reaches {F(overlap)} mm inside the outer edge of the {r.Rotating.Part.Name}: make the {r.Rotating.Part.Name}'s outer radius {Up(overlap + need)} mm smaller or the {r.Stationary.Part.Name}'s inner radius that much larger";
             }
             else
             {
                 double s = need - r.ClearanceMm;
                 msg += r.PlanarMm > r.AxialMm && !r.Interference
                     ? $"; move them {Up(s)} mm further apart in the plane (the parts' radial sizes or coils.pitch_radius)"
-                    : $"; raise gap.air_gap to at least {Up(c.D.Gap.AirGap + s)}";
+                    : $"; raise gap.air_gap to at least {Up(c.D.Gap.AirGapMm + s)}";
             }
         }
         yield return new CheckResult
         {
-            Id = CheckIds.RotationClearance, Part = r.Rotating.Part, Status = status, Value = r.ClearanceMm, Limit = limit, Unit = "mm", Margin = margin,
+            Id = CheckIds.RotationClearance, Part = r.Rotating.Part, Counterpart = r.Stationary.Part, Status = status, Value = r.ClearanceMm, Limit = limit, Unit = "mm", Margin = margin,
             Message = msg, Where = new CheckLocation(where, r.AngleDeg),
             Basis = "rotation sweep over one pole pitch on the layered solids: axial overlap plus exact 2D distance, sqrt(dz^2 + d2^2)",
         };
@@ -55,8 +57,8 @@ internal static class SweepRules
     /// </summary>
     private static (double Overlap, bool RotatingInside)? RadialOverlap(SweepPrism rotating, SweepPrism stationary)
     {
-        var a = ExactDistance.RadialRange(rotating.Shape);
-        var b = ExactDistance.RadialRange(stationary.Shape);
+        var a = Exact2D.RadialRange(rotating.Shape);
+        var b = Exact2D.RadialRange(stationary.Shape);
         double outward = a.Max - b.Min, inward = b.Max - a.Min;
         if (outward <= 0 || inward <= 0) return null;
         return outward <= inward ? (outward, true) : (inward, false);
@@ -70,35 +72,35 @@ internal static class SweepRules
         var slabs = c.Stack.Slabs;
         foreach (var pv in c.Parts)
         {
-            // The single-rotor gap gauge is an assembly tool, pulled out before the rotor turns.
-            if (pv.Name == "spacer" && c.D.Machine.Layout == "single-rotor") continue;
+            // An assembly tool (the single-rotor gap gauge) is pulled out before the rotor turns.
+            if (!pv.Id.Facts.RunsInMachine) continue;
             var into = pv.Rotating ? rotating : stationary;
-            if (pv.Name == "former")
+            if (pv.Id.Role == PartRole.Former)
                 foreach (var inst in pv.Instances) AddLayers(into, pv, new[] { inst }, $"coil {inst.Index} former");
             else AddLayers(into, pv, pv.Instances, pv.Rotating ? "disc" : "ring");
         }
-        foreach (var rotor in c.RotorNames)
+        foreach (var rotor in c.RotorIds)
         {
-            var magnetSlab = slabs.First(s => s.Owner == rotor && s.Kind == SlabKind.Magnet);
+            var magnetSlab = c.Stack.Slab(SlabKind.Magnet, rotor);
             if (c.Part(rotor) is { } pv && pv.OfKind(FeatureKind.MagnetPocket).Any())
             {
                 foreach (var inst in pv.Instances)
                     foreach (var pocket in pv.OfKind(FeatureKind.MagnetPocket))
                     {
-                        var outline = inst.ToMachine(c.Magnet.OutlineAt(pocket.AngleDeg, pocket.RadiusMm));
+                        var outline = inst.ToMachine(MagnetAt(c, pocket.AngleDeg));
                         rotating.Add(new SweepPrism(rotor, $"magnet {pocket.Index}", magnetSlab.ZMin, magnetSlab.ZMax, new Shape2D(outline)));
                     }
                 continue;
             }
             if (c.Part(rotor) is null)
             {
-                var disc = slabs.First(s => s.Owner == rotor && s.Kind == SlabKind.Rotor);
-                rotating.Add(new SweepPrism(rotor, "disc", disc.ZMin, disc.ZMax, Shape2D.Annulus(c.D.Rotor.Bore / 2, c.D.Rotor.OuterDiameter / 2)));
+                var disc = c.Stack.Slab(SlabKind.Rotor, rotor);
+                rotating.Add(new SweepPrism(rotor, "disc", disc.ZMin, disc.ZMax, Shape2D.Annulus(c.D.Rotor.BoreMm / 2, c.D.Rotor.OuterDiameterMm / 2)));
             }
-            for (int i = 0; i < c.D.Machine.Poles; i++)
+            for (int i = 0; i < c.D.Poles; i++)
             {
-                double ang = i * 360.0 / c.D.Machine.Poles;
-                rotating.Add(new SweepPrism(rotor, $"magnet {i}", magnetSlab.ZMin, magnetSlab.ZMax, c.Magnet.ShapeAt(ang, c.Magnet.PitchRadiusMm)));
+                double ang = i * 360.0 / c.D.Poles;
+                rotating.Add(new SweepPrism(rotor, $"magnet {i}", magnetSlab.ZMin, magnetSlab.ZMax, new Shape2D(MagnetAt(c, ang))));
             }
         }
 
@@ -107,20 +109,20 @@ internal static class SweepRules
         {
             if (c.Part(stator) is null)
             {
-                var ring = slabs.First(s => s.Owner == stator && s.Kind == SlabKind.Stator);
-                stationary.Add(new SweepPrism(stator, "ring", ring.ZMin, ring.ZMax, Shape2D.Annulus(c.D.Stator.InnerDiameter / 2, c.D.Stator.OuterDiameter / 2)));
+                var ring = c.Stack.Slab(SlabKind.Stator, stator);
+                stationary.Add(new SweepPrism(stator, "ring", ring.ZMin, ring.ZMax, Shape2D.Annulus(c.D.Stator.InnerDiameterMm / 2, c.D.Stator.OuterDiameterMm / 2)));
             }
-            var copper = slabs.First(s => s.Owner == stator && s.Kind == SlabKind.Copper);
+            var copper = c.Stack.Slab(SlabKind.Copper, stator);
             double z0 = copper.ZMin - c.BulgePerFaceMm, z1 = copper.ZMax + c.BulgePerFaceMm;
-            for (int k = 0; k < c.D.Machine.Coils; k++)
+            for (int k = 0; k < c.D.CoilsPerStator; k++)
             {
-                double ang = k * 360.0 / c.D.Machine.Coils;
+                double ang = k * 360.0 / c.D.CoilsPerStator;
                 var outer = c.E.Outline.Outer.RotatedDeg(ang);
                 var window = c.E.Outline.Window.RotatedDeg(ang);
                 stationary.Add(new SweepPrism(stator, $"coil {k} copper", z0, z1, new Shape2D(outer, new[] { window })));
             }
         }
-        return new SweepScene(rotating, stationary, 360.0 / Math.Max(1, c.D.Machine.Poles));
+        return new SweepScene(rotating, stationary, 360.0 / Math.Max(1, c.D.Poles));
     }
 
     private static void AddLayers(List<SweepPrism> into, PartView pv, IEnumerable<PartInstance> instances, string what)
@@ -137,11 +139,14 @@ internal static class SweepRules
                     var outer = inst.ToMachine(outerLocal);
                     var ob = Box2.Of(outer);
                     var holes = cuts.Where(h => Inside(Box2.Of(h), ob)).ToArray();
-                    into.Add(new SweepPrism(pv.Name, $"{what} layer {li}", Math.Min(za, zb), Math.Max(za, zb), new Shape2D(outer, holes)));
+                    into.Add(new SweepPrism(pv.Id, $"{what} layer {li}", Math.Min(za, zb), Math.Max(za, zb), new Shape2D(outer, holes)));
                 }
             }
         }
     }
+
+    /// <summary>The bare magnet at a pocket's angle (machine frame, unrotated rotor): magnet 0's outline turned there.</summary>
+    private static Contour MagnetAt(CheckContext c, double angleDeg) => c.Magnet.Outline(0).RotatedDeg(angleDeg);
 
     private static bool Inside(Box2 inner, Box2 outer) =>
         inner.MinX >= outer.MinX - 1e-9 && inner.MaxX <= outer.MaxX + 1e-9 && inner.MinY >= outer.MinY - 1e-9 && inner.MaxY <= outer.MaxY + 1e-9;

@@ -1,6 +1,7 @@
 using System.Globalization;
-using PartForge.Checks.Materials;
 using PartForge.Checks.Stack;
+using PartForge.Design.Materials;
+using PartForge.Design.Parts;
 using static PartForge.Checks.Judge;
 
 namespace PartForge.Checks.Rules;
@@ -8,7 +9,7 @@ namespace PartForge.Checks.Rules;
 /// <summary>winding-fill, current-density, coil-temperature.</summary>
 internal static class WindingRules
 {
-    /// <summary>Hexagonal packing of equal circles, pi / (2 sqrt 3) (geometry; REFERENCE.md section 3).</summary>
+    /// <summary>Hexagonal packing of equal circles, pi / (2 sqrt 3) to 4 figures (geometry).</summary>
     public const double HexagonalPacking = 0.9069;
 
     /// <summary>
@@ -40,12 +41,12 @@ internal static class WindingRules
         else if (fill > CoilBulge.PracticalFill)
         {
             status = CheckStatus.Warn;
-            msg += $"; above the 0.30-0.50 a hand or random-wound coil reaches (REFERENCE.md section 3, practice), the winding may bulge {F(c.BulgePerFaceMm)} mm each face; lower coils.fill_factor to {Down(CoilBulge.PracticalFill)}";
+            msg += $"; above the 0.30-0.50 a hand or random-wound coil reaches (common practice), the winding may bulge {F(c.BulgePerFaceMm)} mm each face; lower coils.fill_factor to {Down(CoilBulge.PracticalFill)}";
         }
         else status = CheckStatus.Pass;
         return new CheckResult
         {
-            Id = CheckIds.WindingFill, Part = "former", Status = status, Value = fill, Limit = limit, Unit = "1", Margin = margin,
+            Id = CheckIds.WindingFill, Part = PartId.Former, Status = status, Value = fill, Limit = limit, Unit = "1", Margin = margin,
             Message = msg, Where = new CheckLocation("winding window"),
             Basis = "hexagonal packing pi/(2 sqrt 3) x (d/D)^2 (geometry); random-wound 0.30-0.50 (practice)",
         };
@@ -66,7 +67,7 @@ internal static class WindingRules
         }
         return new CheckResult
         {
-            Id = CheckIds.CurrentDensity, Part = "former", Status = status, Value = j, Limit = limit, Unit = "A/mm2", Margin = margin,
+            Id = CheckIds.CurrentDensity, Part = PartId.Former, Status = status, Value = j, Limit = limit, Unit = "A/mm2", Margin = margin,
             Message = msg, Where = new CheckLocation("coil wire"),
             Basis = "continuous current density of small air-cooled coils (common practice, from memory)",
         };
@@ -82,25 +83,26 @@ internal static class WindingRules
 
     private static CheckResult Temperature(CheckContext c)
     {
-        double t = c.D.Coils.MaxTemperature;
-        var former = MaterialTable.Get(c.MaterialOf("former"));
-        var stator = MaterialTable.Get(c.MaterialOf(c.Stack.Slabs.First(s => s.Kind == Design.Stack.SlabKind.Stator).Owner));
+        double t = c.D.Coils.MaxTemperatureC;
+        var former = c.MaterialOf(PartId.Former);
+        var stator = c.MaterialOf(c.FirstStator);
         var weak = former.SofteningC <= stator.SofteningC ? former : stator;
+        var weakPart = weak == former ? PartId.Former : c.FirstStator;
         string which = weak == former ? "former" : "stator";
         double limit = weak.SofteningC;
         var (status, margin) = AtMost(t, limit, TemperatureBandC);
         string msg = $"coils.max_temperature {F(t)} C against the {which} material {weak.Name}, which softens at about {F(limit)} C";
         if (status != CheckStatus.Pass)
         {
-            var better = MaterialTable.All.Where(m => m.IsPlastic && m.SofteningC >= t + TemperatureBandC).OrderBy(m => m.SofteningC).FirstOrDefault();
+            var better = MaterialTable.All.Where(m => m.IsFilament && m.SofteningC >= t + TemperatureBandC).OrderBy(m => m.SofteningC).FirstOrDefault();
             msg += $"; lower coils.max_temperature to {F(limit - TemperatureBandC)} (less current)"
                    + (better is not null ? $" or make the {which} from {better.Name} (softens at about {F(better.SofteningC)} C)" : "");
         }
         return new CheckResult
         {
-            Id = CheckIds.CoilTemperature, Part = which == "former" ? "former" : c.Stack.Slabs.First(s => s.Kind == Design.Stack.SlabKind.Stator).Owner,
+            Id = CheckIds.CoilTemperature, Part = weakPart,
             Status = status, Value = t, Limit = limit, Unit = "C", Margin = margin, Message = msg, Where = new CheckLocation("coil former and seat"),
-            Basis = "softening point (glass transition) of the former/stator plastic; PLA 55-60 C (REFERENCE.md section 4)",
+            Basis = "softening point (glass transition) of the former/stator plastic; PLA 55-60 C (resin makers' datasheets)",
         };
     }
 }

@@ -1,3 +1,5 @@
+using PartForge.Design.Parts;
+
 namespace PartForge.Checks.Stack;
 
 /// <summary>
@@ -10,7 +12,7 @@ namespace PartForge.Checks.Stack;
 /// <param name="NominalMm">Nominal gap from the stack: the stationary face to the nearest rotating surface.</param>
 /// <param name="Losses">Worst-case losses, each at its full value (they add up: a linear worst case).</param>
 /// <param name="NearestRotatingSurface">"magnet face" when the magnets stand proud, else "rotor face".</param>
-public sealed record FaceGap(string RotorPart, string StatorPart, int Side, double NominalMm, IReadOnlyList<GapLoss> Losses, string NearestRotatingSurface)
+public sealed record FaceGap(PartId RotorPart, PartId StatorPart, int Side, double NominalMm, IReadOnlyList<GapLoss> Losses, string NearestRotatingSurface)
 {
     public double TotalLossMm => Losses.Sum(l => l.Mm);
     public double WorstMm => NominalMm - TotalLossMm;

@@ -1,3 +1,4 @@
+using PartForge.Design.Parts;
 using PartForge.Design.Stack;
 
 namespace PartForge.Checks.Stack;
@@ -31,7 +32,7 @@ public static class StackUp
     /// <param name="bulgePerFaceMm">Axial bulge of the winding on each face, mm.</param>
     /// <param name="flangeMm">former.flange.</param>
     public static IReadOnlyList<FaceGap> Compute(AxialStack stack, double printZMm, double runoutMm, double axialPlayMm,
-        Func<string, bool> isPrinted, Func<string, double> deflectionMm, double bulgePerFaceMm, double flangeMm)
+        Func<PartId, bool> isPrinted, Func<PartId, double> deflectionMm, double bulgePerFaceMm, double flangeMm)
     {
         var result = new List<FaceGap>();
         var rotatingKinds = new[] { SlabKind.Rotor, SlabKind.Magnet };
@@ -59,13 +60,13 @@ public static class StackUp
                 bool magnetNearest = side > 0 ? magnet.ZMin < rotorFace.ZMin - 1e-12 : magnet.ZMax > rotorFace.ZMax + 1e-12;
 
                 var losses = new List<GapLoss>();
-                if (isPrinted(rotor)) losses.Add(new GapLoss($"print_z {rotor}", printZMm));
+                if (isPrinted(rotor)) losses.Add(new GapLoss($"print_z {rotor.Name}", printZMm));
                 var statorSlab = sta.First(s => s.Kind == SlabKind.Stator);
                 var formerSlab = sta.FirstOrDefault(s => s.Kind == SlabKind.Former);
                 double statorT = statorSlab.Thickness, formerT = formerSlab.Thickness;
                 bool statorSets = statorT >= formerT - 1e-12, formerSets = formerT >= statorT - 1e-12;
-                if ((statorSets && isPrinted(stator)) || (formerSets && isPrinted("former")))
-                    losses.Add(new GapLoss($"print_z {(formerSets && !statorSets ? "former" : stator)}", printZMm));
+                if ((statorSets && isPrinted(stator)) || (formerSets && isPrinted(PartId.Former)))
+                    losses.Add(new GapLoss($"print_z {(formerSets && !statorSets ? PartId.Former : stator).Name}", printZMm));
                 if (runoutMm > 0) losses.Add(new GapLoss("runout", runoutMm));
                 if (axialPlayMm > 0) losses.Add(new GapLoss("axial_play", axialPlayMm));
                 double defl = Math.Max(0, deflectionMm(rotor));
@@ -85,7 +86,7 @@ public static class StackUp
         return result;
     }
 
-    private static bool FacesDirectly(AxialStack stack, string rotor, string stator, int side)
+    private static bool FacesDirectly(AxialStack stack, PartId rotor, PartId stator, int side)
     {
         // In dual-stator the stator on +z faces the rotor's +z face and vice versa.
         var sta = stack.Slabs.First(s => s.Owner == stator && s.Kind == SlabKind.Stator);

@@ -1,7 +1,7 @@
 namespace PartForge.Cli.Sweep;
 
-/// <summary>Evaluates one loaded design variant (electrical results and checks, no export). Must be thread-safe.</summary>
+/// <summary>Evaluates one loaded machine variant (electrical results and checks, no export). Must be thread-safe.</summary>
 public interface ISweepEvaluator
 {
-    SweepOutcome Evaluate(Design.Model.Design design);
+    SweepOutcome Evaluate(Design.Machines.MachineModel design);
 }

@@ -1,5 +1,5 @@
 using PartForge.Checks;
-using PartForge.Electrical;
+using PartForge.Design.Machines;
 using PartForge.Geometry;
 using PartForge.Export.Pipeline;
 using PartForge.Parts;
@@ -18,17 +18,11 @@ public sealed class PipelineEvaluator : ISweepEvaluator
     /// <summary>Chordal tolerance of the sweep's throw-away polygons and meshes, mm.</summary>
     public const double SweepChordalToleranceMm = 0.2;
 
-    /// <summary>The stages for one design, as <see cref="BuildPipeline.Evaluate"/> runs them but with the coarse polygons.</summary>
-    public static Evaluation EvaluateStages(Design.Model.Design d)
-    {
-        var electrical = ElectricalEngine.Evaluate(d);
-        if (electrical.Coil?.Outline == null) return BuildPipeline.Evaluate(d); // no parts: the pipeline's own early answer
-        var precision = Precision.FromChordalTolerance(Math.Max(d.Mesh.ChordalTolerance, SweepChordalToleranceMm));
-        var parts = PartsBuilder.Build(d, electrical, precision);
-        return new Evaluation(d, electrical, parts, CheckRunner.Run(d, electrical, parts));
-    }
+    /// <summary>The stages for one machine, as <see cref="Stages.Evaluate"/> runs them but with the coarse polygons.</summary>
+    public static Evaluation EvaluateStages(MachineModel d) =>
+        Stages.Evaluate(d, partsPrecision: Precision.FromChordalTolerance(Math.Max(d.ChordalToleranceMm, SweepChordalToleranceMm)));
 
-    public SweepOutcome Evaluate(Design.Model.Design d)
+    public SweepOutcome Evaluate(MachineModel d)
     {
         Evaluation ev;
         try { ev = EvaluateStages(d); }
@@ -60,9 +54,9 @@ public sealed class PipelineEvaluator : ISweepEvaluator
         m[SweepMetrics.FailCount] = report.FailCount;
         m[SweepMetrics.WarnCount] = report.WarnCount;
         if (ev.Parts is { HasErrors: true } ps)
-            return new SweepOutcome("fail", string.Join("; ", ps.Diagnostics.Where(x => x.Severity == Parts.DiagnosticSeverity.Error).Select(x => $"{x.Part}: {x.Message}")), m);
+            return new SweepOutcome("fail", string.Join("; ", ps.Diagnostics.Where(x => x.Severity == Parts.DiagnosticSeverity.Error).Select(x => $"{x.Part.Name}: {x.Message}")), m);
         var worst = report.Checks.Where(x => x.Status == report.Status && x.Status != CheckStatus.Pass)
-            .Select(x => $"{x.Id} ({x.Part}): {x.Message}").FirstOrDefault();
+            .Select(x => $"{x.Id} ({x.PartName}): {x.Message}").FirstOrDefault();
         return new SweepOutcome(report.StatusText, worst ?? "", m);
     }
 }

@@ -37,7 +37,7 @@ public static class SweepRunner
             if (loaded.Errors.Count > 1) reason += $" (+{loaded.Errors.Count - 1} more)";
             return new SweepRow(i, values, SweepOutcome.Invalid(reason));
         }
-        return new SweepRow(i, values, evaluator.Evaluate(loaded.Design!));
+        return new SweepRow(i, values, evaluator.Evaluate(loaded.Machine!));
     }
 
     private static string Describe(DesignError e)

@@ -1,23 +1,18 @@
 using PartForge.Design.Keys;
+using PartForge.Design.Machines;
+using PartForge.Design.Machines.Magnets;
 using PartForge.Design.Model;
 
 namespace PartForge.Design.Loading;
 
 /// <summary>
-/// Rules that involve more than one key, and the resolution of derived keys (connection default, coil pitch
-/// radius, arc magnet pitch radius). Every rule reports at the offending key; all rules run, so every problem
-/// is reported at once. Physics-level questions (does the winding fit, is the web printable) are the
-/// checker's.
+/// Rules that involve more than one key. Every rule reports at the offending key; all rules run, so every
+/// problem is reported at once. Derived values (connection default, coil pitch radius, sensor count) are the
+/// machine model's (<see cref="MachineModel.From"/>), which is made only from a design that passes these rules.
+/// Physics-level questions (does the winding fit, is the web printable) are the checker's.
 /// </summary>
 internal static class DesignRules
 {
-    private static readonly Dictionary<string, string[]> ShapeKeys = new()
-    {
-        ["disc"] = ["diameter", "pitch_radius"],
-        ["block"] = ["length", "width", "pitch_radius"],
-        ["arc"] = ["inner_radius", "outer_radius", "span"],
-    };
-
     private static string F(double v) => KeySpec.Format(Math.Round(v, 3));
 
     public static void Apply(Model.Design d, MapContext ctx)
@@ -29,74 +24,71 @@ internal static class DesignRules
         if (m.Phases == 3 && m.Coils % 3 != 0)
             ctx.Add(ctx.AtKey("machine.coils", "is not allowed", m.Coils.ToString(), "a multiple of 3 for 3 phases"));
         string[] conns = m.Phases == 3 ? ["star", "delta"] : ["series", "parallel"];
-        if (m.Connection == null) Set(m, nameof(Machine.Connection), conns[0]);
-        else if (!conns.Contains(m.Connection))
+        if (m.Connection != null && !conns.Contains(m.Connection))
             ctx.Add(ctx.AtKey("machine.connection", $"does not fit {m.Phases} phase{(m.Phases == 1 ? "" : "s")}", m.Connection, string.Join(" or ", conns)));
         if (m.RatedRpm > m.MaxRpm)
             ctx.Add(ctx.AtKey("machine.rated_rpm", $"is more than machine.max_rpm ({F(m.MaxRpm)})", F(m.RatedRpm), "at most machine.max_rpm", "raise machine.max_rpm or lower machine.rated_rpm"));
 
         // Magnets: the size keys of the chosen shape, and none of another shape's.
         var mg = d.Magnets;
-        bool shapeOk = true;
-        foreach (var (shape, keys) in ShapeKeys)
+        var kind = MagnetShapes.Find(mg.Shape);
+        bool shapeOk = kind != null;
+        if (kind != null)
         {
-            foreach (var key in keys)
+            foreach (var key in kind.Keys)
             {
-                bool has = ctx.Has("magnets." + key);
-                bool needed = shape == mg.Shape;
-                if (needed && !has)
+                if (!ctx.Has("magnets." + key))
                 {
                     shapeOk = false;
-                    ctx.Add(ctx.AtKey("magnets." + key, $"is missing; {Article(mg.Shape)} {mg.Shape} magnet needs {string.Join(", ", ShapeKeys[mg.Shape])}", fallbacks: "magnets.shape"));
+                    ctx.Add(ctx.AtKey("magnets." + key, $"is missing; {Article(mg.Shape)} {mg.Shape} magnet needs {string.Join(", ", kind.Keys)}", fallbacks: "magnets.shape"));
+                }
+            }
+            foreach (var key in MagnetShapes.AllKeys)
+            {
+                if (!kind.Keys.Contains(key) && ctx.Has("magnets." + key))
+                {
+                    shapeOk = false;
+                    string hint = key == "pitch_radius" && !kind.Keys.Contains("pitch_radius") ? $"; {mg.Shape} magnets are placed by {string.Join(" and ", kind.Keys.Where(k => k.Contains("radius")))}" : "";
+                    ctx.Add(ctx.AtKey("magnets." + key, $"does not apply to {mg.Shape} magnets{hint}", suggestion: "remove it (or change magnets.shape)"));
+                }
+            }
+            if (shapeOk)
+            {
+                foreach (var pr in kind.Validate(mg))
+                {
+                    shapeOk = false;
+                    ctx.Add(ctx.AtKey("magnets." + pr.Key, pr.Message, pr.Value, pr.Allowed));
                 }
             }
         }
-        foreach (var key in ShapeKeys.Values.SelectMany(k => k).Distinct())
-        {
-            if (!ShapeKeys[mg.Shape].Contains(key) && ctx.Has("magnets." + key))
-            {
-                shapeOk = false;
-                string hint = key == "pitch_radius" ? "; arc magnets are placed by inner_radius and outer_radius" : "";
-                ctx.Add(ctx.AtKey("magnets." + key, $"does not apply to {mg.Shape} magnets{hint}", suggestion: "remove it (or change magnets.shape)"));
-            }
-        }
-        if (mg.Shape == "arc" && mg.InnerRadius is { } ri && mg.OuterRadius is { } ro)
-        {
-            if (ri >= ro)
-            {
-                shapeOk = false;
-                ctx.Add(ctx.AtKey("magnets.inner_radius", $"is not less than magnets.outer_radius ({F(ro)})", F(ri), "less than magnets.outer_radius"));
-            }
-            else if (shapeOk) Set(mg, nameof(Magnets.PitchRadius), (ri + ro) / 2);
-        }
+        MagnetShape? shape = shapeOk ? kind!.Make(mg) : null;
 
         // Rotor disc
         var r = d.Rotor;
         double rim = r.OuterDiameter / 2, boreR = r.Bore / 2;
         if (r.Bore >= r.OuterDiameter)
             ctx.Add(ctx.AtKey("rotor.bore", $"is not less than rotor.outer_diameter ({F(r.OuterDiameter)})", F(r.Bore), "less than rotor.outer_diameter"));
-        if (d.Machine.Layout == "dual-stator" && r.PocketFloor > 0)
+        var layout = Layout.Parse(d.Machine.Layout);
+        if (layout is { RotorBetweenStators: true } && r.PocketFloor > 0)
             ctx.Add(ctx.AtKey("rotor.pocket_floor", "is not allowed in a dual-stator layout: the rotor holds its magnets in through pockets, facing both stators",
                 F(r.PocketFloor), "0", "set rotor.pocket_floor: 0"));
         else if (r.PocketFloor >= r.Thickness)
             ctx.Add(ctx.AtKey("rotor.pocket_floor", $"leaves no pocket in a rotor {F(r.Thickness)} mm thick", F(r.PocketFloor), $"less than rotor.thickness ({F(r.Thickness)})"));
-        if (d.Machine.Layout == "dual-stator" && r.BackIron != null)
+        if (layout is { AllowsBackIron: false } && r.BackIron != null)
             ctx.Add(ctx.AtKey("rotor.back_iron", "is not allowed in a dual-stator layout: both faces of the rotor face a stator", suggestion: "remove rotor.back_iron"));
 
-        var pockets = shapeOk && m.Poles >= 2 ? PocketLayout.From(mg, r, m.Poles) : null;
-        string sizeKey = mg.Shape switch { "disc" => "magnets.diameter", "block" => "magnets.width", _ => "magnets.span" };
-        string radiusKey = mg.Shape == "arc" ? "magnets.outer_radius" : "magnets.pitch_radius";
-        string innerKey = mg.Shape == "arc" ? "magnets.inner_radius" : "magnets.pitch_radius";
-        if (pockets is { } p)
+        if (shape != null && m.Poles >= 2)
         {
-            if (p.OuterRadiusMm >= rim)
-                ctx.Add(ctx.AtKey(radiusKey, $"puts the pockets out to radius {F(p.OuterRadiusMm)} mm, through the rotor rim at {F(rim)} mm",
-                    suggestion: $"make rotor.outer_diameter more than {F(2 * p.OuterRadiusMm)} or move the magnets inwards"));
-            if (p.InnerRadiusMm <= boreR)
-                ctx.Add(ctx.AtKey(innerKey, $"puts the pockets in to radius {F(p.InnerRadiusMm)} mm, into the bore (radius {F(boreR)} mm)",
+            var (pIn, pOut) = shape.RadialRangeMm(r.PocketClearance);
+            double web = shape.WebMm(m.Poles, r.PocketClearance);
+            if (pOut >= rim)
+                ctx.Add(ctx.AtKey("magnets." + kind!.OuterKey, $"puts the pockets out to radius {F(pOut)} mm, through the rotor rim at {F(rim)} mm",
+                    suggestion: $"make rotor.outer_diameter more than {F(2 * pOut)} or move the magnets inwards"));
+            if (pIn <= boreR)
+                ctx.Add(ctx.AtKey("magnets." + kind!.InnerKey, $"puts the pockets in to radius {F(pIn)} mm, into the bore (radius {F(boreR)} mm)",
                     suggestion: "move the magnets outwards or make rotor.bore smaller"));
-            if (p.WebMm <= 0)
-                ctx.Add(ctx.AtKey(sizeKey, $"makes neighbouring pockets overlap by {F(-p.WebMm)} mm ({m.Poles} on radius {F(p.PitchRadiusMm)} mm)",
+            if (web <= 0)
+                ctx.Add(ctx.AtKey("magnets." + kind!.SizeKey, $"makes neighbouring pockets overlap by {F(-web)} mm ({m.Poles} on radius {F(shape.PitchRadiusMm)} mm)",
                     suggestion: "use smaller magnets, fewer machine.poles or a larger pitch radius", fallbacks: "magnets.shape"));
         }
         if (r.BoltCircle is { } bc)
@@ -109,8 +101,8 @@ internal static class DesignRules
                     suggestion: "make the bolt circle larger or rotor.bore smaller"));
             if (bc.Count > 1 && 2 * rb * Math.Sin(Math.PI / bc.Count) <= bc.Hole)
                 ctx.Add(ctx.AtKey("rotor.bolt_circle.count", $"makes the bolt holes overlap ({bc.Count} holes of {F(bc.Hole)} mm on a {F(bc.Diameter)} mm circle)", bc.Count.ToString()));
-            if (pockets is { } p2 && rb + h >= p2.InnerRadiusMm && rb - h <= p2.OuterRadiusMm)
-                ctx.Add(ctx.AtKey("rotor.bolt_circle.diameter", $"puts the bolt holes (radius {F(rb - h)} to {F(rb + h)} mm) into the magnet pockets (radius {F(p2.InnerRadiusMm)} to {F(p2.OuterRadiusMm)} mm)",
+            if (shape != null && shape.RadialRangeMm(r.PocketClearance) is var (p2In, p2Out) && rb + h >= p2In && rb - h <= p2Out)
+                ctx.Add(ctx.AtKey("rotor.bolt_circle.diameter", $"puts the bolt holes (radius {F(rb - h)} to {F(rb + h)} mm) into the magnet pockets (radius {F(p2In)} to {F(p2Out)} mm)",
                     F(bc.Diameter), suggestion: "keep the bolt circle inside the pocket ring"));
         }
 
@@ -153,17 +145,11 @@ internal static class DesignRules
             if (ctx.Has("coils.core.diameter"))
                 ctx.Add(ctx.AtKey("coils.core.diameter", "does not apply to keystone coils (use coils.core.width)"));
         }
-        if (c.PitchRadius == null && mg.PitchRadius is { } pr) Set(c, nameof(Coils.PitchRadius), pr);
-
         // Sensor
         var sn = d.Sensor;
-        if (!ctx.Has("sensor.count") && (m.Phases == 1 || m.Phases == 3)) Set(sn, nameof(Sensor.Count), m.Phases);
         if (sn.Kind != "none" && sn.Count == 3 && m.Phases != 3)
             ctx.Add(ctx.AtKey("sensor.count", "is not allowed with 1 phase: 3 sensors time 3 phases", "3", "1 (or sensor.kind: none)", fallbacks: "sensor.kind"));
     }
 
     private static string Article(string word) => word.Length > 0 && "aeiou".Contains(word[0]) ? "an" : "a";
-
-    private static void Set(object target, string property, object? value) =>
-        target.GetType().GetProperty(property)!.SetValue(target, value);
 }

@@ -53,7 +53,7 @@ public sealed class DesignSource
             }
             return DesignLoadResult.Failed(errs);
         }
-        return DesignLoadResult.Ok(design);
+        return DesignLoadResult.Ok(design, Machines.MachineModel.From(design));
     }
 
     /// <summary>Checks that a key path names a key of the design file; null if it does, else the error.</summary>

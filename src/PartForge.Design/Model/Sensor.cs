@@ -6,7 +6,7 @@ public sealed class Sensor
     public string Kind { get; init; } = "hall";
 
     [OneOf("1", "3"), Doc("Number of sensors: 1 or 3 (default: one per phase).")]
-    public int Count { get; init; } = 3;
+    public int? Count { get; init; }
 
     [Range(-180, 180), Doc("Timing advance, electrical degrees.")]
     public double AdvanceElec { get; init; }

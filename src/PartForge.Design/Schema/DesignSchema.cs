@@ -106,8 +106,8 @@ public static class DesignSchema
     {
         if (path == "magnets")
         {
-            (string Shape, string[] Keys)[] shapes = [("disc", ["diameter", "pitch_radius"]), ("block", ["length", "width", "pitch_radius"]), ("arc", ["inner_radius", "outer_radius", "span"])];
-            var all = shapes.SelectMany(s => s.Keys).Distinct().ToArray();
+            var shapes = Machines.Magnets.MagnetShapes.Kinds.Select(k => (Shape: k.Word, Keys: k.Keys)).ToArray();
+            var all = Machines.Magnets.MagnetShapes.AllKeys;
             string def = (string)SectionSpec.For(typeof(Model.Magnets)).Find("shape")!.Default!;
             w.WriteStartArray("allOf");
             foreach (var (shape, keys) in shapes)

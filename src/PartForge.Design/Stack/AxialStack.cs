@@ -1,11 +1,13 @@
-using PartForge.Design.Model;
+using PartForge.Design.Machines;
+using PartForge.Design.Parts;
 
 namespace PartForge.Design.Stack;
 
 /// <summary>
 /// Nominal axial positions of every face, derived from the design alone (no tolerances; the checker adds
-/// those). One rule used by the electrical engine (magnetic gap), the part builders (spacers, assembly) and
-/// the checker (stack-up), so that they can never disagree.
+/// those). Computed once, by the machine model (<see cref="MachineModel.Stack"/>), and read by the electrical
+/// engine (magnetic gap), the part builders (spacers, assembly) and the checker (stack-up), so that they can
+/// never disagree.
 ///
 /// Coordinates: z along the shaft, millimetres. z = 0 is the mid-plane of the stationary pack for
 /// single-rotor and dual-rotor layouts, and the mid-plane of the rotor for dual-stator.
@@ -43,19 +45,19 @@ public sealed record AxialStack
     /// <summary>Every axial slab of the nominal assembly, ordered by ZMin.</summary>
     public required IReadOnlyList<AxialSlab> Slabs { get; init; }
 
-    public static AxialStack From(Model.Design d)
+    /// <summary>The stack of a machine of this layout and these sections.</summary>
+    public static AxialStack Of(Layout layout, RotorSpec rotor, double magnetThicknessMm, CoilSet coils, FormerSpec former, StatorSpec stator, GapSpec gapSpec)
     {
-        double formerH = d.Coils.Height + 2 * d.Former.Flange;
-        double s = Math.Max(d.Stator.Thickness, formerH);
-        double t = d.Rotor.Thickness;
-        double depth = d.Rotor.PocketFloor > 0 ? t - d.Rotor.PocketFloor : t;
-        double tm = d.Magnets.Thickness;
-        double gap = d.Gap.AirGap;
-        double copperHalf = d.Coils.Height / 2;
+        double formerH = coils.HeightMm + 2 * former.FlangeMm;
+        double s = Math.Max(stator.ThicknessMm, formerH);
+        double t = rotor.ThicknessMm;
+        double depth = rotor.PocketFloorMm > 0 ? t - rotor.PocketFloorMm : t;
+        double tm = magnetThicknessMm;
+        double gap = gapSpec.AirGapMm;
+        double copperHalf = coils.HeightMm / 2;
         var slabs = new List<AxialSlab>();
-        string layout = d.Machine.Layout;
 
-        if (layout == "dual-stator")
+        if (layout.RotorBetweenStators)
         {
             double proud = (tm - t) / 2;                 // each face
             double rotFace = t / 2;                       // rotor faces at +-t/2
@@ -63,13 +65,14 @@ public sealed record AxialStack
             double nearest = Math.Max(rotFace, magFace);
             double statInner = nearest + gap;             // stationary face towards the rotor
             double statMid = statInner + s / 2;
-            slabs.Add(new AxialSlab(SlabKind.Rotor, "rotor", -t / 2, t / 2));
-            slabs.Add(new AxialSlab(SlabKind.Magnet, "rotor", -tm / 2, tm / 2));
-            foreach (var (sign, name) in new[] { (1.0, "stator-front"), (-1.0, "stator-back") })
+            var rotorId = layout.Rotors[0];
+            slabs.Add(new AxialSlab(SlabKind.Rotor, rotorId, -t / 2, t / 2));
+            slabs.Add(new AxialSlab(SlabKind.Magnet, rotorId, -tm / 2, tm / 2));
+            foreach (var (sign, id) in new[] { (1.0, layout.Stators[0]), (-1.0, layout.Stators[1]) })
             {
-                slabs.Add(Slab(SlabKind.Stator, name, sign * (statMid - d.Stator.Thickness / 2), sign * (statMid + d.Stator.Thickness / 2)));
-                slabs.Add(Slab(SlabKind.Former, name, sign * (statMid - formerH / 2), sign * (statMid + formerH / 2)));
-                slabs.Add(Slab(SlabKind.Copper, name, sign * (statMid - copperHalf), sign * (statMid + copperHalf)));
+                slabs.Add(Slab(SlabKind.Stator, id, sign * (statMid - stator.ThicknessMm / 2), sign * (statMid + stator.ThicknessMm / 2)));
+                slabs.Add(Slab(SlabKind.Former, id, sign * (statMid - formerH / 2), sign * (statMid + formerH / 2)));
+                slabs.Add(Slab(SlabKind.Copper, id, sign * (statMid - copperHalf), sign * (statMid + copperHalf)));
             }
             return Build(s, formerH, depth, proud, (statMid - copperHalf) - magFace, slabs);
         }
@@ -81,24 +84,29 @@ public sealed record AxialStack
             double rotFace = nearest + Math.Max(0, proud); // rotor's stator-side face (set back by a proud magnet)
             double magFace = rotFace - proud;             // magnet's stator-side face (nearer the stator when proud, set back when recessed)
             double magBack = magFace + tm;
-            slabs.Add(new AxialSlab(SlabKind.Stator, "stator", -d.Stator.Thickness / 2, d.Stator.Thickness / 2));
-            slabs.Add(new AxialSlab(SlabKind.Former, "stator", -formerH / 2, formerH / 2));
-            slabs.Add(new AxialSlab(SlabKind.Copper, "stator", -copperHalf, copperHalf));
-            var rotors = layout == "dual-rotor"
-                ? new[] { (1.0, "rotor-front"), (-1.0, "rotor-back") }
-                : new[] { (1.0, "rotor") };
-            foreach (var (sign, name) in rotors)
+            var statorId = layout.Stators[0];
+            slabs.Add(new AxialSlab(SlabKind.Stator, statorId, -stator.ThicknessMm / 2, stator.ThicknessMm / 2));
+            slabs.Add(new AxialSlab(SlabKind.Former, statorId, -formerH / 2, formerH / 2));
+            slabs.Add(new AxialSlab(SlabKind.Copper, statorId, -copperHalf, copperHalf));
+            var rotors = layout.Rotors.Select((id, i) => (Sign: i == 0 ? 1.0 : -1.0, Id: id));
+            foreach (var (sign, id) in rotors)
             {
-                slabs.Add(Slab(SlabKind.Rotor, name, sign * rotFace, sign * (rotFace + t)));
-                slabs.Add(Slab(SlabKind.Magnet, name, sign * magFace, sign * magBack));
-                if (d.Rotor.BackIron is { } bi)
-                    slabs.Add(Slab(SlabKind.BackIron, name, sign * (rotFace + t), sign * (rotFace + t + bi.Thickness)));
+                slabs.Add(Slab(SlabKind.Rotor, id, sign * rotFace, sign * (rotFace + t)));
+                slabs.Add(Slab(SlabKind.Magnet, id, sign * magFace, sign * magBack));
+                if (rotor.BackIronThicknessMm is { } bi)
+                    slabs.Add(Slab(SlabKind.BackIron, id, sign * (rotFace + t), sign * (rotFace + t + bi)));
             }
             return Build(s, formerH, depth, proud, magFace - copperHalf, slabs);
         }
     }
 
-    private static AxialSlab Slab(SlabKind kind, string owner, double a, double b) =>
+    /// <summary>The slab of this kind that belongs to the part (throws when there is none).</summary>
+    public AxialSlab Slab(SlabKind kind, PartId owner) => Slabs.First(x => x.Kind == kind && x.Owner == owner);
+
+    /// <summary>The slabs of one kind, in z order.</summary>
+    public IEnumerable<AxialSlab> OfKind(SlabKind kind) => Slabs.Where(x => x.Kind == kind);
+
+    private static AxialSlab Slab(SlabKind kind, PartId owner, double a, double b) =>
         new(kind, owner, Math.Min(a, b), Math.Max(a, b));
 
     private static AxialStack Build(double s, double formerH, double depth, double proud, double magGap, List<AxialSlab> slabs) => new()
@@ -108,15 +116,15 @@ public sealed record AxialStack
         PocketDepthMm = depth,
         MagnetProudMm = proud,
         MagneticGapMm = magGap,
-        Slabs = slabs.OrderBy(x => x.ZMin).ThenBy(x => x.Kind).ThenBy(x => x.Owner, StringComparer.Ordinal).ToArray(),
+        Slabs = slabs.OrderBy(x => x.ZMin).ThenBy(x => x.Kind).ThenBy(x => x.Owner.Name, StringComparer.Ordinal).ToArray(),
     };
 }
 
 /// <summary>What an axial slab of the assembly is.</summary>
 public enum SlabKind { Rotor, Magnet, BackIron, Stator, Former, Copper }
 
-/// <summary>One axial slab: a kind of body belonging to a named part (or the rotor/stator it sits in), from ZMin to ZMax.</summary>
-public readonly record struct AxialSlab(SlabKind Kind, string Owner, double ZMin, double ZMax)
+/// <summary>One axial slab: a kind of body belonging to a part (or the rotor/stator it sits in), from ZMin to ZMax.</summary>
+public readonly record struct AxialSlab(SlabKind Kind, PartId Owner, double ZMin, double ZMax)
 {
     public double Thickness => ZMax - ZMin;
 }

@@ -1,15 +1,13 @@
 using System.Globalization;
-using PartForge.Electrical.Field;
+using PartForge.Design.Machines;
 using PartForge.Electrical.Wire;
 
 namespace PartForge.Electrical.Coils;
 
 /// <summary>
-/// Everything about a coil except its turns, resolved from the design: shape, pitch radius (default
-/// `magnets.pitch_radius`; arc magnets: the arc's mid radius), height, core, fill factor, wire, the number of
-/// coils around the stator (for the neighbour gap), lead allowance and hot temperature.
-/// Default core when `coils.core` gives nothing: the magnet's tangential size (disc diameter, block width,
-/// arc chord at the pitch radius), with a warning.
+/// Everything about a coil except its turns, from the machine model: shape, pitch radius, height, core, fill
+/// factor, wire, the number of coils around the stator (for the neighbour gap), lead allowance and hot
+/// temperature. A keystone window spans the magnets' radial length.
 /// </summary>
 public sealed record CoilSpec
 {
@@ -28,14 +26,6 @@ public sealed record CoilSpec
     public required int CoilCount { get; init; }
     public required double LeadAllowanceMm { get; init; }
     public required double MaxTemperatureC { get; init; }
-
-    /// <summary>The default for `coils.pitch_radius`: `magnets.pitch_radius`, or the arc magnets' mid radius.</summary>
-    public static double? DefaultPitchRadiusMm(PartForge.Design.Model.Design d)
-    {
-        if (d.Coils.PitchRadius is { } p) return p;
-        if (d.Magnets.Shape == "arc" && d.Magnets.InnerRadius is { } ri && d.Magnets.OuterRadius is { } ro) return (ri + ro) / 2;
-        return d.Magnets.PitchRadius;
-    }
 
     /// <summary>Radial build of <paramref name="turns"/> turns: N pi d^2 / (4 fill height), mm.</summary>
     public double BuildMm(int turns) => turns * Wire.CopperAreaMm2 / (FillFactor * HeightMm);
@@ -91,68 +81,28 @@ public sealed record CoilSpec
         };
     }
 
-    /// <summary>Resolves the coil from the design; impossible values become error diagnostics and give null.</summary>
-    public static CoilSpec? FromDesign(PartForge.Design.Model.Design d, MagnetGeometry? magnet, WireSpec wire, List<Diagnostic> diagnostics)
+    /// <summary>The coil of a machine; impossible combinations become error diagnostics and give null.</summary>
+    public static CoilSpec? From(MachineModel m, WireSpec wire, List<Diagnostic> diagnostics)
     {
-        var c = d.Coils;
+        var c = m.Coils;
         var inv = CultureInfo.InvariantCulture;
         int n0 = diagnostics.Count;
         void Err(string id, string key, string msg) => diagnostics.Add(new Diagnostic(id, DiagnosticSeverity.Error, key, msg));
-        CoilShape shape;
-        switch (c.Shape)
-        {
-            case "round": shape = CoilShape.Round; break;
-            case "keystone": shape = CoilShape.Keystone; break;
-            default: Err("coil-shape-unknown", "coils.shape", $"coils.shape '{c.Shape}' is not known; use round or keystone."); return null;
-        }
-        double? pr = DefaultPitchRadiusMm(d);
-        if (pr is not > 0) { Err("coil-pitch-missing", "coils.pitch_radius", "coils.pitch_radius is missing and magnets.pitch_radius gives no default; give the radius of the coil centres in mm."); return null; }
-        if (!(c.Height > 0)) Err("coil-height", "coils.height", "coils.height must be positive (mm).");
-        if (!(c.FillFactor > 0) || c.FillFactor > Math.PI / (2 * Math.Sqrt(3)))
-            Err("coil-fill-range", "coils.fill_factor", "coils.fill_factor must lie in (0, 0.9069]: copper area over window area, hexagonal packing is the limit.");
-        if (d.Machine.Coils < 1) Err("coil-count", "machine.coils", "machine.coils must be at least 1.");
-        if (diagnostics.Count > n0) return null;
-
-        double core;
+        double pr = c.PitchRadiusMm;
+        double core = c.CoreMm ?? throw new ArgumentException("the coil core is not resolved for this coil shape", nameof(m));
         double radialLength = 0;
-        double magnetTangential = magnet is null ? 0 : magnet.Shape switch
+        if (c.Shape == CoilShape.Keystone)
         {
-            MagnetShape.Disc => magnet.DiameterMm,
-            MagnetShape.Block => magnet.WidthMm,
-            _ => 2 * magnet.PitchRadiusMm * Math.Sin(magnet.SpanDeg * Math.PI / 360),
-        };
-        if (shape == CoilShape.Round)
-        {
-            if (c.Core.Diameter is { } cd and > 0) core = cd;
-            else if (magnetTangential > 0)
-            {
-                core = magnetTangential;
-                diagnostics.Add(new Diagnostic("coil-core-default", DiagnosticSeverity.Warning, "coils.core.diameter",
-                    string.Format(inv, "coils.core.diameter is not given; using the magnet's size {0:0.###} mm. Give coils.core: {{ diameter: ... }}.", core)));
-            }
-            else { Err("coil-core-missing", "coils.core.diameter", "coils.core.diameter is missing; give the diameter of the hole in the coil in mm."); return null; }
-        }
-        else
-        {
-            if (c.Core.Width is { } cw and > 0) core = cw;
-            else if (magnetTangential > 0)
-            {
-                core = magnetTangential;
-                diagnostics.Add(new Diagnostic("coil-core-default", DiagnosticSeverity.Warning, "coils.core.width",
-                    string.Format(inv, "coils.core.width is not given; using the magnet's width {0:0.###} mm. Give coils.core: {{ width: ... }}.", core)));
-            }
-            else { Err("coil-core-missing", "coils.core.width", "coils.core.width is missing; give the inner window width of the keystone coil in mm."); return null; }
-            if (magnet is null) { Err("coil-keystone-needs-magnet", "magnets", "a keystone coil's window follows the magnets' radial extent; fix the magnets section first."); return null; }
-            radialLength = magnet.RadialLengthMm;
-            if (core >= 2 * pr.Value)
-            { Err("coil-core-too-wide", "coils.core.width", string.Format(inv, "coils.core.width {0:0.###} mm is not less than the pitch diameter {1:0.###} mm; make it smaller.", core, 2 * pr.Value)); return null; }
-            if (radialLength / 2 >= pr.Value)
+            radialLength = m.Magnets.Shape.RadialLengthMm;
+            if (core >= 2 * pr)
+            { Err("coil-core-too-wide", "coils.core.width", string.Format(inv, "coils.core.width {0:0.###} mm is not less than the pitch diameter {1:0.###} mm; make it smaller.", core, 2 * pr)); return null; }
+            if (radialLength / 2 >= pr)
             { Err("coil-window-crosses-axis", "coils.pitch_radius", string.Format(inv, "the keystone window (radial length {0:0.###} mm) reaches the machine axis; raise coils.pitch_radius above {1:0.###} mm.", radialLength, radialLength / 2)); return null; }
         }
-        if (shape == CoilShape.Round && core / 2 >= pr.Value)
+        if (c.Shape == CoilShape.Round && core / 2 >= pr)
             Err("coil-core-crosses-axis", "coils.core.diameter", string.Format(inv, "the coil core (diameter {0:0.###} mm) reaches the machine axis; raise coils.pitch_radius or make the core smaller.", core));
-        if (wire.OverallDiameterMm > c.Height)
-            Err("wire-thicker-than-window", "coils.wire", string.Format(inv, "the wire ({0:0.###} mm overall) is thicker than the winding height coils.height {1:0.###} mm; use thinner wire or a taller coil.", wire.OverallDiameterMm, c.Height));
+        if (wire.OverallDiameterMm > c.HeightMm)
+            Err("wire-thicker-than-window", "coils.wire", string.Format(inv, "the wire ({0:0.###} mm overall) is thicker than the winding height coils.height {1:0.###} mm; use thinner wire or a taller coil.", wire.OverallDiameterMm, c.HeightMm));
         if (c.FillFactor > wire.MaxHexagonalFill)
             Err("fill-unachievable", "coils.fill_factor", string.Format(inv,
                 "coils.fill_factor {0:0.###} cannot be reached with this wire: hexagonal packing of {1:0.###} mm bare / {2:0.###} mm enamelled wire gives at most {3:0.###}; lower coils.fill_factor.",
@@ -160,16 +110,16 @@ public sealed record CoilSpec
         if (diagnostics.Count > n0 && diagnostics.Skip(n0).Any(x => x.Severity == DiagnosticSeverity.Error)) return null;
         return new CoilSpec
         {
-            Shape = shape,
-            PitchRadiusMm = pr.Value,
-            HeightMm = c.Height,
+            Shape = c.Shape,
+            PitchRadiusMm = pr,
+            HeightMm = c.HeightMm,
             CoreMm = core,
             WindowRadialLengthMm = radialLength,
             FillFactor = c.FillFactor,
             Wire = wire,
-            CoilCount = d.Machine.Coils,
-            LeadAllowanceMm = d.Operation.LeadAllowance,
-            MaxTemperatureC = c.MaxTemperature,
+            CoilCount = m.CoilsPerStator,
+            LeadAllowanceMm = m.Operation.LeadAllowanceMm,
+            MaxTemperatureC = c.MaxTemperatureC,
         };
     }
 }

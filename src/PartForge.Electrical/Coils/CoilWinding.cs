@@ -1,3 +1,4 @@
+using PartForge.Design.Machines;
 using PartForge.Electrical.Wire;
 
 namespace PartForge.Electrical.Coils;

@@ -1,3 +1,5 @@
+using PartForge.Design.Machines.Magnets;
+using PartForge.Geometry.Primitives;
 using PartForge.Geometry.Profiles;
 
 namespace PartForge.Electrical.Field;
@@ -6,14 +8,15 @@ namespace PartForge.Electrical.Field;
 /// One axially magnetised magnet placed in the rotor frame (machine axis = z, magnet centred at angle
 /// CentreDeg on PitchRadiusMm), between ZMinMm and ZMaxMm, with signed remanence (positive: magnetised +z).
 /// Its Bz comes from the closed forms (block: <see cref="CuboidField"/>, disc: <see cref="CylinderField"/>,
-/// arc: <see cref="PolygonFaceField"/> on faces whose arcs are split finely enough that the polygon's chordal
-/// error is at most ArcChordalToleranceMm). Far away (distance from the centre above FarFactor x the
+/// arc: <see cref="SectorFaceField"/>, checked against <see cref="PolygonFaceField"/> on faces whose arcs are split
+/// finely enough that the polygon's chordal error is at most ArcChordalToleranceMm; any other shape: its outline
+/// as a polygon face, exact for straight-sided shapes such as the sector block, arcs split as for the arc). Far away (distance from the centre above FarFactor x the
 /// magnet's largest dimension) it is replaced by its dipole field, whose relative error there is below
 /// about (1 / (2 FarFactor))^2 of that magnet's small contribution; FarFactor 0 disables the dipole.
 /// </summary>
 public sealed class MagnetSource
 {
-    public MagnetGeometry Geometry { get; }
+    public MagnetShape Shape { get; }
     public double CentreDeg { get; }
     public double ZMinMm { get; }
     public double ZMaxMm { get; }
@@ -38,11 +41,11 @@ public sealed class MagnetSource
     /// <summary>Chordal tolerance used for this source's arc polygons, mm.</summary>
     public double ArcToleranceMm { get; }
 
-    public MagnetSource(MagnetGeometry g, double centreDeg, double zMinMm, double zMaxMm, double signedBrTesla, double farFactor,
+    public MagnetSource(MagnetShape g, double centreDeg, double zMinMm, double zMaxMm, double signedBrTesla, double farFactor,
         double arcToleranceMm = ArcChordalToleranceMm)
     {
         ArcToleranceMm = arcToleranceMm;
-        Geometry = g;
+        Shape = g;
         CentreDeg = centreDeg;
         ZMinMm = zMinMm;
         ZMaxMm = zMaxMm;
@@ -52,30 +55,77 @@ public sealed class MagnetSource
         _cx = g.PitchRadiusMm * _c;
         _cy = g.PitchRadiusMm * _s;
         _cz = (zMinMm + zMaxMm) / 2;
-        double size = g.Shape switch
+        double size = g switch
         {
-            MagnetShape.Disc => Math.Max(g.DiameterMm, g.ThicknessMm),
-            MagnetShape.Block => Math.Max(Math.Max(g.LengthMm, g.WidthMm), g.ThicknessMm),
-            _ => Math.Max(Math.Max(g.OuterRadiusMm - g.InnerRadiusMm, 2 * g.OuterRadiusMm * Math.Sin(Math.Min(g.SpanDeg, 180) * Math.PI / 360)), g.ThicknessMm),
+            DiscMagnet disc => Math.Max(disc.DiameterMm, g.ThicknessMm),
+            BlockMagnet block => Math.Max(Math.Max(block.LengthMm, block.WidthMm), g.ThicknessMm),
+            ArcMagnet arc => Math.Max(Math.Max(arc.OuterRadiusMm - arc.InnerRadiusMm, 2 * arc.OuterRadiusMm * Math.Sin(Math.Min(arc.SpanDeg, 180) * Math.PI / 360)), g.ThicknessMm),
+            _ => Math.Max(g.PlanSizeMm, g.ThicknessMm),
         };
         _far2 = farFactor > 0 ? Math.Pow(farFactor * size, 2) : double.PositiveInfinity;
         _dipole = signedBrTesla * g.VolumeMm3 / (4 * Math.PI);
-        _bound = g.Shape switch
+        switch (g)
         {
-            MagnetShape.Disc => g.DiameterMm / 2,
-            MagnetShape.Block => Math.Sqrt(g.LengthMm * g.LengthMm + g.WidthMm * g.WidthMm) / 2,
-            _ => Math.Max(g.OuterRadiusMm - g.PitchRadiusMm, 2 * g.OuterRadiusMm * Math.Sin(Math.Min(g.SpanDeg, 180) * Math.PI / 360) / 2) + (g.OuterRadiusMm - g.InnerRadiusMm),
-        };
-        if (g.Shape == MagnetShape.Arc)
-        {
-            var (xs, ys) = ArcPolygon(g, arcToleranceMm);
-            _px = new[] { xs };
-            _py = new[] { ys };
+            case DiscMagnet disc:
+                _bound = disc.DiameterMm / 2;
+                break;
+            case BlockMagnet block:
+                _bound = Math.Sqrt(block.LengthMm * block.LengthMm + block.WidthMm * block.WidthMm) / 2;
+                break;
+            case ArcMagnet arc:
+            {
+                _bound = Math.Max(arc.OuterRadiusMm - arc.PitchRadiusMm, 2 * arc.OuterRadiusMm * Math.Sin(Math.Min(arc.SpanDeg, 180) * Math.PI / 360) / 2) + (arc.OuterRadiusMm - arc.InnerRadiusMm);
+                var (xs, ys) = ArcPolygon(arc, arcToleranceMm);
+                _px = new[] { xs };
+                _py = new[] { ys };
+                break;
+            }
+            default:
+            {
+                // Any other shape: its outline as a polygon (exact for straight sides), bounded about its centre.
+                var (xs, ys) = OutlinePolygon(g.Outline(0), arcToleranceMm);
+                _px = new[] { xs };
+                _py = new[] { ys };
+                double b = 0;
+                for (int i = 0; i < xs.Length; i++) b = Math.Max(b, Math.Sqrt((xs[i] - g.PitchRadiusMm) * (xs[i] - g.PitchRadiusMm) + ys[i] * ys[i]));
+                _bound = b;
+                break;
+            }
         }
     }
 
+    /// <summary>A contour as a counter-clockwise polygon, arcs split to the chordal tolerance (vertices on the arcs).</summary>
+    private static (double[] X, double[] Y) OutlinePolygon(Contour c, double tol)
+    {
+        var xs = new List<double>();
+        var ys = new List<double>();
+        foreach (var seg in PartForge.Geometry.Exact.Exact2D.SegmentsOf(c))
+        {
+            switch (seg)
+            {
+                case LineSegment l:
+                    xs.Add(l.From.X); ys.Add(l.From.Y);
+                    break;
+                case ArcSegment a:
+                {
+                    int n = ArcSegmentation.Arc(a.Radius, Math.Abs(a.SweepDeg), tol);
+                    for (int i = 0; i < n; i++)
+                    {
+                        var q = a.Center + Vec2.FromAngleDeg(a.StartDeg + a.SweepDeg * i / n) * a.Radius;
+                        xs.Add(q.X); ys.Add(q.Y);
+                    }
+                    break;
+                }
+            }
+        }
+        double area = 0;
+        for (int i = 0, j = xs.Count - 1; i < xs.Count; j = i++) area += xs[j] * ys[i] - xs[i] * ys[j];
+        if (area < 0) { xs.Reverse(); ys.Reverse(); }
+        return (xs.ToArray(), ys.ToArray());
+    }
+
     /// <summary>The annular sector's polygon (counter-clockwise, centred on +x) for a chordal tolerance.</summary>
-    private static (double[] X, double[] Y) ArcPolygon(MagnetGeometry g, double tol)
+    private static (double[] X, double[] Y) ArcPolygon(ArcMagnet g, double tol)
     {
         int nOut = ArcSegmentation.Arc(g.OuterRadiusMm, g.SpanDeg, tol);
         int nIn = g.InnerRadiusMm > 0 ? ArcSegmentation.Arc(g.InnerRadiusMm, g.SpanDeg, tol) : 0;
@@ -123,22 +173,21 @@ public sealed class MagnetSource
     /// <summary>Bz from the closed form only (never the dipole), tesla.</summary>
     public double BzExact(double x, double y, double z)
     {
-        var g = Geometry;
-        switch (g.Shape)
+        switch (Shape)
         {
-            case MagnetShape.Block:
+            case BlockMagnet g:
             {
                 double u = x * _c + y * _s, v = -x * _s + y * _c;
                 return CuboidField.Bz(SignedBrTesla, g.PitchRadiusMm - g.LengthMm / 2, g.PitchRadiusMm + g.LengthMm / 2,
                     -g.WidthMm / 2, g.WidthMm / 2, ZMinMm, ZMaxMm, u, v, z);
             }
-            case MagnetShape.Disc:
+            case DiscMagnet g:
             {
                 double dx = x - _cx, dy = y - _cy;
                 double rho = Math.Sqrt(dx * dx + dy * dy);
                 return CylinderField.Bz(SignedBrTesla, g.DiameterMm / 2, (ZMaxMm - ZMinMm) / 2, rho, z - _cz);
             }
-            default:
+            case ArcMagnet g:
             {
                 double u = x * _c + y * _s, v = -x * _s + y * _c;
                 int level = ArcLevel(x, y, z);
@@ -158,13 +207,15 @@ public sealed class MagnetSource
                 }
                 return SignedBrTesla / (4 * Math.PI) * (top - bottom);
             }
+            default:
+                return BzFinest(x, y, z);
         }
     }
 
     /// <summary>Bz of an arc magnet from its polygon at any distance (the reference for the far-field rule), tesla.</summary>
     public double BzFinest(double x, double y, double z)
     {
-        if (Geometry.Shape != MagnetShape.Arc) return BzExact(x, y, z);
+        if (_px.Length == 0) return BzExact(x, y, z);
         double u = x * _c + y * _s, v = -x * _s + y * _c;
         return SignedBrTesla / (4 * Math.PI) * (PolygonFaceField.SolidAngle(_px[0], _py[0], ZMaxMm, u, v, z) - PolygonFaceField.SolidAngle(_px[0], _py[0], ZMinMm, u, v, z));
     }
@@ -181,5 +232,5 @@ public sealed class MagnetSource
 
     /// <summary>A copy mirrored in the plane z = planeMm with the same magnetisation (the image in ideal iron).</summary>
     public MagnetSource ImageIn(double planeMm, double farFactor) =>
-        new(Geometry, CentreDeg, 2 * planeMm - ZMaxMm, 2 * planeMm - ZMinMm, SignedBrTesla, farFactor, ArcToleranceMm);
+        new(Shape, CentreDeg, 2 * planeMm - ZMaxMm, 2 * planeMm - ZMinMm, SignedBrTesla, farFactor, ArcToleranceMm);
 }

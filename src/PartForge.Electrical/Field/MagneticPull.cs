@@ -1,4 +1,7 @@
+using PartForge.Design.Machines;
+using PartForge.Design.Machines.Magnets;
 using PartForge.Design.Stack;
+using PartForge.Geometry.Primitives;
 using PartForge.Electrical.Flux;
 
 namespace PartForge.Electrical.Field;
@@ -25,7 +28,7 @@ public static class MagneticPull
     /// </summary>
     public static double AxialForceN(MagnetSource target, IReadOnlyList<MagnetSource> sources, double gapMm, int order = 4)
     {
-        var (pts, wts) = FacePoints(target.Geometry, target.CentreDeg, gapMm, order);
+        var (pts, wts) = FacePoints(target.Shape, target.CentreDeg, gapMm, order);
         double top = 0, bottom = 0;
         for (int i = 0; i < pts.Length; i++)
         {
@@ -42,21 +45,19 @@ public static class MagneticPull
         return target.SignedBrTesla / Mu0 * (top - bottom) * 1e-6;
     }
 
-    /// <summary>The forces of a design (see <see cref="MagneticPullResult"/>); null when the magnets or layout cannot be resolved.</summary>
-    public static MagneticPullResult? Compute(PartForge.Design.Model.Design d)
+    /// <summary>The forces of a machine (see <see cref="MagneticPullResult"/>).</summary>
+    public static MagneticPullResult Compute(MachineModel machine)
     {
-        var diags = new List<Diagnostic>();
-        var g = MagnetGeometry.FromDesign(d, diags);
-        var br = MagnetGrades.FromDesign(d.Magnets, diags);
-        if (g is null || br is null || diags.Any(x => x.Severity == DiagnosticSeverity.Error) || d.Machine.Poles < 2) return null;
-        var stack = AxialStack.From(d);
-        int poles = d.Machine.Poles;
+        var g = machine.Magnets.Shape;
+        double br = machine.Magnets.BrTesla;
+        var stack = machine.Stack;
+        int poles = machine.Poles;
         double far = RotorField.DefaultFarFactor;
-        var mags = stack.Slabs.Where(s => s.Kind == SlabKind.Magnet).OrderByDescending(s => s.ZMax).ToList();
-        var irons = stack.Slabs.Where(s => s.Kind == SlabKind.BackIron).OrderByDescending(s => s.ZMax).ToList();
-        bool iron = d.Rotor.BackIron is not null && d.Machine.Layout != "dual-stator" && irons.Count > 0;
+        var mags = stack.OfKind(SlabKind.Magnet).OrderByDescending(s => s.ZMax).ToList();
+        var irons = stack.OfKind(SlabKind.BackIron).OrderByDescending(s => s.ZMax).ToList();
+        bool iron = machine.Rotor.BackIronThicknessMm is not null && machine.Layout.AllowsBackIron && irons.Count > 0;
         List<MagnetSource> Ring(AxialSlab m) => Enumerable.Range(0, poles)
-            .Select(k => new MagnetSource(g, k * 360.0 / poles, m.ZMin, m.ZMax, (k % 2 == 0 ? 1 : -1) * br.Value, far)).ToList();
+            .Select(k => new MagnetSource(g, k * 360.0 / poles, m.ZMin, m.ZMax, (k % 2 == 0 ? 1 : -1) * br, far)).ToList();
         var front = Ring(mags[0]);
         var target = front[0];
         double frontIronPlane = iron ? irons[0].ZMin : 0;
@@ -73,7 +74,7 @@ public static class MagneticPull
         }
 
         double perMagnet = 0, faceToFace = 0;
-        if (d.Machine.Layout == "dual-rotor" && mags.Count == 2)
+        if (machine.Layout.StatorBetweenRotors && mags.Count == 2)
         {
             var back = Ring(mags[1]);
             var src = new List<MagnetSource>(back);
@@ -104,7 +105,7 @@ public static class MagneticPull
     }
 
     /// <summary>Quadrature points (rotor frame) and weights (mm^2) over a magnet's pole face.</summary>
-    public static ((double X, double Y)[] Points, double[] Weights) FacePoints(MagnetGeometry g, double centreDeg, double gapMm, int order)
+    public static ((double X, double Y)[] Points, double[] Weights) FacePoints(MagnetShape g, double centreDeg, double gapMm, int order)
     {
         double c = Math.Cos(centreDeg * Math.PI / 180), s = Math.Sin(centreDeg * Math.PI / 180);
         var pts = new List<(double, double)>();
@@ -114,19 +115,19 @@ public static class MagneticPull
             pts.Add((u * c - v * s, u * s + v * c));
             wts.Add(w);
         }
-        switch (g.Shape)
+        switch (g)
         {
-            case MagnetShape.Block:
+            case BlockMagnet blk:
             {
-                var (xu, wu) = GaussLegendre.Composite(Graded(g.PitchRadiusMm - g.LengthMm / 2, g.PitchRadiusMm + g.LengthMm / 2, gapMm, true, true), order, false);
-                var (xv, wv) = GaussLegendre.Composite(Graded(-g.WidthMm / 2, g.WidthMm / 2, gapMm, true, true), order, false);
+                var (xu, wu) = GaussLegendre.Composite(Graded(blk.PitchRadiusMm - blk.LengthMm / 2, blk.PitchRadiusMm + blk.LengthMm / 2, gapMm, true, true), order, false);
+                var (xv, wv) = GaussLegendre.Composite(Graded(-blk.WidthMm / 2, blk.WidthMm / 2, gapMm, true, true), order, false);
                 for (int i = 0; i < xu.Length; i++)
                     for (int j = 0; j < xv.Length; j++) Add(xu[i], xv[j], wu[i] * wv[j]);
                 break;
             }
-            case MagnetShape.Disc:
+            case DiscMagnet disc:
             {
-                double a = g.DiameterMm / 2;
+                double a = disc.DiameterMm / 2;
                 var (xr, wr) = GaussLegendre.Composite(Graded(0, a, gapMm, false, true), order, false);
                 int na = 48;
                 for (int i = 0; i < xr.Length; i++)
@@ -137,10 +138,10 @@ public static class MagneticPull
                     }
                 break;
             }
-            default:
+            case ArcMagnet arc:
             {
-                var (xr, wr) = GaussLegendre.Composite(Graded(g.InnerRadiusMm, g.OuterRadiusMm, gapMm, g.InnerRadiusMm > 0, true), order, false);
-                double half = g.SpanDeg * Math.PI / 360;
+                var (xr, wr) = GaussLegendre.Composite(Graded(arc.InnerRadiusMm, arc.OuterRadiusMm, gapMm, arc.InnerRadiusMm > 0, true), order, false);
+                double half = arc.SpanDeg * Math.PI / 360;
                 for (int i = 0; i < xr.Length; i++)
                 {
                     double arcGap = gapMm / Math.Max(xr[i], 1e-9);
@@ -149,8 +150,51 @@ public static class MagneticPull
                 }
                 break;
             }
+            default:
+            {
+                // Any other (convex) shape: a fan of triangles from the face's centre point, each mapped from the unit
+                // square (u from the centre to the edge, v along the edge) and graded towards the edge and its ends.
+                var poly = ConvexPolygon(g);
+                var c0 = new Vec2(poly.Average(q => q.X), poly.Average(q => q.Y));
+                var (xu, wu) = GaussLegendre.Composite(Graded(0, 1, gapMm / Math.Max(g.PlanSizeMm / 2, 1e-9), false, true), order, false);
+                for (int e = 0; e < poly.Length; e++)
+                {
+                    var p0 = poly[e];
+                    var p1 = poly[(e + 1) % poly.Length];
+                    double edge = (p1 - p0).Length;
+                    double area2 = (p0 - c0).Cross(p1 - c0); // twice the triangle's area
+                    var (xv, wv) = GaussLegendre.Composite(Graded(0, 1, gapMm / Math.Max(edge, 1e-9), true, true), order, false);
+                    for (int i = 0; i < xu.Length; i++)
+                        for (int j = 0; j < xv.Length; j++)
+                        {
+                            // (u, v) -> c0 + u ((1 - v) p0 + v p1 - c0); Jacobian u x twice the triangle's area.
+                            var q = c0 + ((p0 * (1 - xv[j]) + p1 * xv[j]) - c0) * xu[i];
+                            Add(q.X, q.Y, wu[i] * wv[j] * xu[i] * area2);
+                        }
+                }
+                break;
+            }
         }
         return (pts.ToArray(), wts.ToArray());
+    }
+
+    /// <summary>The outline of magnet 0 as a counter-clockwise polygon of its straight sides (arcs split finely).</summary>
+    private static Vec2[] ConvexPolygon(MagnetShape g)
+    {
+        var pts = new List<Vec2>();
+        foreach (var seg in PartForge.Geometry.Exact.Exact2D.SegmentsOf(g.Outline(0)))
+        {
+            if (seg is PartForge.Geometry.Profiles.ArcSegment a)
+            {
+                int n = Math.Max(4, (int)Math.Ceiling(Math.Abs(a.SweepDeg) / 2));
+                for (int i = 0; i < n; i++) pts.Add(a.Center + Vec2.FromAngleDeg(a.StartDeg + a.SweepDeg * i / n) * a.Radius);
+            }
+            else pts.Add(seg.Start);
+        }
+        double area = 0;
+        for (int i = 0; i < pts.Count; i++) area += pts[i].Cross(pts[(i + 1) % pts.Count]);
+        if (area < 0) pts.Reverse();
+        return pts.ToArray();
     }
 
     /// <summary>Breakpoints on [a, b] graded geometrically (ratio 2) towards the chosen ends, finest piece about gap/2.</summary>

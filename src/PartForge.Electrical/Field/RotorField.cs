@@ -1,3 +1,4 @@
+using PartForge.Design.Machines;
 using PartForge.Design.Stack;
 
 namespace PartForge.Electrical.Field;
@@ -60,19 +61,17 @@ public sealed class RotorField
         return s;
     }
 
-    /// <summary>Builds the sources for a design.</summary>
-    public static RotorField FromDesign(PartForge.Design.Model.Design d, MagnetGeometry g, double brTesla, AxialStack stack,
-        List<Diagnostic> diagnostics, double farFactor = DefaultFarFactor)
+    /// <summary>Builds the sources of a machine (its magnets, rings and back iron from the machine model and its stack).</summary>
+    public static RotorField From(MachineModel machine, double farFactor = DefaultFarFactor)
     {
-        int poles = d.Machine.Poles;
-        string layout = d.Machine.Layout;
-        var magnets = stack.Slabs.Where(s => s.Kind == SlabKind.Magnet).ToList();
-        var irons = stack.Slabs.Where(s => s.Kind == SlabKind.BackIron).ToList();
-        var copper = stack.Slabs.Where(s => s.Kind == SlabKind.Copper).OrderByDescending(s => s.ZMax).First();
-        bool iron = d.Rotor.BackIron is not null && layout != "dual-stator" && irons.Count > 0;
-        if (d.Rotor.BackIron is not null && layout == "dual-stator")
-            diagnostics.Add(new Diagnostic("back-iron-ignored", DiagnosticSeverity.Warning, "rotor.back_iron",
-                "rotor.back_iron is ignored in a dual-stator layout (the rotor sits between the two stators); remove it."));
+        int poles = machine.Poles;
+        var g = machine.Magnets.Shape;
+        double brTesla = machine.Magnets.BrTesla;
+        var stack = machine.Stack;
+        var magnets = stack.OfKind(SlabKind.Magnet).ToList();
+        var irons = stack.OfKind(SlabKind.BackIron).ToList();
+        var copper = stack.OfKind(SlabKind.Copper).OrderByDescending(s => s.ZMax).First();
+        bool iron = machine.Rotor.BackIronThicknessMm is not null && machine.Layout.AllowsBackIron && irons.Count > 0;
 
         List<MagnetSource> Ring(double z0, double z1) =>
             Enumerable.Range(0, poles).Select(k => new MagnetSource(g, k * 360.0 / poles, z0, z1, (k % 2 == 0 ? 1 : -1) * brTesla, farFactor)).ToList();
@@ -94,7 +93,7 @@ public sealed class RotorField
         }
 
         IReadOnlyList<MagnetSource>? half = null;
-        if (layout == "dual-rotor" && Math.Abs(copper.ZMin + copper.ZMax) < 1e-9)
+        if (machine.Layout.StatorBetweenRotors && Math.Abs(copper.ZMin + copper.ZMax) < 1e-9)
         {
             var h = new List<MagnetSource>();
             foreach (var r in rings) if (r.m.ZMin > 0) h.AddRange(r.ring);

@@ -48,7 +48,7 @@ public static class CoilFlux
         var breaks = new List<double> { rMin, rMax, outline.WindowMinRadiusMm, outline.WindowMaxRadiusMm };
         if (field.Sources.Count > 0)
         {
-            var g = field.Sources[0].Geometry;
+            var g = field.Sources[0].Shape;
             // The magnet's radial edges along its centre line (a block's corner radius is not an edge of the field).
             breaks.Add(g.PitchRadiusMm - g.RadialLengthMm / 2);
             breaks.Add(g.PitchRadiusMm + g.RadialLengthMm / 2);

@@ -1,10 +1,12 @@
+using PartForge.Design.Machines;
+
 namespace PartForge.Electrical.Sensors;
 
 /// <summary>Where the timing sensors go, and the rule used.</summary>
 public sealed record SensorLayout
 {
-    /// <summary>hall | reed | none.</summary>
-    public required string Kind { get; init; }
+    /// <summary>Hall, reed or none.</summary>
+    public required SensorKind Kind { get; init; }
     public required IReadOnlyList<SensorPlacement> Sensors { get; init; }
 
     /// <summary>1-phase pulse drive: the electrical rotor angle at which the coil is switched on (advance included), degrees; null for 3 phases.</summary>

@@ -1,3 +1,4 @@
+using PartForge.Design.Machines;
 using PartForge.Electrical.Coils;
 
 namespace PartForge.Electrical.Sensors;
@@ -25,17 +26,17 @@ namespace PartForge.Electrical.Sensors;
 public static class SensorPlanner
 {
     /// <summary>Plans the sensors. <paramref name="phaseZeroCrossElecDeg"/>: per phase, the electrical angle of its positive-going EMF zero crossing (fundamental).</summary>
-    public static SensorLayout Plan(PartForge.Design.Model.Sensor sensor, int poles, int phases, CoilOutline outline, int coils,
+    public static SensorLayout Plan(SensorSpec sensor, int poles, int phases, CoilOutline outline, int coils,
         IReadOnlyList<double> phaseZeroCrossElecDeg, List<Diagnostic> diagnostics)
     {
         int p = poles / 2;
         double r = outline.PitchRadiusMm;
-        if (sensor.Kind == "none")
-            return new SensorLayout { Kind = "none", Sensors = Array.Empty<SensorPlacement>(), Rule = "no sensor (sensor.kind: none)." };
-        double adv = sensor.AdvanceElec;
+        if (sensor.Kind == SensorKind.None)
+            return new SensorLayout { Kind = SensorKind.None, Sensors = Array.Empty<SensorPlacement>(), Rule = "no sensor (sensor.kind: none)." };
+        double adv = sensor.AdvanceElecDeg;
         if (phases == 3)
         {
-            if (sensor.Count != 3 || sensor.Kind != "hall")
+            if (sensor.Count != 3 || sensor.Kind != SensorKind.Hall)
                 diagnostics.Add(new Diagnostic("sensor-count-3phase", DiagnosticSeverity.Warning, "sensor.count",
                     "a 3-phase six-step drive needs 3 hall sensors; set sensor.kind: hall and sensor.count: 3 (3 halls are reported)."));
             var placed = new List<SensorPlacement>();
@@ -82,7 +83,7 @@ public static class SensorPlanner
         return new SensorLayout
         {
             Kind = sensor.Kind, Sensors = new[] { b1 }, SwitchOnElecDeg = NormSigned(on),
-            Rule = sensor.Kind == "reed"
+            Rule = sensor.Kind == SensorKind.Reed
                 ? "reed centred where the field changes sign when the coil must switch on (EMF zero crossing going positive, minus the advance); the real edge depends on the reed's pull-in distance."
                 : "hall where the field it sees changes sign at the instant the coil must switch on (EMF zero crossing going positive, minus the advance).",
         };
@@ -98,10 +99,10 @@ public static class SensorPlanner
     }
 
     private static SensorPlacement Make(string label, double angDeg, double r, int p, bool inverted, CoilOutline outline, int coils,
-        PartForge.Design.Model.SensorBody body)
+        SensorBody body)
     {
         double clearance = double.MaxValue;
-        foreach (double rr in new[] { r - body.Length / 2, r, r + body.Length / 2 })
+        foreach (double rr in new[] { r - body.LengthMm / 2, r, r + body.LengthMm / 2 })
         {
             double? h = HalfAngle(outline, rr);
             if (h is null || rr <= 0) continue;
@@ -109,7 +110,7 @@ public static class SensorPlanner
             {
                 double d = AngleDist(angDeg, 360.0 * k / coils) - h.Value; // free angle to this coil's edge
                 double tangential = 2 * rr * Math.Sin(d * Math.PI / 360); // chord, negative when inside the coil
-                clearance = Math.Min(clearance, tangential - body.Width / 2);
+                clearance = Math.Min(clearance, tangential - body.WidthMm / 2);
             }
         }
         if (clearance == double.MaxValue) clearance = Math.Max(0, r); // the circle misses every coil

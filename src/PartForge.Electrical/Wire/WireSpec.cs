@@ -46,45 +46,7 @@ public sealed record WireSpec
     /// <summary>AWG wire (ASTM B258 formula diameter) of the given grade.</summary>
     public static WireSpec OfAwg(int awg, int grade) => Of(WireGauge.AwgDiameterMm(awg), grade, awg);
 
-    /// <summary>
-    /// Resolves the design's wire. Problems become diagnostics; the result is null only when no diameter can
-    /// be found at all.
-    /// </summary>
-    public static WireSpec? FromDesign(PartForge.Design.Model.Coils coils, List<Diagnostic> diagnostics)
-    {
-        int? grade = Wire.EnamelGrade.Parse(coils.Enamel);
-        if (grade is null)
-        {
-            diagnostics.Add(new Diagnostic("wire-enamel-unknown", DiagnosticSeverity.Error, "coils.enamel",
-                $"coils.enamel '{coils.Enamel}' is not a known enamel grade; use grade-1, grade-2 or grade-3."));
-            grade = 2;
-        }
-        var w = coils.Wire;
-        if (w.Awg is { } awg && w.Diameter is { } dd)
-            diagnostics.Add(new Diagnostic("wire-both-given", DiagnosticSeverity.Warning, "coils.wire",
-                FormattableString.Invariant($"coils.wire gives both awg {awg} and diameter {dd}; using awg {awg}. Give only one.")));
-        if (w.Awg is { } n)
-        {
-            if (n < 0 || n > 50)
-            {
-                diagnostics.Add(new Diagnostic("wire-awg-range", DiagnosticSeverity.Error, "coils.wire.awg",
-                    FormattableString.Invariant($"coils.wire.awg {n} is outside 0..50; give an AWG between 0 and 50.")));
-                return null;
-            }
-            return OfAwg(n, grade.Value);
-        }
-        if (w.Diameter is { } d)
-        {
-            if (!(d > 0) || !double.IsFinite(d))
-            {
-                diagnostics.Add(new Diagnostic("wire-diameter-range", DiagnosticSeverity.Error, "coils.wire.diameter",
-                    "coils.wire.diameter must be a positive bare copper diameter in mm."));
-                return null;
-            }
-            return Of(d, grade.Value);
-        }
-        diagnostics.Add(new Diagnostic("wire-missing", DiagnosticSeverity.Error, "coils.wire",
-            "coils.wire gives neither awg nor diameter; add e.g. coils.wire: { awg: 28 }."));
-        return null;
-    }
+    /// <summary>The machine's wire: its AWG number or bare diameter, with the enamel grade.</summary>
+    public static WireSpec From(PartForge.Design.Machines.WireSize size, int grade) =>
+        size.Awg is { } n ? OfAwg(n, grade) : Of(size.BareDiameterMm ?? throw new ArgumentException("the wire has neither an AWG nor a diameter", nameof(size)), grade);
 }

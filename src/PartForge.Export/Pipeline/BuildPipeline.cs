@@ -1,55 +1,24 @@
 using PartForge.Checks;
 using PartForge.Design.Loading;
-using PartForge.Electrical;
-using PartForge.Export.Bom;
+using PartForge.Design.Machines;
+using PartForge.Design.Parts;
+using PartForge.Export.Exporters;
 using PartForge.Export.Report;
 using PartForge.Export.Results;
-using PartForge.Formats.Cutting;
-using PartForge.Formats.Dxf;
-using PartForge.Formats.Stl;
-using PartForge.Formats.Svg;
-using PartForge.Formats.ThreeMf;
 using PartForge.Geometry;
 using PartForge.Parts;
 
 namespace PartForge.Export.Pipeline;
 
 /// <summary>
-/// The whole job: load -> electrical -> parts -> checks -> gate -> export. The gate: if any check fails,
-/// nothing is written (unless forced, and then the results and report say so). Outputs go only into the
-/// output folder, each through an atomic write, in a fixed order, so two builds give identical files.
+/// The whole job: load -> stages (electrical, parts, checks; <see cref="Stages"/>) -> gate -> export. The gate:
+/// if any check fails, nothing is written (unless forced, and then the results and report say so). Outputs go
+/// only into the output folder, each through an atomic write, in a fixed order, so two builds give identical files.
 /// </summary>
 public static class BuildPipeline
 {
-    /// <summary>Electrical results, parts and checks of a loaded design (no files). Thread-safe; used by sweeps.</summary>
-    public static Evaluation Evaluate(Design.Model.Design design, CheckOptions? options = null) => Evaluate(design, options, null);
-
-    private static Evaluation Evaluate(Design.Model.Design design, CheckOptions? options, StageClock? clock)
-    {
-        var electrical = ElectricalEngine.Evaluate(design);
-        clock?.Lap("electrical");
-        if (electrical.Coil?.Outline == null)
-        {
-            // Without a resolved coil there is nothing to build or measure: the electrical errors are the checks.
-            var fails = electrical.Diagnostics.Where(x => x.Severity == Electrical.DiagnosticSeverity.Error).Select(x => new CheckResult
-            {
-                Id = x.Id, Part = "former", Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0,
-                Message = x.Key.Length > 0 ? $"{x.Key}: {x.Message}" : x.Message,
-            }).ToList();
-            if (fails.Count == 0)
-                fails.Add(new CheckResult
-                {
-                    Id = "coil-unresolved", Part = "former", Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0,
-                    Message = "the coil could not be resolved from the coils section, so no parts can be made",
-                });
-            return new Evaluation(design, electrical, null, new CheckReport(fails));
-        }
-        var parts = PartsBuilder.Build(design, electrical, Precision.FromChordalTolerance(design.Mesh.ChordalTolerance));
-        clock?.Lap("parts");
-        var checks = CheckRunner.Run(design, electrical, parts, options);
-        clock?.Lap("checks");
-        return new Evaluation(design, electrical, parts, checks);
-    }
+    /// <summary>Electrical results, parts and checks of a loaded machine (no files). Thread-safe; used by sweeps.</summary>
+    public static Evaluation Evaluate(MachineModel machine, CheckOptions? options = null) => Stages.Evaluate(machine, options);
 
     /// <summary><c>partforge check</c>: load, evaluate, results document; writes nothing.</summary>
     /// <param name="meshes">Mesh the parts for the triangle counts of the results document (check --json); the
@@ -58,7 +27,7 @@ public static class BuildPipeline
     {
         var loaded = DesignLoader.Load(designPath);
         if (!loaded.Success) return Bad(loaded.Errors.Select(e => e.ToString()));
-        var (ev, problem) = TryEvaluate(loaded.Design!, designPath);
+        var (ev, problem) = TryEvaluate(loaded.Machine!, designPath);
         if (ev == null) return Bad([problem!]);
         bool countTriangles = meshes;
         if (meshes && ev.Parts != null && MeshProblem(ev, ev.Parts.Parts, designPath) is { } meshProblem)
@@ -83,8 +52,8 @@ public static class BuildPipeline
     {
         var clock = new StageClock();
         var problems = new List<string>();
-        var formats = ExportFormats.ParseList(request.Formats, ExportFormats.All, "--formats", problems) ?? ExportFormats.All.ToHashSet();
-        var partFilter = ExportFormats.ParseList(request.Parts, ExportFormats.PartNames, "--parts", problems);
+        var formats = ExportFormats.ParseFormats(request.Formats, problems) ?? ExportRegistry.All;
+        var partWords = ExportFormats.ParseList(request.Parts, ExportFormats.PartNames, "--parts", problems);
         var folder = OutputFolder.Prepare(request.OutputDir, out var folderProblem);
         if (folderProblem != null) problems.Add(folderProblem);
         var loaded = DesignLoader.Load(request.DesignPath);
@@ -92,13 +61,19 @@ public static class BuildPipeline
         if (problems.Count > 0) return Bad(problems);
         clock.Lap("load");
 
-        var (ev, problem) = TryEvaluate(loaded.Design!, request.DesignPath, clock);
+        var (ev, problem) = TryEvaluate(loaded.Machine!, request.DesignPath, clock);
         if (ev == null) return Bad([problem!]);
-        if (partFilter != null && ev.Parts != null)
+        HashSet<PartId>? partFilter = null;
+        if (partWords != null && ev.Parts != null)
         {
-            var names = ev.Parts.Parts.Select(p => p.Name).ToArray();
-            foreach (var n in partFilter.Where(n => !names.Contains(n)))
-                problems.Add($"--parts: this design has no part '{n}'; its parts: {string.Join(", ", names)}");
+            var ids = ev.Parts.Parts.Select(p => p.Id).ToArray();
+            partFilter = new HashSet<PartId>();
+            foreach (var w in partWords)
+            {
+                var chosen = PartNames.Select(w).Where(ids.Contains).ToArray();
+                if (chosen.Length == 0) problems.Add($"--parts: this design has no part '{w}'; its parts: {string.Join(", ", ids.Select(i => i.Name))}");
+                partFilter.UnionWith(chosen);
+            }
             if (problems.Count > 0) return Bad(problems);
         }
         bool failed = ev.Checks.HasFailures;
@@ -117,7 +92,7 @@ public static class BuildPipeline
         if (MeshProblem(ev, plan.MeshedParts(ev.Parts), request.DesignPath) is { } meshProblem) return Bad([meshProblem]);
         clock.Lap("mesh");
         var doc = ResultsBuilder.Build(ev, plan.FilesByPart, forced: failed, countTriangles: plan.WritesResults);
-        var previews = RenderPreviews(plan, ev.Parts);
+        var context = new ExportContext(ev, doc, failed, RenderPreviews(plan.Previews(), ev.Parts));
         clock.Lap("previews");
         var written = new List<string>();
         try
@@ -126,7 +101,7 @@ public static class BuildPipeline
             folder.Create();
             foreach (var f in plan.Files)
             {
-                WriteOne(folder, f, ev, doc, failed, previews);
+                folder.Write(f.Name, s => f.Format.Write(s, f, context));
                 written.Add(f.Name);
             }
         }
@@ -151,87 +126,27 @@ public static class BuildPipeline
         };
     }
 
-    private static void WriteOne(OutputFolder folder, ExportPlan.FileSpec f, Evaluation ev, ResultsDocument doc, bool forced, IReadOnlyDictionary<string, byte[]> previews)
-    {
-        var d = ev.Design;
-        var parts = ev.Parts!;
-        switch (f.Format)
-        {
-            case "stl":
-                folder.Write(f.Name, s => StlWriter.WriteBinary(s, f.Part!.Mesh, StlWriter.SafeName(d.Name + "-" + f.Part.Name)));
-                break;
-            case "3mf" when f.Assembly:
-                var placed = AssemblyThreeMf.Objects(parts);
-                folder.Write(f.Name, s => ThreeMfWriter.Write(s, AssemblyThreeMf.Title(d.Name), placed));
-                break;
-            case "3mf":
-                var objects = f.Parts.Select(p => ThreeMfObject.At(p.Name, p.Mesh)).ToArray();
-                folder.Write(f.Name, s => ThreeMfWriter.Write(s, d.Name, objects));
-                break;
-            case "dxf":
-                var contours = d.Process.DxfContours == "entities" ? DxfContours.Entities : DxfContours.Polyline;
-                folder.Write(f.Name, s => DxfWriter.Write(s, CutSheetOf(d, f.Part!), contours));
-                break;
-            case "svg":
-                folder.Write(f.Name, s => SvgWriter.Write(s, CutSheetOf(d, f.Part!)));
-                break;
-            case "png":
-                folder.Write(f.Name, previews[f.Part?.Name ?? AssemblyPreview]);
-                break;
-            case "json":
-                folder.Write(f.Name, ResultsJson.ToUtf8(doc));
-                break;
-            case "csv":
-            {
-                var e = ElectricalView.From(d, ev.Electrical);
-                folder.Write(f.Name, BomCsv.WriteUtf8(BomBuilder.Build(d, e.TotalWireM, e.WireGramsPerMetre, ReportBuilder.BomParts(parts))));
-                break;
-            }
-            case "html":
-            {
-                var e = ElectricalView.From(d, ev.Electrical);
-                var shown = parts.Parts.Where(p => p.Process == PartProcess.Print).Select(p => (p.Name, previews[p.Name])).ToArray();
-                folder.WriteText(f.Name, HtmlReport.Render(ReportBuilder.Build(d, e, parts, ev.Checks, forced, shown)));
-                break;
-            }
-            default:
-                throw new InvalidOperationException($"no writer for format {f.Format}");
-        }
-    }
-
-    private const string AssemblyPreview = "\0assembly";
-
     /// <summary>
-    /// Every preview the planned files show (a part's PNG, the assembly PNG, the report's pictures of the
-    /// printed parts), each rendered once and all of them side by side on the machine's cores. Each picture is
-    /// a pure function of its meshes, so the bytes do not depend on the order or the thread.
+    /// Every preview the planned files show, each rendered once and all of them side by side on the machine's
+    /// cores. Each picture is a pure function of its meshes, so the bytes do not depend on the order or the thread.
     /// </summary>
-    private static IReadOnlyDictionary<string, byte[]> RenderPreviews(ExportPlan plan, PartSet parts)
+    private static IReadOnlyDictionary<PreviewKey, byte[]> RenderPreviews(IReadOnlyList<PreviewKey> keys, PartSet parts)
     {
-        var keys = new SortedSet<string>(StringComparer.Ordinal);
-        foreach (var f in plan.Files)
-        {
-            if (f.Format == "png") keys.Add(f.Part?.Name ?? AssemblyPreview);
-            if (f.Format == "html") foreach (var p in parts.Parts.Where(p => p.Process == PartProcess.Print)) keys.Add(p.Name);
-        }
-        var result = new System.Collections.Concurrent.ConcurrentDictionary<string, byte[]>(StringComparer.Ordinal);
+        var result = new System.Collections.Concurrent.ConcurrentDictionary<PreviewKey, byte[]>();
         Parallel.ForEach(keys, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, k =>
-            result[k] = k == AssemblyPreview ? Previews.Assembly(parts) : Previews.Part(parts.Get(k)));
+            result[k] = k.Part is { } id ? Previews.Part(parts.Get(id)) : Previews.Assembly(parts));
         return result;
     }
 
-    private static CutSheet CutSheetOf(Design.Model.Design d, PartModel p) =>
-        new(p.Name, p.CutProfile ?? throw new InvalidOperationException($"cut part {p.Name} has no cut profile"), p.Marks, d.Process.Kerf);
-
-    private static (Evaluation? Ev, string? Problem) TryEvaluate(Design.Model.Design d, string file, StageClock? clock = null)
+    private static (Evaluation? Ev, string? Problem) TryEvaluate(MachineModel d, string file, StageClock? clock = null)
     {
         if (MeshBudget.Check(d, file) is { } tooFine) return (null, tooFine);
         clock?.Lap("budget");
         try
         {
-            var ev = Evaluate(d, null, clock);
+            var ev = Stages.Evaluate(d, null, clock is null ? null : clock.Lap);
             if (ev.Parts is { HasErrors: true } ps)
-                return (null, string.Join("; ", ps.Diagnostics.Where(x => x.Severity == Parts.DiagnosticSeverity.Error).Select(x => $"{file}: {x.Part}: {x.Message}")));
+                return (null, string.Join("; ", ps.Diagnostics.Where(x => x.Severity == Parts.DiagnosticSeverity.Error).Select(x => $"{file}: {x.Part.Name}: {x.Message}")));
             return (ev, null);
         }
         catch (PartsException ex)
@@ -253,7 +168,7 @@ public static class BuildPipeline
         // Mesh the parts side by side on the machine's cores, heaviest first and never more than half of the
         // estimated work at once (MeshSchedule; each mesh is made once, thread-safe, and is a pure function of
         // its part); then report in part order, so the first problem named is always the same one.
-        MeshSchedule.MeshAll(list, ev.Design.Mesh.ChordalTolerance);
+        MeshSchedule.MeshAll(list, ev.Machine.ChordalToleranceMm);
         foreach (var p in list)
         {
             try
@@ -270,7 +185,7 @@ public static class BuildPipeline
     }
 
     private static IReadOnlyList<string> FailLines(CheckReport r) =>
-        r.Checks.Where(c => c.Status == CheckStatus.Fail).Select(c => $"check {c.Id} failed on {c.Part}: {c.Message}").ToArray();
+        r.Checks.Where(c => c.Status == CheckStatus.Fail).Select(c => $"check {c.Id} failed on {c.PartName}: {c.Message}").ToArray();
 
     private static PipelineResult Bad(IEnumerable<string> problems) => new() { Status = PipelineStatus.BadInput, Problems = problems.ToArray() };
 

@@ -1,13 +1,24 @@
+using PartForge.Design.Parts;
+using PartForge.Export.Exporters;
+
 namespace PartForge.Export.Pipeline;
 
-/// <summary>The words of <c>--formats</c> and <c>--parts</c>, and their parsing with the allowed list on error.</summary>
+/// <summary>Parsing of <c>--formats</c> and <c>--parts</c> against their allowed words, with the allowed list on error.</summary>
 public static class ExportFormats
 {
-    /// <summary>Every export format, in the order outputs are written.</summary>
-    public static readonly IReadOnlyList<string> All = ["stl", "3mf", "dxf", "svg", "json", "html", "csv", "png"];
+    /// <summary>Every export format's word, in the order outputs are written.</summary>
+    public static IReadOnlyList<string> All => ExportRegistry.Names;
 
-    /// <summary>Every part name of the contract.</summary>
-    public static readonly IReadOnlyList<string> PartNames = ["rotor", "rotor-front", "rotor-back", "back-iron", "former", "stator", "stator-front", "stator-back", "spacer"];
+    /// <summary>Every word <c>--parts</c> takes: the contract's part names and the spacer alias.</summary>
+    public static IReadOnlyList<string> PartNames => Design.Parts.PartNames.All;
+
+    /// <summary>The formats a <c>--formats</c> list names; null list = all.</summary>
+    public static IReadOnlyCollection<ExportFormat>? ParseFormats(string? list, List<string> problems) =>
+        ParseList(list, All, "--formats", problems)?.Select(w => ExportRegistry.Find(w)!).ToArray();
+
+    /// <summary>The parts a <c>--parts</c> list names (the spacer alias names every spacer role); null list = all.</summary>
+    public static IReadOnlySet<PartId>? ParseParts(string? list, List<string> problems) =>
+        ParseList(list, PartNames, "--parts", problems)?.SelectMany(Design.Parts.PartNames.Select).ToHashSet();
 
     /// <summary>Parses a comma-separated list against allowed words; null list = all. Problems are one line each.</summary>
     public static IReadOnlySet<string>? ParseList(string? list, IReadOnlyList<string> allowed, string option, List<string> problems)

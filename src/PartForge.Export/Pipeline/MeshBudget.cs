@@ -1,5 +1,8 @@
 using System.Globalization;
 using PartForge.Design.Keys;
+using PartForge.Design.Machines;
+using PartForge.Geometry.Exact;
+using PartForge.Geometry.Profiles;
 
 namespace PartForge.Export.Pipeline;
 
@@ -8,9 +11,9 @@ namespace PartForge.Export.Pipeline;
 /// absurdly fine <c>mesh.chordal_tolerance</c> is refused at once (exit 2) instead of after minutes or an
 /// out-of-memory death.
 ///
-/// Estimate: every circle and arc of every distinct part (rims, bores, pockets, bolt and mount holes, coil
-/// seats, former flanges and cores; coil sizes approximated from the magnet size, the coil not being known
-/// yet) gets the kernel's segment count n = ceil(pi / acos(1 - e / r)) (ArcSegmentation); a part's mesh has
+/// Estimate: every circle and arc of every distinct part (rims, bores, the arcs of the pocket outline, bolt and
+/// mount holes, coil seats, former flanges and cores; coil sizes approximated from the magnet size, the coil not
+/// being known yet) gets the kernel's segment count n = ceil(pi / acos(1 - e / r)) (ArcSegmentation); a part's mesh has
 /// about <see cref="TrianglesPerSegment"/> triangles per boundary segment (a wall quad on each layer it
 /// bounds plus its share of the caps; fitted on the bundled presets at e = 0.01 mm, where the estimate is
 /// 1.1 to 1.6 times the real count, so it errs on the high side).
@@ -24,9 +27,9 @@ public static class MeshBudget
     public const double TrianglesPerSegment = 7;
 
     /// <summary>The refusal message, or null when the design fits the budget.</summary>
-    public static string? Check(Design.Model.Design d, string file)
+    public static string? Check(MachineModel d, string file)
     {
-        double tol = d.Mesh.ChordalTolerance;
+        double tol = d.ChordalToleranceMm;
         double est = Estimate(d, tol);
         if (est <= MaxTriangles) return null;
         double fit = SmallestTolerance(d);
@@ -35,60 +38,57 @@ public static class MeshBudget
     }
 
     /// <summary>Estimated triangles of all distinct parts at chordal tolerance <paramref name="tol"/>.</summary>
-    public static double Estimate(Design.Model.Design d, double tol)
+    public static double Estimate(MachineModel d, double tol)
     {
         double seg = 0;
         void Circle(double r, int count = 1) { if (r > 0 && count > 0) seg += count * Segments(r, tol); }
         void Arc(double r, double sweepDeg, int count) { if (r > 0 && count > 0) seg += count * Math.Max(1, Segments(r, tol) * sweepDeg / 360); }
-
-        var m = d.Machine;
-        var mg = d.Magnets;
-        var r = d.Rotor;
-        int rotors = m.Layout == "dual-rotor" ? 2 : 1;
-        int stators = m.Layout == "dual-stator" ? 2 : 1;
-        double c = r.PocketClearance;
-        // The magnet's half size: the scale of pockets, coils and seats.
-        double half = mg.Shape switch
+        // Every arc and circle of a contour (a pocket's outline), count times.
+        void Outline(Contour c, int count)
         {
-            "disc" => (mg.Diameter ?? 0) / 2,
-            "block" => Math.Max(mg.Length ?? 0, mg.Width ?? 0) / 2,
-            _ => ((mg.OuterRadius ?? 0) - (mg.InnerRadius ?? 0)) / 2,
-        };
+            foreach (var s in Exact2D.SegmentsOf(c))
+                if (s is ArcSegment a) Arc(a.Radius, Math.Abs(a.SweepDeg), count);
+        }
+
+        var r = d.Rotor;
+        var shape = d.Magnets.Shape;
+        int rotors = d.Layout.Rotors.Count;
+        int stators = d.Layout.Stators.Count;
+        double c = r.PocketClearanceMm;
+        // The magnet's half size: the scale of coils and seats.
+        double half = shape.PlanSizeMm / 2;
+        var pocket = shape.Outline(c);
         for (int i = 0; i < rotors; i++)
         {
-            Circle(r.OuterDiameter / 2);
-            Circle(r.Bore / 2);
-            if (mg.Shape == "disc") Circle((mg.Diameter ?? 0) / 2 + c / 2, m.Poles);
-            if (mg.Shape == "arc")
-            {
-                Arc((mg.InnerRadius ?? 0) - c / 2, mg.Span ?? 0, m.Poles);
-                Arc((mg.OuterRadius ?? 0) + c / 2, mg.Span ?? 0, m.Poles);
-            }
-            if (r.BoltCircle is { } bc) Circle(bc.Hole / 2, bc.Count);
+            Circle(r.OuterDiameterMm / 2);
+            Circle(r.BoreMm / 2);
+            Outline(pocket, d.Poles);
+            if (r.BoltCircle is { } bc) Circle(bc.HoleMm / 2, bc.Count);
         }
-        if (r.BackIron != null)
+        if (r.BackIronThicknessMm != null)
         {
-            Circle(r.OuterDiameter / 2);
-            Circle(r.Bore / 2);
-            if (r.BoltCircle is { } bc) Circle(bc.Hole / 2, bc.Count);
+            Circle(r.OuterDiameterMm / 2);
+            Circle(r.BoreMm / 2);
+            if (r.BoltCircle is { } bc) Circle(bc.HoleMm / 2, bc.Count);
         }
-        double coilR = (d.Coils.Core.Diameter ?? d.Coils.Core.Width ?? 0) / 2 + half + d.Former.Margin;
+        double core = d.Coils.CoreMm ?? 0;
+        double coilR = core / 2 + half + d.Former.MarginMm;
         for (int i = 0; i < stators; i++)
         {
-            Circle(d.Stator.OuterDiameter / 2);
-            Circle(d.Stator.InnerDiameter / 2);
-            Circle(coilR, m.Coils);
-            if (d.Stator.Mount is { } mt) Circle(mt.Hole / 2, mt.Count);
+            Circle(d.Stator.OuterDiameterMm / 2);
+            Circle(d.Stator.InnerDiameterMm / 2);
+            Circle(coilR, d.CoilsPerStator);
+            if (d.Stator.Mount is { } mt) Circle(mt.HoleMm / 2, mt.Count);
         }
-        Circle(coilR);                                                       // former flange
-        Circle(Math.Max((d.Coils.Core.Diameter ?? d.Coils.Core.Width ?? 0) / 2, 0.5)); // former core
-        Circle(r.Bore / 2 + 5);                                              // spacer
-        Circle(r.Bore / 2);
+        Circle(coilR);                                 // former flange
+        Circle(Math.Max(core / 2, 0.5));               // former core
+        Circle(r.BoreMm / 2 + 5);                      // spacer
+        Circle(r.BoreMm / 2);
         return seg * TrianglesPerSegment;
     }
 
     /// <summary>The smallest chordal tolerance whose estimate fits the budget (bisection on the monotone estimate).</summary>
-    public static double SmallestTolerance(Design.Model.Design d)
+    public static double SmallestTolerance(MachineModel d)
     {
         double lo = 1e-12, hi = 10;
         if (Estimate(d, hi) > MaxTriangles) return hi;

@@ -1,4 +1,5 @@
 using PartForge.Geometry.Profiles;
+using PartForge.Geometry.Solids;
 using PartForge.Parts;
 
 namespace PartForge.Export.Pipeline;
@@ -7,7 +8,7 @@ namespace PartForge.Export.Pipeline;
 /// Makes the meshes of a set of parts side by side on the machine's cores, heaviest first, with at most half
 /// of the set's estimated work in the mesher at any moment (the heaviest part may always run, alone if it
 /// needs more). A part's work is its estimated triangles (<c>MeshBudget.EstimateTriangles</c>), doubled when
-/// the cuts of one of its layers may overlap (<see cref="PartsBuilder.CutsMayOverlap"/>): such a layer's
+/// the cuts of one of its layers may overlap (<see cref="ExactSolid.CutsMayOverlap"/>): such a layer's
 /// region is made by booleans, whose working set is about twice that of a region assembled directly.
 /// Making a part's solid and mesh needs one to two times its mesh size beside the finished meshes, so two
 /// large parts at once would hold two such working sets; with the cap, and the heaviest part first (while
@@ -27,7 +28,7 @@ internal static class MeshSchedule
     {
         if (parts.Count == 0) return;
         var est = parts.Select(p => Math.Max(1, PartForge.Geometry.Meshes.MeshBudget.EstimateTriangles(p.ExactLayers.Select(l => new Profile(l.Outers, l.Cuts)), chordalToleranceMm))
-            * (p.ExactLayers.Any(PartsBuilder.CutsMayOverlap) ? 2 : 1)).ToArray();
+            * (p.ExactLayers.Any(ExactSolid.CutsMayOverlap) ? 2 : 1)).ToArray();
         var pending = Enumerable.Range(0, parts.Count).OrderByDescending(i => est[i]).ThenBy(i => i).ToList();
         double total = est.Sum(), cap = Math.Max(InFlightShare * total, est.Max());
         double inFlight = 0;

@@ -1,4 +1,5 @@
 using System.Globalization;
+using PartForge.Design.Machines;
 using PartForge.Electrical;
 using PartForge.Electrical.Wire;
 using PartForge.Export.Drawings;
@@ -11,12 +12,12 @@ public static class ElectricalView
     private static readonly string[] PhaseColours = ["#b3261e", "#2f6f68", "#3a5ba0"];
 
     /// <summary>Coils in the whole machine (dual-stator: both stators).</summary>
-    public static int CoilsInMachine(Design.Model.Design d) => d.Machine.Coils * (d.Machine.Layout == "dual-stator" ? 2 : 1);
+    public static int CoilsInMachine(MachineModel d) => d.CoilsInMachine;
 
     /// <summary>The engine's wire total for the machine: one coil's wire (turns and leads) times the coils, m.</summary>
-    public static double TotalWireM(Design.Model.Design d, ElectricalResult r) => (r.Coil?.WireLengthM ?? 0) * CoilsInMachine(d);
+    public static double TotalWireM(MachineModel d, ElectricalResult r) => (r.Coil?.WireLengthM ?? 0) * CoilsInMachine(d);
 
-    public static ReportElectrical From(Design.Model.Design d, ElectricalResult r)
+    public static ReportElectrical From(MachineModel d, ElectricalResult r)
     {
         var coil = r.Coil ?? throw new InvalidOperationException("the electrical result has no coil; the report needs one");
         var outline = coil.Outline ?? throw new InvalidOperationException("the electrical result has no coil outline");
@@ -41,7 +42,7 @@ public static class ElectricalView
         };
         if (r.Phase is { } ph)
         {
-            rows.Add(new("connection, coils in series per phase", $"{ph.Connection}, {ph.CoilsInSeries}", "", "phase.coils_in_series"));
+            rows.Add(new("connection, coils in series per phase", $"{Words.Of(ph.Connection)}, {ph.CoilsInSeries}", "", "phase.coils_in_series"));
             rows.Add(new("phase EMF at rated speed, peak / rms", $"{F(ph.EmfPeakV, 3)} / {F(ph.EmfRmsV, 3)}", "V", "phase.emf_rms_v"));
             rows.Add(new("phase resistance at 20 C / hot", $"{F(ph.Resistance20COhm, 4)} / {F(ph.ResistanceHotOhm, 4)}", "ohm", "phase.resistance_20c_ohm"));
             rows.Add(new("phase EMF distortion (THD)", F(ph.ThdPercent, 2), "%", "phase.thd_percent"));
@@ -83,7 +84,7 @@ public static class ElectricalView
                 ["coil", "angle, deg", "phase", "direction"],
                 r.Winding.Table.Select(c => (IReadOnlyList<string>)[I(c.Coil + 1), F(c.AngleDeg, 2), c.Phase.ToString(), c.Direction > 0 ? "forward" : "reversed"]).ToArray()));
         if (r.Sensors is { } s && s.Sensors.Count > 0)
-            tables.Add(new ReportTable($"Timing sensors ({s.Kind}): {s.Rule}",
+            tables.Add(new ReportTable($"Timing sensors ({Words.Of(s.Kind)}): {s.Rule}",
                 ["sensor", "angle, deg", "radius, mm", "electrical deg", "fits between coils"],
                 s.Sensors.Select(p => (IReadOnlyList<string>)[p.Label, F(p.AngleDeg, 2), F(p.RadiusMm, 2), F(p.ElectricalDeg, 1), p.Fits ? "yes" : $"no ({F(p.ClearanceMm, 2)} mm)"]).ToArray()));
 

@@ -1,4 +1,6 @@
 using System.Globalization;
+using PartForge.Design.Machines;
+using PartForge.Design.Parts;
 using PartForge.Export.Drawings;
 using PartForge.Geometry.Primitives;
 using PartForge.Geometry.Profiles;
@@ -20,7 +22,7 @@ public static class PartSketches
         FeatureKind.TerminalExit, FeatureKind.LeadSlot, FeatureKind.SpindleHole,
     ];
 
-    public static PartSketch For(Design.Model.Design d, PartModel p)
+    public static PartSketch For(MachineModel d, PartModel p)
     {
         var (outline, blind, marks) = Geometry(p);
         var o = new Vec2(0, 0);
@@ -30,68 +32,65 @@ public static class PartSketches
         var linear = new List<LinearDimension>();
         string title = p.Name;
 
-        if (p.Name.StartsWith("rotor", StringComparison.Ordinal))
+        if (p.Role == PartRole.Rotor)
         {
             var r = d.Rotor;
-            dias.Add(new("outer_diameter", o, r.OuterDiameter, 35, $"D{F(r.OuterDiameter)}"));
-            if (r.Bore > 0) dias.Add(new("bore", o, r.Bore, 145, $"D{F(r.Bore)} bore"));
-            var m = d.Magnets;
-            if (m.PitchRadius is { } pr) dias.Add(new("pitch_circle", o, 2 * pr, 205, $"PCD {F(2 * pr)} magnets", DrawCircle: true));
+            dias.Add(new("outer_diameter", o, r.OuterDiameterMm, 35, $"D{F(r.OuterDiameterMm)}"));
+            if (r.BoreMm > 0) dias.Add(new("bore", o, r.BoreMm, 145, $"D{F(r.BoreMm)} bore"));
+            var shape = d.Magnets.Shape;
+            double pr = shape.PitchRadiusMm;
+            dias.Add(new("pitch_circle", o, 2 * pr, 205, $"PCD {F(2 * pr)} magnets", DrawCircle: true));
             var pocket0 = p.FeaturesOf(FeatureKind.MagnetPocket).FirstOrDefault();
             var target = pocket0?.Position ?? o;
-            double c = r.PocketClearance;
-            double depth = r.PocketFloor > 0 ? r.Thickness - r.PocketFloor : r.Thickness;
-            string kind = r.PocketFloor > 0 ? $"{F(depth)} deep" : "through";
-            notes.Add(m.Shape switch
-            {
-                "disc" => new PatternNote("pocket_count", d.Machine.Poles, "pocket_diameter", (m.Diameter ?? 0) + c, target, -28,
-                    $"{d.Machine.Poles} x D{F((m.Diameter ?? 0) + c)} pockets, {kind}"),
-                "block" => new PatternNote("pocket_count", d.Machine.Poles, "pocket_length", (m.Length ?? 0) + c, target, -28,
-                    $"{d.Machine.Poles} x {F((m.Length ?? 0) + c)} x {F((m.Width ?? 0) + c)} pockets, {kind}") { Size2Id = "pocket_width", Size2 = (m.Width ?? 0) + c },
-                _ => new PatternNote("pocket_count", d.Machine.Poles, "pocket_inner_radius", (m.InnerRadius ?? 0) - c / 2, target, -28,
-                    $"{d.Machine.Poles} x R{F((m.InnerRadius ?? 0) - c / 2)}-{F((m.OuterRadius ?? 0) + c / 2)} arc pockets, {kind}") { Size2Id = "pocket_outer_radius", Size2 = (m.OuterRadius ?? 0) + c / 2 },
-            });
-            if (r.BoltCircle is { } bc) AddBoltCircle(p, dias, notes, "bolt", bc.Diameter, bc.Count, bc.Hole, FeatureKind.BoltHole, 250);
-            double badge = Math.Max(1.5, PocketSize(d) * 0.55);
+            double c = r.PocketClearanceMm;
+            double depth = d.ThroughPockets ? r.ThicknessMm : r.ThicknessMm - r.PocketFloorMm;
+            string kind = d.ThroughPockets ? "through" : $"{F(depth)} deep";
+            var sizes = shape.PocketSizes(c);
+            var note = new PatternNote("pocket_count", d.Poles, sizes[0].Id, sizes[0].Mm, target, -28,
+                $"{d.Poles} x {shape.PocketText(c)} pockets, {kind}");
+            if (sizes.Count > 1) note = note with { Size2Id = sizes[1].Id, Size2 = sizes[1].Mm };
+            notes.Add(note);
+            if (r.BoltCircle is { } bc) AddBoltCircle(p, dias, notes, "bolt", bc.CircleDiameterMm, bc.Count, bc.HoleMm, FeatureKind.BoltHole, 250);
+            double badge = Math.Max(1.5, Math.Min(shape.RadialLengthMm, shape.TangentialWidthMm) * 0.55);
             foreach (var f in p.FeaturesOf(FeatureKind.MagnetPocket))
                 if (f.NorthUp is { } n) poles.Add(new PoleMark(f.Position, n, badge));
-            title = $"{p.Name}: {d.Machine.Poles} pockets, {p.Material}, {F(p.HeightMm)} thick (badges: pole facing the pocket opening)";
+            title = $"{p.Name}: {d.Poles} pockets, {p.Material.Name}, {F(p.HeightMm)} thick (badges: pole facing the pocket opening)";
         }
-        else if (p.Name == "back-iron")
+        else if (p.Role == PartRole.BackIron)
         {
             var r = d.Rotor;
             dias.Add(new("outer_diameter", o, Extent(outline) * 1, 35, $"D{F(Extent(outline))}"));
             var bore = p.FeaturesOf(FeatureKind.Bore).FirstOrDefault();
             if (bore?.Contour.Circle is { } bc0) dias.Add(new("bore", o, 2 * bc0.Radius, 145, $"D{F(2 * bc0.Radius)} bore"));
             if (r.BoltCircle is { } bc && p.FeaturesOf(FeatureKind.BoltHole).Any())
-                AddBoltCircle(p, dias, notes, "bolt", bc.Diameter, bc.Count, bc.Hole, FeatureKind.BoltHole, 250);
-            title = $"back-iron: {p.Material} disc {F(p.HeightMm)} thick, one behind each rotor";
+                AddBoltCircle(p, dias, notes, "bolt", bc.CircleDiameterMm, bc.Count, bc.HoleMm, FeatureKind.BoltHole, 250);
+            title = $"{p.Name}: {p.Material.Name} disc {F(p.HeightMm)} thick, one behind each rotor";
         }
-        else if (p.Name.StartsWith("stator", StringComparison.Ordinal))
+        else if (p.Role == PartRole.Stator)
         {
             var s = d.Stator;
-            dias.Add(new("outer_diameter", o, s.OuterDiameter, 35, $"D{F(s.OuterDiameter)}"));
-            if (s.InnerDiameter > 0) dias.Add(new("inner_diameter", o, s.InnerDiameter, 145, $"D{F(s.InnerDiameter)}"));
-            double coilPitch = d.Coils.PitchRadius ?? d.Magnets.PitchRadius ?? 0;
+            dias.Add(new("outer_diameter", o, s.OuterDiameterMm, 35, $"D{F(s.OuterDiameterMm)}"));
+            if (s.InnerDiameterMm > 0) dias.Add(new("inner_diameter", o, s.InnerDiameterMm, 145, $"D{F(s.InnerDiameterMm)}"));
+            double coilPitch = d.Coils.PitchRadiusMm;
             if (coilPitch > 0) dias.Add(new("coil_pitch_circle", o, 2 * coilPitch, 205, $"PCD {F(2 * coilPitch)} coils", DrawCircle: true));
             var seat0 = p.FeaturesOf(FeatureKind.CoilSeat).FirstOrDefault();
             if (seat0 != null)
-                notes.Add(new PatternNote("seat_count", d.Machine.Coils, "seat_pitch_radius", coilPitch, seat0.Position, -28, $"{d.Machine.Coils} coil seats"));
-            if (s.Mount is { } mt) AddBoltCircle(p, dias, notes, "mount", mt.CircleDiameter, mt.Count, mt.Hole, FeatureKind.MountHole, 250);
+                notes.Add(new PatternNote("seat_count", d.CoilsPerStator, "seat_pitch_radius", coilPitch, seat0.Position, -28, $"{d.CoilsPerStator} coil seats"));
+            if (s.Mount is { } mt) AddBoltCircle(p, dias, notes, "mount", mt.CircleDiameterMm, mt.Count, mt.HoleMm, FeatureKind.MountHole, 250);
             int sensors = p.FeaturesOf(FeatureKind.SensorPocket).Count();
-            title = $"{p.Name}: ring {F(p.HeightMm)} thick, {d.Machine.Coils} seats{(sensors > 0 ? $", {sensors} sensor pocket{(sensors > 1 ? "s" : "")}" : "")}, {p.Material}";
+            title = $"{p.Name}: ring {F(p.HeightMm)} thick, {d.CoilsPerStator} seats{(sensors > 0 ? $", {sensors} sensor pocket{(sensors > 1 ? "s" : "")}" : "")}, {p.Material.Name}";
         }
-        else if (p.Name == "former")
+        else if (p.Role == PartRole.Former)
         {
             var flange = p.FeaturesOf(FeatureKind.Flange).FirstOrDefault()?.Contour;
             var centre = flange?.Circle?.Center ?? Centre(outline);
             if (flange?.Circle is { } fc) dias.Add(new("flange_diameter", fc.Center, 2 * fc.Radius, 35, $"D{F(2 * fc.Radius)} flange"));
-            if (d.Coils.Shape == "round" && d.Coils.Core.Diameter is { } core)
+            if (d.Coils.Shape == CoilShape.Round && d.Coils.CoreDiameterMm is { } core)
                 dias.Add(new("core_diameter", centre, core, 145, $"D{F(core)} core"));
             var (lo, hi) = RadialExtent(outline);
-            if (d.Coils.Shape != "round")
+            if (d.Coils.Shape != CoilShape.Round)
                 linear.Add(new LinearDimension("radial_length", new Vec2(lo, centre.Y), new Vec2(hi, centre.Y), -(Extent(outline) * 0.62), hi - lo, $"{F(hi - lo)} radial"));
-            title = $"former: one per coil, {p.Quantity} in all, {F(p.HeightMm)} high, {p.Material}";
+            title = $"{p.Name}: one per coil, {p.Quantity} in all, {F(p.HeightMm)} high, {p.Material.Name}";
         }
         else
         {
@@ -99,7 +98,7 @@ public static class PartSketches
             dias.Add(new("outer_diameter", o, Extent(outline), 35, $"D{F(Extent(outline))}"));
             var inner = outline.Holes.Select(h => h.Circle).FirstOrDefault(c => c is { } cc && cc.Center.Length < 1e-9);
             if (inner is { } ic) dias.Add(new("inner_diameter", o, 2 * ic.Radius, 145, $"D{F(2 * ic.Radius)}"));
-            title = $"{p.Name}: {F(p.HeightMm)} thick, {p.Material}, quantity {p.Quantity}";
+            title = $"{p.Name}: {F(p.HeightMm)} thick, {p.Material.Name}, quantity {p.Quantity}";
         }
 
         return new PartSketch
@@ -135,13 +134,6 @@ public static class PartSketches
             .Select(f => f.Contour).Concat(p.Marks).ToList();
         return (new Profile(outers, holes), blind, marks);
     }
-
-    private static double PocketSize(Design.Model.Design d) => d.Magnets.Shape switch
-    {
-        "disc" => d.Magnets.Diameter ?? 4,
-        "block" => Math.Min(d.Magnets.Length ?? 4, d.Magnets.Width ?? 4),
-        _ => Math.Min((d.Magnets.OuterRadius ?? 4) - (d.Magnets.InnerRadius ?? 0), 10),
-    };
 
     private static IEnumerable<Vec2> Points(Contour c)
     {

@@ -1,3 +1,4 @@
+using PartForge.Design.Parts;
 using PartForge.Formats.Png;
 using PartForge.Parts;
 using PartForge.Parts.Placement;
@@ -13,14 +14,14 @@ public static class Previews
     /// <summary>Picture size of every preview, pixels.</summary>
     public const int Width = 800, Height = 600;
 
-    public static Rgb ColourOf(string partName) => partName switch
+    /// <summary>The shade of a part by its role.</summary>
+    public static Rgb ColourOf(PartRole role) => role switch
     {
-        _ when partName.StartsWith("rotor", StringComparison.Ordinal) => new Rgb(95, 160, 150),
-        "back-iron" => new Rgb(122, 128, 136),
-        "former" => new Rgb(222, 182, 90),
-        _ when partName.StartsWith("stator", StringComparison.Ordinal) => new Rgb(205, 184, 130),
-        "spacer" => new Rgb(164, 158, 143),
-        _ => new Rgb(170, 170, 170),
+        PartRole.Rotor => new Rgb(95, 160, 150),
+        PartRole.BackIron => new Rgb(122, 128, 136),
+        PartRole.Former => new Rgb(222, 182, 90),
+        PartRole.Stator => new Rgb(205, 184, 130),
+        _ => new Rgb(164, 158, 143), // the spacers
     };
 
     /// <summary>One part on its own, seen from above at an angle.</summary>
@@ -28,7 +29,7 @@ public static class Previews
     {
         var view = new RenderView { Width = Width, Height = Height, AzimuthDeg = -60, ElevationDeg = 38 };
         // The kernel's meshes are closed and outward by construction (and validated), so back faces can go.
-        var img = SoftwareRasteriser.Render([RenderItem.FromMesh(part.Mesh, ColourOf(part.Name)) with { ClosedOutward = true }], view).Image;
+        var img = SoftwareRasteriser.Render([RenderItem.FromMesh(part.Mesh, ColourOf(part.Role)) with { ClosedOutward = true }], view).Image;
         return PngEncoder.Encode(img);
     }
 
@@ -36,7 +37,7 @@ public static class Previews
     public static byte[] Assembly(PartSet set)
     {
         var placed = AssemblyBuilder.Build(set, exploded: true);
-        var items = placed.Select(p => RenderItem.FromMesh(p.Mesh, ColourOf(p.Name))).ToArray();
+        var items = placed.Select(p => RenderItem.FromMesh(p.Mesh, ColourOf(p.Part.Role))).ToArray();
         var view = new RenderView { Width = Width, Height = Height, AzimuthDeg = -65, ElevationDeg = 18 };
         return PngEncoder.Encode(SoftwareRasteriser.Render(items, view).Image);
     }

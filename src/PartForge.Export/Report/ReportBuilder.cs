@@ -1,4 +1,6 @@
 using PartForge.Checks;
+using PartForge.Design.Machines;
+using PartForge.Design.Parts;
 using PartForge.Export.Bom;
 using PartForge.Parts;
 
@@ -7,18 +9,19 @@ namespace PartForge.Export.Report;
 /// <summary>Assembles the report input from the stage outputs (design, electrical results, parts, checks).</summary>
 public static class ReportBuilder
 {
-    public static ReportInput Build(Design.Model.Design d, ReportElectrical e, PartSet parts, CheckReport checks, bool forced,
+    public static ReportInput Build(MachineModel d, ReportElectrical e, PartSet parts, CheckReport checks, bool forced,
         IReadOnlyList<(string Name, byte[] Png)>? previews = null)
     {
         var o = e.Outline;
-        double margin = d.Former.Margin;
+        double margin = d.Former.MarginMm;
         var coil = new CoilSection(o.OuterMinRadiusMm, o.OuterMaxRadiusMm, o.WindowMinRadiusMm, o.WindowMaxRadiusMm,
             o.OuterMinRadiusMm - margin, o.OuterMaxRadiusMm + margin);
         var gaps = checks.WithId(CheckIds.RunningGap)
-            .GroupBy(c => c.Part, StringComparer.Ordinal)
-            .ToDictionary(g => g.Key, g => g.Min(c => c.Value), StringComparer.Ordinal);
+            .Where(c => c.Part is not null)
+            .GroupBy(c => c.Part!.Value)
+            .ToDictionary(g => g.Key, g => g.Min(c => c.Value));
         (double, double)? backIron = null;
-        if (parts.Find("back-iron") is { } bi)
+        if (parts.Find(PartId.BackIron) is { } bi)
         {
             // Radial extent of the back-iron disc from its exact outline (the builder sizes it, not the design).
             var pts = bi.ExactLayers.SelectMany(l => l.Outers).SelectMany(c => c.Circle is { } ci ? [ci.Radius + ci.Center.Length] : c.Segments.Select(g => g.Start.Length)).ToList();
@@ -35,7 +38,7 @@ public static class ReportBuilder
             CoilWaveform = e.CoilWaveform,
             PhaseWaveforms = e.PhaseWaveforms,
             WaveformRpm = e.WaveformRpm,
-            Checks = checks.Checks.Select(c => new ReportCheck(c.Id, c.Part, c.StatusText, c.Value, c.Limit, c.Unit, c.Margin, c.Message, c.Basis ?? "")).ToArray(),
+            Checks = checks.Checks.Select(c => new ReportCheck(c.Id, c.PartName, c.StatusText, c.Value, c.Limit, c.Unit, c.Margin, c.Message, c.Basis ?? "")).ToArray(),
             Status = checks.StatusText,
             Forced = forced,
             Drawings = parts.Parts.Select(p => PartSketches.For(d, p)).ToArray(),
@@ -51,6 +54,6 @@ public static class ReportBuilder
     public static IReadOnlyList<BomPart> BomParts(PartSet parts) => parts.Parts.Select(p =>
     {
         var (lo, hi) = p.Mesh.Bounds();
-        return new BomPart(p.Name, p.Process.ToContractName(), p.Material, p.Quantity, p.MassG, hi.X - lo.X, hi.Y - lo.Y, p.HeightMm);
+        return new BomPart(p.Id, p.Process, p.Material.Name, p.Quantity, p.MassG, hi.X - lo.X, hi.Y - lo.Y, p.HeightMm);
     }).ToArray();
 }

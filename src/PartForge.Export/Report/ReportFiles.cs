@@ -1,4 +1,6 @@
 using System.Text;
+using PartForge.Design.Machines;
+using PartForge.Design.Parts;
 using PartForge.Export.Bom;
 using PartForge.Export.Pipeline;
 using PartForge.Parts;
@@ -20,7 +22,7 @@ public static class ReportFiles
     {
         var parts = ev.Parts ?? throw new InvalidOperationException("the design has no parts, so there is nothing to report on");
         var previews = embedAssemblyPreview ? new[] { ("exploded assembly", Previews.Assembly(parts)) } : [];
-        return ReportBuilder.Build(ev.Design, ElectricalView.From(ev.Design, ev.Electrical), parts, ev.Checks, forced, previews);
+        return ReportBuilder.Build(ev.Machine, ElectricalView.From(ev.Machine, ev.Electrical), parts, ev.Checks, forced, previews);
     }
 
     public static byte[] Html(Evaluation ev, bool forced) => Utf8.GetBytes(HtmlReport.Render(InputOf(ev, forced)));
@@ -28,20 +30,20 @@ public static class ReportFiles
     public static BillOfMaterials BomOf(Evaluation ev)
     {
         var parts = ev.Parts ?? throw new InvalidOperationException("the design has no parts, so there is no bill of materials");
-        var e = ElectricalView.From(ev.Design, ev.Electrical);
-        return BomBuilder.Build(ev.Design, e.TotalWireM, e.WireGramsPerMetre, ReportBuilder.BomParts(parts));
+        var e = ElectricalView.From(ev.Machine, ev.Electrical);
+        return BomBuilder.Build(ev.Machine, e.TotalWireM, e.WireGramsPerMetre, ReportBuilder.BomParts(parts));
     }
 
     public static byte[] Bom(Evaluation ev) => BomCsv.WriteUtf8(BomOf(ev));
 
     /// <summary>(file name, PNG bytes) of every printed part's preview and of the assembly, in part order.</summary>
-    public static IReadOnlyList<(string FileName, byte[] Png)> Pngs(Evaluation ev, IReadOnlyCollection<string>? onlyParts = null)
+    public static IReadOnlyList<(string FileName, byte[] Png)> Pngs(Evaluation ev, IReadOnlyCollection<PartId>? onlyParts = null)
     {
         var parts = ev.Parts ?? throw new InvalidOperationException("the design has no parts, so there is nothing to preview");
         var list = new List<(string, byte[])>();
-        foreach (var p in parts.Parts.Where(p => p.Process == PartProcess.Print && (onlyParts == null || onlyParts.Contains(p.Name))))
-            list.Add((OutputNames.PartFile(ev.Design.Name, p.Name, "png"), Previews.Part(p)));
-        list.Add((OutputNames.PartFile(ev.Design.Name, "assembly", "png"), Previews.Assembly(parts)));
+        foreach (var p in parts.Parts.Where(p => p.Process == PartProcess.Print && (onlyParts == null || onlyParts.Contains(p.Id))))
+            list.Add((OutputNames.PartFile(ev.Machine.Name, p.Name, "png"), Previews.Part(p)));
+        list.Add((OutputNames.PartFile(ev.Machine.Name, "assembly", "png"), Previews.Assembly(parts)));
         return list;
     }
 }

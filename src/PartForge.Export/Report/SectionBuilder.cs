@@ -1,4 +1,6 @@
 using System.Globalization;
+using PartForge.Design.Machines;
+using PartForge.Design.Parts;
 using PartForge.Design.Stack;
 using PartForge.Export.Drawings;
 using PartForge.Geometry.Primitives;
@@ -12,12 +14,12 @@ namespace PartForge.Export.Report;
 public static class SectionBuilder
 {
     public static (IReadOnlyList<SectionBody> Bodies, IReadOnlyList<LinearDimension> Dimensions) Build(
-        Design.Model.Design d, AxialStack stack, CoilSection coil, IReadOnlyDictionary<string, double> runningGapByPart,
+        MachineModel d, AxialStack stack, CoilSection coil, IReadOnlyDictionary<PartId, double> runningGapByPart,
         (double RMin, double RMax)? backIron = null)
     {
         var (magIn, magOut) = MagnetRadialExtent(d);
-        double rotIn = d.Rotor.Bore / 2, rotOut = d.Rotor.OuterDiameter / 2;
-        double statIn = d.Stator.InnerDiameter / 2, statOut = d.Stator.OuterDiameter / 2;
+        double rotIn = d.Rotor.BoreMm / 2, rotOut = d.Rotor.OuterDiameterMm / 2;
+        double statIn = d.Stator.InnerDiameterMm / 2, statOut = d.Stator.OuterDiameterMm / 2;
         var bodies = new List<SectionBody>();
         foreach (var s in stack.Slabs)
         {
@@ -27,36 +29,36 @@ public static class SectionBuilder
                 {
                     // The rotor disc is cut where the pocket is (the magnet is drawn in it); a blind pocket
                     // keeps a floor on the side away from the stator.
-                    bodies.Add(new SectionBody("rotor", s.Owner, rotIn, Math.Max(rotIn, magIn), s.ZMin, s.ZMax, s.Owner));
-                    bodies.Add(new SectionBody("rotor", s.Owner, Math.Min(rotOut, magOut), rotOut, s.ZMin, s.ZMax, s.Owner));
+                    bodies.Add(new SectionBody("rotor", s.Owner.Name, rotIn, Math.Max(rotIn, magIn), s.ZMin, s.ZMax, s.Owner.Name));
+                    bodies.Add(new SectionBody("rotor", s.Owner.Name, Math.Min(rotOut, magOut), rotOut, s.ZMin, s.ZMax, s.Owner.Name));
                     double floor = s.Thickness - stack.PocketDepthMm;
-                    if (floor > 1e-9 && d.Machine.Layout != "dual-stator")
+                    if (floor > 1e-9 && !d.ThroughPockets)
                     {
                         bool backIsUp = Math.Abs(s.ZMax) > Math.Abs(s.ZMin);
                         double fz0 = backIsUp ? s.ZMax - floor : s.ZMin;
-                        bodies.Add(new SectionBody("rotor", s.Owner, magIn, magOut, fz0, fz0 + floor, s.Owner + " pocket floor"));
+                        bodies.Add(new SectionBody("rotor", s.Owner.Name, magIn, magOut, fz0, fz0 + floor, s.Owner.Name + " pocket floor"));
                     }
                     break;
                 }
                 case SlabKind.Magnet:
-                    bodies.Add(new SectionBody("magnet", s.Owner, magIn, magOut, s.ZMin, s.ZMax, "magnet"));
+                    bodies.Add(new SectionBody("magnet", s.Owner.Name, magIn, magOut, s.ZMin, s.ZMax, "magnet"));
                     break;
                 case SlabKind.BackIron:
-                    bodies.Add(new SectionBody("back-iron", s.Owner, backIron?.RMin ?? rotIn, backIron?.RMax ?? rotOut, s.ZMin, s.ZMax, "back iron"));
+                    bodies.Add(new SectionBody("back-iron", s.Owner.Name, backIron?.RMin ?? rotIn, backIron?.RMax ?? rotOut, s.ZMin, s.ZMax, "back iron"));
                     break;
                 case SlabKind.Stator:
-                    bodies.Add(new SectionBody("stator", s.Owner, statIn, Math.Max(statIn, coil.FormerRMin), s.ZMin, s.ZMax, s.Owner));
-                    bodies.Add(new SectionBody("stator", s.Owner, Math.Min(statOut, coil.FormerRMax), statOut, s.ZMin, s.ZMax, s.Owner));
+                    bodies.Add(new SectionBody("stator", s.Owner.Name, statIn, Math.Max(statIn, coil.FormerRMin), s.ZMin, s.ZMax, s.Owner.Name));
+                    bodies.Add(new SectionBody("stator", s.Owner.Name, Math.Min(statOut, coil.FormerRMax), statOut, s.ZMin, s.ZMax, s.Owner.Name));
                     break;
                 case SlabKind.Former:
-                    double flange = d.Former.Flange;
-                    bodies.Add(new SectionBody("former", s.Owner, coil.FormerRMin, coil.FormerRMax, s.ZMin, s.ZMin + flange, "former flange"));
-                    bodies.Add(new SectionBody("former", s.Owner, coil.FormerRMin, coil.FormerRMax, s.ZMax - flange, s.ZMax, "former flange"));
-                    bodies.Add(new SectionBody("former", s.Owner, coil.WindowRMin, coil.WindowRMax, s.ZMin + flange, s.ZMax - flange, "former core"));
+                    double flange = d.Former.FlangeMm;
+                    bodies.Add(new SectionBody("former", s.Owner.Name, coil.FormerRMin, coil.FormerRMax, s.ZMin, s.ZMin + flange, "former flange"));
+                    bodies.Add(new SectionBody("former", s.Owner.Name, coil.FormerRMin, coil.FormerRMax, s.ZMax - flange, s.ZMax, "former flange"));
+                    bodies.Add(new SectionBody("former", s.Owner.Name, coil.WindowRMin, coil.WindowRMax, s.ZMin + flange, s.ZMax - flange, "former core"));
                     break;
                 case SlabKind.Copper:
-                    bodies.Add(new SectionBody("copper", s.Owner, coil.CopperRMin, coil.WindowRMin, s.ZMin, s.ZMax, "winding"));
-                    bodies.Add(new SectionBody("copper", s.Owner, coil.WindowRMax, coil.CopperRMax, s.ZMin, s.ZMax, "winding"));
+                    bodies.Add(new SectionBody("copper", s.Owner.Name, coil.CopperRMin, coil.WindowRMin, s.ZMin, s.ZMax, "winding"));
+                    bodies.Add(new SectionBody("copper", s.Owner.Name, coil.WindowRMax, coil.CopperRMax, s.ZMin, s.ZMax, "winding"));
                     break;
             }
         }
@@ -80,8 +82,8 @@ public static class SectionBuilder
             int laneNo = s.Kind is SlabKind.Magnet or SlabKind.Former ? 2 : 1;
             // Offset is measured to the left of From -> To; From is the top, so a positive offset goes right.
             double off = (right - x) + step * laneNo;
-            dims.Add(new LinearDimension(id + ":" + s.Owner, new Vec2(x, s.ZMax), new Vec2(x, s.ZMin), off, s.Thickness,
-                $"{id.Replace('_', ' ')}, {s.Owner}: {F(s.Thickness)}"));
+            dims.Add(new LinearDimension(id + ":" + s.Owner.Name, new Vec2(x, s.ZMax), new Vec2(x, s.ZMin), off, s.Thickness,
+                $"{id.Replace('_', ' ')}, {s.Owner.Name}: {F(s.Thickness)}"));
         }
 
         // Running gaps: from each stationary face to the nearest rotating surface, drawn at the magnet's mid
@@ -91,20 +93,20 @@ public static class SectionBuilder
         {
             double nominal = Math.Abs(rotFace - statFace);
             bool has = runningGapByPart.TryGetValue(owner, out double worst);
-            string text = has ? $"running gap, {owner}: {F(nominal)} nominal, {F(worst)} worst case" : $"running gap, {owner}: {F(nominal)} nominal";
+            string text = has ? $"running gap, {owner.Name}: {F(nominal)} nominal, {F(worst)} worst case" : $"running gap, {owner.Name}: {F(nominal)} nominal";
             var from = new Vec2(rGap, Math.Min(statFace, rotFace));
             var to = new Vec2(rGap, Math.Max(statFace, rotFace));
-            dims.Add(new LinearDimension("running_gap:" + owner, from, to, 0, has ? worst : nominal, text, "gap"));
+            dims.Add(new LinearDimension("running_gap:" + owner.Name, from, to, 0, has ? worst : nominal, text, "gap"));
         }
         return (bodies, dims);
     }
 
     /// <summary>(rotating owner, stationary face z, nearest rotating surface z) for each running gap.</summary>
-    public static IEnumerable<(string Owner, double StationaryZ, double RotatingZ)> GapFaces(AxialStack stack)
+    public static IEnumerable<(PartId Owner, double StationaryZ, double RotatingZ)> GapFaces(AxialStack stack)
     {
         var stationary = stack.Slabs.Where(s => s.Kind is SlabKind.Stator or SlabKind.Former).ToList();
-        var rotating = stack.Slabs.Where(s => s.Kind is SlabKind.Rotor or SlabKind.Magnet).GroupBy(s => s.Owner, StringComparer.Ordinal);
-        foreach (var g in rotating.OrderBy(g => g.Key, StringComparer.Ordinal))
+        var rotating = stack.Slabs.Where(s => s.Kind is SlabKind.Rotor or SlabKind.Magnet).GroupBy(s => s.Owner);
+        foreach (var g in rotating.OrderBy(g => g.Key.Name, StringComparer.Ordinal))
         {
             double rMin = g.Min(s => s.ZMin), rMax = g.Max(s => s.ZMax);
             // Nearest stationary face above or below this rotating body.
@@ -116,16 +118,10 @@ public static class SectionBuilder
     }
 
     /// <summary>Radial extent of a magnet (and its pocket without clearance), mm from the axis.</summary>
-    public static (double RMin, double RMax) MagnetRadialExtent(Design.Model.Design d)
+    public static (double RMin, double RMax) MagnetRadialExtent(MachineModel d)
     {
-        var m = d.Magnets;
-        double pitch = m.PitchRadius ?? 0;
-        return m.Shape switch
-        {
-            "disc" => (pitch - (m.Diameter ?? 0) / 2, pitch + (m.Diameter ?? 0) / 2),
-            "block" => (pitch - (m.Length ?? 0) / 2, pitch + (m.Length ?? 0) / 2),
-            _ => (m.InnerRadius ?? 0, m.OuterRadius ?? 0),
-        };
+        var m = d.Magnets.Shape;
+        return (m.PitchRadiusMm - m.RadialLengthMm / 2, m.PitchRadiusMm + m.RadialLengthMm / 2);
     }
 
     internal static string F(double v) => v.ToString("0.###", CultureInfo.InvariantCulture);

@@ -1,4 +1,5 @@
 using PartForge.Checks;
+using PartForge.Design.Machines;
 using PartForge.Electrical;
 using PartForge.Export.Pipeline;
 using PartForge.Parts;
@@ -19,25 +20,25 @@ public static class ResultsBuilder
         var checks = ev.Checks;
         return new ResultsDocument
         {
-            Design = ev.Design.Name,
+            Design = ev.Machine.Name,
             Summary = new ResultsSummary(checks.StatusText, checks.FailCount, checks.WarnCount) { Forced = forced && checks.HasFailures },
-            Electrical = ElectricalOf(ev.Design, ev.Electrical),
-            Checks = checks.Checks.Select(c => new CheckEntry(c.Id, c.Part, c.StatusText, c.Value, c.Limit, c.Unit, c.Margin, c.Message)).ToArray(),
-            Parts = ev.Parts?.Parts.Select(p => new PartEntry(p.Name, p.Process.ToContractName(), p.Quantity,
+            Electrical = ElectricalOf(ev.Machine, ev.Electrical),
+            Checks = checks.Checks.Select(c => new CheckEntry(c.Id, c.PartName, c.StatusText, c.Value, c.Limit, c.Unit, c.Margin, c.Message) { Counterpart = c.CounterpartName }).ToArray(),
+            Parts = ev.Parts?.Parts.Select(p => new PartEntry(p.Name, Words.Of(p.Process), p.Quantity,
                 files != null && files.TryGetValue(p.Name, out var f) ? f : Array.Empty<string>(), countTriangles ? p.VolumeMm3 : 0, countTriangles ? p.Mesh.TriangleCount : 0)
-            { Material = p.Material }).ToArray() ?? [],
+            { Material = p.Material.Name }).ToArray() ?? [],
         };
     }
 
-    public static ElectricalSection ElectricalOf(Design.Model.Design d, ElectricalResult e)
+    public static ElectricalSection ElectricalOf(MachineModel d, ElectricalResult e)
     {
         var c = e.Coil;
         var o = c?.Outline;
         KeystoneOutline? outline = null;
-        if (c != null && o != null && c.Shape != Electrical.Coils.CoilShape.Round)
+        if (c != null && o != null && c.Shape != CoilShape.Round)
         {
             double build = o.RadialBuildMm;
-            double window = d.Coils.Core.Width ?? 0;
+            double window = d.Coils.CoreWidthMm ?? 0;
             outline = new KeystoneOutline(o.WindowMinRadiusMm - build, o.WindowMaxRadiusMm + build, window, window + 2 * build, build);
         }
         return new ElectricalSection
@@ -56,8 +57,8 @@ public static class ResultsBuilder
                 InnerDiameter = c?.InnerDiameterMm,
                 OuterDiameter = c?.OuterDiameterMm,
                 Outline = outline,
-                Height = c?.HeightMm ?? d.Coils.Height,
-                PitchRadius = c?.PitchRadiusMm ?? d.Coils.PitchRadius ?? 0,
+                Height = c?.HeightMm ?? d.Coils.HeightMm,
+                PitchRadius = c?.PitchRadiusMm ?? d.Coils.PitchRadiusMm,
                 MeanTurn = c?.MeanTurnMm ?? 0,
                 WireLengthM = c?.WireLengthM ?? 0,
                 Resistance20cOhm = c?.Resistance20COhm ?? 0,

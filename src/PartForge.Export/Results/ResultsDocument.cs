@@ -23,7 +23,11 @@ public sealed record ResultsSummary(string Status, int Fail, int Warn)
     public bool Forced { get; init; }
 }
 
-public sealed record CheckEntry(string Id, string Part, string Status, double Value, double Limit, string Unit, double Margin, string Message);
+public sealed record CheckEntry(string Id, string Part, string Status, double Value, double Limit, string Unit, double Margin, string Message)
+{
+    /// <summary>The other part of the pair the check is about, or null (CONTRACT "Additions": every check carries it).</summary>
+    public string? Counterpart { get; init; }
+}
 
 public sealed record PartEntry(string Name, string Process, int Quantity, IReadOnlyList<string> Files, double VolumeMm3, long Triangles)
 {

@@ -34,6 +34,8 @@ public static class ResultsJson
                 w.WriteStartObject();
                 w.WriteString("id", c.Id);
                 w.WriteString("part", c.Part);
+                if (c.Counterpart is { } cp) w.WriteString("counterpart", cp);
+                else w.WriteNull("counterpart");
                 w.WriteString("status", c.Status);
                 Num(w, "value", c.Value, "checks." + c.Id + ".value");
                 Num(w, "limit", c.Limit, "checks." + c.Id + ".limit");

@@ -1,9 +1,11 @@
+using PartForge.Design.Machines;
+using PartForge.Design.Parts;
 using PartForge.Design.Stack;
 using PartForge.Geometry.Primitives;
 using PartForge.Geometry.Profiles;
+using PartForge.Geometry.Solids;
 using PartForge.Parts.Rotors;
 using PartForge.Parts.Shapes;
-using D = PartForge.Design.Model;
 
 namespace PartForge.Parts.Discs;
 
@@ -16,29 +18,23 @@ namespace PartForge.Parts.Discs;
 /// </summary>
 internal static class BackIronBuilder
 {
-    public static double OuterRadiusMm(D.Design d)
+    public static double OuterRadiusMm(MachineModel d)
     {
         var (_, rMax) = DesignGeometry.MagnetRadialExtentMm(d);
-        return Math.Min(d.Rotor.OuterDiameter / 2, rMax + Math.Max(1.0, d.Magnets.Thickness / 2));
+        return Math.Min(d.Rotor.OuterDiameterMm / 2, rMax + Math.Max(1.0, d.Magnets.Shape.ThicknessMm / 2));
     }
 
-    public static PartSpec? Build(D.Design d, AxialStack stack, IReadOnlyList<PartSpec> rotors, List<PartDiagnostic> diags)
+    public static PartSpec? Build(MachineModel d, AxialStack stack, IReadOnlyList<PartSpec> rotors, List<PartDiagnostic> diags)
     {
-        if (d.Rotor.BackIron is not { } bi) return null;
-        if (d.Machine.Layout == "dual-stator")
-        {
-            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, "back-iron", "back-iron-ignored",
-                "back-iron: rotor.back_iron is ignored in dual-stator (both rotor faces face a stator)"));
-            return null;
-        }
-        double t = bi.Thickness, R = OuterRadiusMm(d);
+        if (d.Rotor.BackIronThicknessMm is not { } t || !d.Layout.AllowsBackIron) return null;
+        double R = OuterRadiusMm(d);
         var o = new Vec2(0, 0);
         var rim = Contour.FullCircle(o, R);
         var holes = new List<Contour>();
         var features = new List<PartFeature> { new("rim", FeatureKind.Rim, 0, rim, 0, t, 0, R) };
-        if (d.Rotor.Bore > 0)
+        if (d.Rotor.BoreMm > 0)
         {
-            var bore = Contour.FullCircle(o, d.Rotor.Bore / 2);
+            var bore = Contour.FullCircle(o, d.Rotor.BoreMm / 2);
             holes.Add(bore);
             features.Add(new("bore", FeatureKind.Bore, 0, bore, 0, t, 0, 0));
         }
@@ -46,19 +42,19 @@ internal static class BackIronBuilder
         for (int j = 0; j < bolts.Count; j++)
         {
             holes.Add(bolts[j]);
-            features.Add(new($"bolt-{j}", FeatureKind.BoltHole, j, bolts[j], 0, t, RotorBuilder.BoltAngle(d.Rotor.BoltCircle!, j), d.Rotor.BoltCircle!.Diameter / 2));
+            features.Add(new($"bolt-{j}", FeatureKind.BoltHole, j, bolts[j], 0, t, RotorBuilder.BoltAngle(d.Rotor.BoltCircle!, j), d.Rotor.BoltCircle!.CircleDiameterMm / 2));
         }
-        var (process, material) = ProcessChoice.Resolve("back-iron", d.Parts.BackIron, null, "steel", true, "", diags);
+        var (process, material) = ProcessChoice.Resolve(PartId.BackIron, d.Parts.For(PartRole.BackIron), true, "", diags);
         var instances = new List<PartInstance>();
         foreach (var r in rotors)
         {
-            var slab = stack.Slabs.First(x => x.Kind == SlabKind.BackIron && x.Owner == r.Name);
+            var slab = stack.Slab(SlabKind.BackIron, r.Id);
             var ri = r.Instances[0];
-            instances.Add(new PartInstance(instances.Count, r.Name, slab.ZMin, t, ri.Flipped, 0, 0, 2 * Math.Sign(ri.ExplodeRank)));
+            instances.Add(new PartInstance(instances.Count, r.Id, slab.ZMin, t, ri.Flipped, 0, 0, 2 * Math.Sign(ri.ExplodeRank)));
         }
         return new PartSpec
         {
-            Name = "back-iron",
+            Id = PartId.BackIron,
             Process = process,
             Material = material,
             HeightMm = t,

@@ -1,15 +1,19 @@
+using PartForge.Design.Machines;
+using PartForge.Design.Parts;
 using PartForge.Design.Stack;
+using PartForge.Geometry.Exact;
 using PartForge.Geometry.Primitives;
 using PartForge.Geometry.Profiles;
+using PartForge.Geometry.Solids;
 using PartForge.Parts.Rotors;
 using PartForge.Parts.Shapes;
 using PartForge.Parts.Stators;
-using D = PartForge.Design.Model;
 
 namespace PartForge.Parts.Discs;
 
 /// <summary>
-/// The spacer that sets the nominal air gap, one per layout, its thickness taken from the AxialStack slabs:
+/// The spacer that sets the nominal air gap, one per layout (its role: <see cref="Layout.SpacerRole"/>), its
+/// thickness taken from the AxialStack slabs:
 /// <list type="bullet">
 /// <item>dual-rotor, hub spacer: a ring clamped between the two rotors' inner (stator-side) faces, through the
 /// stator's bore; thickness = the distance between those faces. Bore = the rotor bore; the rotor bolt circle
@@ -31,35 +35,36 @@ internal static class SpacerBuilder
     public const double StatorBoreClearanceMm = 1.0;
     public const double RotorRimClearanceMm = 2.0;
 
-    public static PartSpec? Build(D.Design d, AxialStack stack, CoilGeometry coil, Contour seatInCoilFrame, List<PartDiagnostic> diags)
+    public static PartSpec? Build(MachineModel d, AxialStack stack, CoilGeometry coil, Contour seatInCoilFrame, List<PartDiagnostic> diags)
     {
-        return d.Machine.Layout switch
+        return d.Layout.SpacerRole switch
         {
-            "dual-rotor" => Hub(d, stack, diags),
-            "single-rotor" => Gauge(d, stack, coil, seatInCoilFrame, diags),
-            "dual-stator" => RimRing(d, stack, coil, diags),
+            PartRole.HubSpacer => Hub(d, stack, diags),
+            PartRole.GapGauge => Gauge(d, stack, coil, seatInCoilFrame, diags),
+            PartRole.RimSpacer => RimRing(d, stack, coil, diags),
             _ => null,
         };
     }
 
-    private static PartSpec? Hub(D.Design d, AxialStack stack, List<PartDiagnostic> diags)
+    private static PartSpec? Hub(MachineModel d, AxialStack stack, List<PartDiagnostic> diags)
     {
-        var front = stack.Slabs.First(x => x.Kind == SlabKind.Rotor && x.Owner == "rotor-front");
-        var back = stack.Slabs.First(x => x.Kind == SlabKind.Rotor && x.Owner == "rotor-back");
+        var id = PartId.HubSpacer;
+        var front = stack.Slab(SlabKind.Rotor, d.Layout.Rotors[0]);
+        var back = stack.Slab(SlabKind.Rotor, d.Layout.Rotors[1]);
         double t = front.ZMin - back.ZMax;
-        double cap = d.Stator.InnerDiameter / 2 - StatorBoreClearanceMm;
-        double bore = d.Rotor.Bore;
-        double want = d.Rotor.BoltCircle is { } bc ? (bc.Diameter + 3 * bc.Hole) / 2 : Math.Max(2 * bore, bore + 10) / 2;
+        double cap = d.Stator.InnerDiameterMm / 2 - StatorBoreClearanceMm;
+        double bore = d.Rotor.BoreMm;
+        double want = d.Rotor.BoltCircle is { } bc ? (bc.CircleDiameterMm + 3 * bc.HoleMm) / 2 : Math.Max(2 * bore, bore + 10) / 2;
         double R = Math.Min(want, cap);
-        if (d.Rotor.BoltCircle is { } b2 && R < b2.Diameter / 2 + b2.Hole / 2 + DesignGeometry.MinWallMm(d))
+        if (d.Rotor.BoltCircle is { } b2 && R < b2.CircleDiameterMm / 2 + b2.HoleMm / 2 + DesignGeometry.MinWallMm(d))
         {
             R = want;
-            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, "spacer", "spacer-too-big",
-                FormattableString.Invariant($"spacer: the hub spacer needs a {2 * want:0.###} mm outer diameter for the rotor bolt circle but the stator bore is {d.Stator.InnerDiameter:0.###} mm; raise stator.inner_diameter to at least {2 * (want + StatorBoreClearanceMm):0.###}")));
+            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, id, "spacer-too-big",
+                FormattableString.Invariant($"{id.Name}: the hub spacer needs a {2 * want:0.###} mm outer diameter for the rotor bolt circle but the stator bore is {d.Stator.InnerDiameterMm:0.###} mm; raise stator.inner_diameter to at least {2 * (want + StatorBoreClearanceMm):0.###}")));
         }
         if (!(R > bore / 2 + 0.5))
         {
-            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, "spacer", "no-spacer", "spacer: the stator bore leaves no room for a hub spacer around the rotor bore; none made"));
+            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, id, "no-spacer", $"{id.Name}: the stator bore leaves no room for a hub spacer around the rotor bore; none made"));
             return null;
         }
         var o = new Vec2(0, 0);
@@ -76,31 +81,32 @@ internal static class SpacerBuilder
         for (int j = 0; j < bolts.Count; j++)
         {
             holes.Add(bolts[j]);
-            features.Add(new($"bolt-{j}", FeatureKind.BoltHole, j, bolts[j], 0, t, RotorBuilder.BoltAngle(d.Rotor.BoltCircle!, j), d.Rotor.BoltCircle!.Diameter / 2));
+            features.Add(new($"bolt-{j}", FeatureKind.BoltHole, j, bolts[j], 0, t, RotorBuilder.BoltAngle(d.Rotor.BoltCircle!, j), d.Rotor.BoltCircle!.CircleDiameterMm / 2));
         }
-        return Sheet(d, "hub spacer between the two rotors' inner faces; it sets the air gap on both sides (turns with the rotors)",
-            t, rim, holes, features, new PartInstance(0, "spacer", back.ZMax, t, false, 0, 0, 0), diags);
+        return Sheet(d, id, "hub spacer between the two rotors' inner faces; it sets the air gap on both sides (turns with the rotors)",
+            t, rim, holes, features, new PartInstance(0, id, back.ZMax, t, false, 0, 0, 0), diags);
     }
 
-    private static PartSpec? Gauge(D.Design d, AxialStack stack, CoilGeometry coil, Contour seatInCoilFrame, List<PartDiagnostic> diags)
+    private static PartSpec? Gauge(MachineModel d, AxialStack stack, CoilGeometry coil, Contour seatInCoilFrame, List<PartDiagnostic> diags)
     {
-        var rotor = stack.Slabs.First(x => x.Kind == SlabKind.Rotor && x.Owner == "rotor");
-        var ring = stack.Slabs.First(x => x.Kind == SlabKind.Stator && x.Owner == "stator");
+        var id = PartId.GapGauge;
+        var rotor = stack.Slab(SlabKind.Rotor, d.Layout.Rotors[0]);
+        var ring = stack.Slab(SlabKind.Stator, d.Layout.Stators[0]);
         double t = rotor.ZMin - ring.ZMax;
-        double ri = Math.Max(d.Rotor.Bore / 2 + 0.5, 1.0);
-        var (pIn, _) = ExactGeometry.RadialExtent(DesignGeometry.PocketOutline(d));
-        var (seatIn, _) = ExactGeometry.RadialExtent(seatInCoilFrame.Translated(new Vec2(coil.PitchRadiusMm, 0)));
+        double ri = Math.Max(d.Rotor.BoreMm / 2 + 0.5, 1.0);
+        var (pIn, _) = Exact2D.RadialExtent(DesignGeometry.PocketOutline(d));
+        var (seatIn, _) = Exact2D.RadialExtent(seatInCoilFrame.Translated(new Vec2(coil.PitchRadiusMm, 0)));
         double ro = Math.Min(pIn, seatIn) - 1.0;
-        if (!(t > 0) || ro - ri < 2.0 || ro < d.Stator.InnerDiameter / 2 + 1.0)
+        if (!(t > 0) || ro - ri < 2.0 || ro < d.Stator.InnerDiameterMm / 2 + 1.0)
         {
-            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, "spacer", "no-spacer",
-                "spacer: no room for a gap gauge between the shaft and the magnets/coils; set the air gap with feeler gauges"));
+            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, id, "no-spacer",
+                $"{id.Name}: no room for a gap gauge between the shaft and the magnets/coils; set the air gap with feeler gauges"));
             return null;
         }
         var rim = Fork(ri, ro);
         var features = new List<PartFeature> { new("rim", FeatureKind.Rim, 0, rim, 0, t, 0, ro) };
-        return Sheet(d, "gap gauge: lay it on the stator ring's face around the shaft, lower the rotor onto it, fix the rotor, then slide the gauge out through its slot",
-            t, rim, new List<Contour>(), features, new PartInstance(0, "spacer", ring.ZMax, t, false, 0, 0, 0.5), diags);
+        return Sheet(d, id, "gap gauge: lay it on the stator ring's face around the shaft, lower the rotor onto it, fix the rotor, then slide the gauge out through its slot",
+            t, rim, new List<Contour>(), features, new PartInstance(0, id, ring.ZMax, t, false, 0, 0, 0.5), diags);
     }
 
     /// <summary>An annulus ri..ro with a slot of width 2 ri open toward +x (the inner circle's far half closes it).</summary>
@@ -119,16 +125,17 @@ internal static class SpacerBuilder
         });
     }
 
-    private static PartSpec? RimRing(D.Design d, AxialStack stack, CoilGeometry coil, List<PartDiagnostic> diags)
+    private static PartSpec? RimRing(MachineModel d, AxialStack stack, CoilGeometry coil, List<PartDiagnostic> diags)
     {
-        var front = stack.Slabs.First(x => x.Kind == SlabKind.Stator && x.Owner == "stator-front");
-        var back = stack.Slabs.First(x => x.Kind == SlabKind.Stator && x.Owner == "stator-back");
+        var id = PartId.RimSpacer;
+        var front = stack.Slab(SlabKind.Stator, d.Layout.Stators[0]);
+        var back = stack.Slab(SlabKind.Stator, d.Layout.Stators[1]);
         double t = front.ZMin - back.ZMax;
-        double ri = d.Rotor.OuterDiameter / 2 + RotorRimClearanceMm, ro = d.Stator.OuterDiameter / 2;
+        double ri = d.Rotor.OuterDiameterMm / 2 + RotorRimClearanceMm, ro = d.Stator.OuterDiameterMm / 2;
         if (ro - ri < 2.0)
         {
-            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, "spacer", "no-spacer",
-                "spacer: the stator rings do not reach past the rotor rim; no rim spacer (set the stator spacing on the mount bolts)"));
+            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, id, "no-spacer",
+                $"{id.Name}: the stator rings do not reach past the rotor rim; no rim spacer (set the stator spacing on the mount bolts)"));
             return null;
         }
         var o = new Vec2(0, 0);
@@ -138,32 +145,32 @@ internal static class SpacerBuilder
         var features = new List<PartFeature> { new("rim", FeatureKind.Rim, 0, rim, 0, t, 0, ro), new("bore", FeatureKind.Bore, 0, inner, 0, t, 0, 0) };
         if (d.Stator.Mount is { } m)
         {
-            double rm = m.CircleDiameter / 2, wall = DesignGeometry.MinWallMm(d);
-            if (rm - m.Hole / 2 >= ri + wall && rm + m.Hole / 2 <= ro - wall)
+            double rm = m.CircleDiameterMm / 2, wall = DesignGeometry.MinWallMm(d);
+            if (rm - m.HoleMm / 2 >= ri + wall && rm + m.HoleMm / 2 <= ro - wall)
             {
                 double off = StatorLayout.MountOffsetDeg(d, coil.SensorAnglesDeg);
                 for (int j = 0; j < m.Count; j++)
                 {
                     double a = StatorLayout.MountAngleDeg(d, off, j);
-                    var h = Contour.FullCircle(Vec2.FromAngleDeg(a) * rm, m.Hole / 2);
+                    var h = Contour.FullCircle(Vec2.FromAngleDeg(a) * rm, m.HoleMm / 2);
                     holes.Add(h);
                     features.Add(new($"mount-{j}", FeatureKind.MountHole, j, h, 0, t, a, rm));
                 }
             }
-            else diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, "spacer", "spacer-no-mount-holes",
-                "spacer: the stator mount holes do not lie on the rim spacer (outside the rotor); it has no bolt holes"));
+            else diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, id, "spacer-no-mount-holes",
+                $"{id.Name}: the stator mount holes do not lie on the rim spacer (outside the rotor); it has no bolt holes"));
         }
-        return Sheet(d, "rim spacer between the two stator rings' inner faces, outside the rotor; bolt it with the stators' mount holes",
-            t, rim, holes, features, new PartInstance(0, "spacer", back.ZMax, t, false, 0, 0, 0), diags);
+        return Sheet(d, id, "rim spacer between the two stator rings' inner faces, outside the rotor; bolt it with the stators' mount holes",
+            t, rim, holes, features, new PartInstance(0, id, back.ZMax, t, false, 0, 0, 0), diags);
     }
 
-    private static PartSpec Sheet(D.Design d, string what, double t, Contour rim, List<Contour> holes, List<PartFeature> features,
+    private static PartSpec Sheet(MachineModel d, PartId id, string what, double t, Contour rim, List<Contour> holes, List<PartFeature> features,
         PartInstance instance, List<PartDiagnostic> diags)
     {
-        var (process, material) = ProcessChoice.Resolve("spacer", d.Parts.Spacer, null, "acrylic", true, "", diags);
+        var (process, material) = ProcessChoice.Resolve(id, d.Parts.For(id.Role), true, "", diags);
         return new PartSpec
         {
-            Name = "spacer",
+            Id = id,
             Process = process,
             Material = material,
             HeightMm = t,
@@ -171,7 +178,7 @@ internal static class SpacerBuilder
             Features = features,
             Instances = new[] { instance },
             CutProfile = process == PartProcess.Cut ? new Profile(new[] { rim }, holes) : null,
-            Notes = new[] { FormattableString.Invariant($"spacer ({t:0.###} mm): {what}. Cut it from {t:0.###} mm sheet, or from thinner sheet and shim to this thickness.") },
+            Notes = new[] { FormattableString.Invariant($"{id.Name} ({t:0.###} mm): {what}. Cut it from {t:0.###} mm sheet, or from thinner sheet and shim to this thickness.") },
         };
     }
 }

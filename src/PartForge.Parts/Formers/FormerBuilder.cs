@@ -1,7 +1,10 @@
+using PartForge.Design.Machines;
+using PartForge.Design.Parts;
+using PartForge.Geometry.Exact;
 using PartForge.Geometry.Primitives;
 using PartForge.Geometry.Profiles;
+using PartForge.Geometry.Solids;
 using PartForge.Parts.Shapes;
-using D = PartForge.Design.Model;
 
 namespace PartForge.Parts.Formers;
 
@@ -30,20 +33,20 @@ internal static class FormerBuilder
     public const double KeyDirectionDeg = 135;
 
     /// <summary>The keyed flange footprint in the former's local frame (what the stator seat is grown from).</summary>
-    public static Contour Footprint(D.Design d, CoilGeometry coil)
+    public static Contour Footprint(MachineModel d, CoilGeometry coil)
     {
         var outline = coil.WindingOutline.Translated(new Vec2(-coil.PitchRadiusMm, 0));
-        double m = d.Former.Margin;
+        double m = d.Former.MarginMm;
         var flange = m > 0 ? ContourOffset.Offset(outline, m) : outline;
         var u = Vec2.FromAngleDeg(KeyDirectionDeg);
         double depth = Math.Max(0.5, Math.Min(1.0, 0.6 * m));
-        double h = ExactGeometry.Support(flange, u) - depth;
-        return ExactGeometry.ClipConvex(flange, u, h);
+        double h = Exact2D.Support(flange, u) - depth;
+        return Exact2D.ClipConvex(flange, u, h);
     }
 
-    public static PartSpec Build(D.Design d, CoilGeometry coil, int quantityStators, List<PartDiagnostic> diags)
+    public static PartSpec Build(MachineModel d, CoilGeometry coil, List<PartDiagnostic> diags)
     {
-        double f = d.Former.Flange, h = d.Coils.Height, H = 2 * f + h;
+        double f = d.Former.FlangeMm, h = d.Coils.HeightMm, H = 2 * f + h;
         var shift = new Vec2(-coil.PitchRadiusMm, 0);
         var window = coil.WindingWindow.Translated(shift);
         var outline = coil.WindingOutline.Translated(shift);
@@ -51,14 +54,14 @@ internal static class FormerBuilder
         var o = new Vec2(0, 0);
         var notes = new List<string>();
 
-        double wallSp = Math.Max(1.2, 3 * d.Process.Nozzle);
-        double rSp = ContainsOrigin(window) ? ExactGeometry.Distance(window, o) - wallSp : 0;
+        double wallSp = Math.Max(1.2, 3 * d.Process.NozzleMm);
+        double rSp = ContainsOrigin(window) ? Exact2D.PointContour(o, window) - wallSp : 0;
         Contour? spindle = rSp >= 1.0 ? Contour.FullCircle(o, rSp) : null;
         if (spindle is null) notes.Add("no spindle hole: the core is too small for one");
 
-        double xCore = ExactGeometry.RayExit(window, o, new Vec2(1, 0));
-        if (double.IsNaN(xCore)) xCore = ExactGeometry.Support(window, new Vec2(1, 0));
-        double xEdge = ExactGeometry.Support(footprint, new Vec2(1, 0));
+        double xCore = Exact2D.RayExit(window, o, new Vec2(1, 0));
+        if (double.IsNaN(xCore)) xCore = Exact2D.Support(window, new Vec2(1, 0));
+        double xEdge = Exact2D.Support(footprint, new Vec2(1, 0));
         double slotW = Math.Max(1.0, 2 * coil.WireOverallMm);
         double x1 = xEdge + 1.0; // past the edge so the slot opens cleanly
         var slot = Contour.Rectangle(new Vec2((xCore + x1) / 2, 0), x1 - xCore, slotW, 0);
@@ -81,12 +84,12 @@ internal static class FormerBuilder
         };
         if (spindle is not null) features.Add(new("spindle-hole", FeatureKind.SpindleHole, 0, spindle, 0, H, 0, 0));
 
-        var (process, material) = ProcessChoice.Resolve("former", d.Parts.Former, null, "PLA", false,
+        var (process, material) = ProcessChoice.Resolve(PartId.Former, d.Parts.For(PartRole.Former), false,
             "a former is a bobbin of three layers (flange, core, flange)", diags);
         notes.Insert(0, $"former: wind {coil.Turns} turns between the flanges, start lead out through the slot in the upper flange (the flange with the slot faces the stator's grooved side); the flat on the flanges matches the flat in the seat.");
         return new PartSpec
         {
-            Name = "former",
+            Id = PartId.Former,
             Process = process,
             Material = material,
             HeightMm = H,

@@ -1,3 +1,4 @@
+using PartForge.Design.Parts;
 using PartForge.Geometry.Meshes;
 using PartForge.Geometry.Primitives;
 
@@ -12,18 +13,18 @@ namespace PartForge.Parts.Placement;
 public static class AssemblyBuilder
 {
     /// <summary>Every copy placed; <paramref name="exploded"/> false gives the nominal (assembled) positions.</summary>
-    public static IReadOnlyList<PlacedPart> Build(PartSet set, bool exploded = true, IReadOnlyCollection<string>? onlyParts = null) =>
+    public static IReadOnlyList<PlacedPart> Build(PartSet set, bool exploded = true, IReadOnlyCollection<PartId>? onlyParts = null) =>
         Places(set, exploded, onlyParts).Select(p => new PlacedPart(p.Name, p.Instance, p.Part, p.PlacedMesh())).ToList();
 
     /// <summary>Where every copy goes, without moving any mesh yet (<see cref="PartPlace.PlacedMesh"/> does that
     /// for one copy): a writer can then hold one placed copy at a time.</summary>
-    public static IReadOnlyList<PartPlace> Places(PartSet set, bool exploded = true, IReadOnlyCollection<string>? onlyParts = null)
+    public static IReadOnlyList<PartPlace> Places(PartSet set, bool exploded = true, IReadOnlyCollection<PartId>? onlyParts = null)
     {
         ArgumentNullException.ThrowIfNull(set);
         var result = new List<PartPlace>();
         foreach (var part in set.Parts)
         {
-            if (onlyParts is not null && !onlyParts.Contains(part.Name)) continue;
+            if (onlyParts is not null && !onlyParts.Contains(part.Id)) continue;
             foreach (var inst in part.Instances)
                 result.Add(new PartPlace(part.Name, inst.Index, part, inst, exploded ? inst.ExplodeRank * set.ExplodeMm : 0));
         }

@@ -1,8 +1,11 @@
+using PartForge.Design.Machines;
+using PartForge.Design.Parts;
 using PartForge.Design.Stack;
+using PartForge.Geometry.Exact;
 using PartForge.Geometry.Primitives;
 using PartForge.Geometry.Profiles;
+using PartForge.Geometry.Solids;
 using PartForge.Parts.Shapes;
-using D = PartForge.Design.Model;
 
 namespace PartForge.Parts.Rotors;
 
@@ -34,18 +37,8 @@ internal static class RotorBuilder
     public const double MinNotchRadiusMm = 0.3;
     public const double MaxNotchRadiusMm = 1.0;
 
-    public static IReadOnlyList<PartSpec> Build(D.Design d, AxialStack stack, List<PartDiagnostic> diags)
-    {
-        string layout = d.Machine.Layout;
-        var parts = new List<PartSpec>();
-        if (layout == "dual-rotor")
-        {
-            parts.Add(BuildOne(d, stack, "rotor-front", evenNorthUp: true, diags));
-            parts.Add(BuildOne(d, stack, "rotor-back", evenNorthUp: false, diags));
-        }
-        else parts.Add(BuildOne(d, stack, "rotor", evenNorthUp: true, diags));
-        return parts;
-    }
+    public static IReadOnlyList<PartSpec> Build(MachineModel d, AxialStack stack, List<PartDiagnostic> diags) =>
+        d.Layout.Rotors.Select(id => BuildOne(d, stack, id, evenNorthUp: id.Side != PartSide.Back, diags)).ToArray();
 
     /// <summary>The rim contour (outer circle, with the index notch bite on +x when notchRadius &gt; 0).</summary>
     public static Contour Rim(double r, double notchRadius)
@@ -60,25 +53,25 @@ internal static class RotorBuilder
         });
     }
 
-    private static PartSpec BuildOne(D.Design d, AxialStack stack, string name, bool evenNorthUp, List<PartDiagnostic> diags)
+    private static PartSpec BuildOne(MachineModel d, AxialStack stack, PartId id, bool evenNorthUp, List<PartDiagnostic> diags)
     {
         var rd = d.Rotor;
-        double R = rd.OuterDiameter / 2, t = rd.Thickness;
-        bool dualStator = d.Machine.Layout == "dual-stator";
-        bool through = dualStator || !(rd.PocketFloor > 0);
-        double pocketZ0 = through ? 0 : rd.PocketFloor;
+        string name = id.Name;
+        double R = rd.OuterDiameterMm / 2, t = rd.ThicknessMm;
+        bool through = d.ThroughPockets;
+        double pocketZ0 = through ? 0 : rd.PocketFloorMm;
         if (!through && !(pocketZ0 < t)) throw new PartsException("rotor.pocket_floor must be less than rotor.thickness");
         double wall = DesignGeometry.MinWallMm(d);
-        int poles = d.Machine.Poles;
+        int poles = d.Poles;
         var notes = new List<string>();
 
         var pocket0 = DesignGeometry.PocketOutline(d);
-        var (pIn, pOut) = ExactGeometry.RadialExtent(pocket0);
+        var (pIn, pOut) = Exact2D.RadialExtent(pocket0);
         var pockets = Enumerable.Range(0, poles).Select(i => pocket0.RotatedDeg(DesignGeometry.PoleAngleDeg(d, i))).ToArray();
 
         // Index notch on the rim at pocket 0.
         double notch = Math.Min(MaxNotchRadiusMm, R - pOut - wall);
-        if (rd.Index == "none")
+        if (!rd.IndexNotch)
         {
             notch = 0;
             notes.Add("no rim index notch (rotor.index: none): pocket 0 is the one on the part's +x axis; mark it before taking the part off the print bed");
@@ -87,27 +80,27 @@ internal static class RotorBuilder
         {
             notch = 0;
             notes.Add("no rim index notch: the web between pocket 0 and the rim is too thin for one; pocket 0 is the one on the part's +x axis");
-            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, name, "no-index-notch", $"{name}: the rim is too close to the pockets for an index notch; left out"));
+            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, id, "no-index-notch", $"{name}: the rim is too close to the pockets for an index notch; left out"));
         }
         var rim = Rim(R, notch);
 
-        Contour? bore = rd.Bore > 0 ? Contour.FullCircle(new Vec2(0, 0), rd.Bore / 2) : null;
+        Contour? bore = rd.BoreMm > 0 ? Contour.FullCircle(new Vec2(0, 0), rd.BoreMm / 2) : null;
         var bolts = BoltHoles(rd.BoltCircle);
 
         // Polarity dots.
-        double dotD = Math.Max(1.5, 3 * d.Process.Nozzle);
-        double dotDepth = Math.Min(2 * d.Process.Layer, Math.Min(t / 4, (t - pocketZ0) / 2));
-        var dotRadius = rd.Marks == "none" ? null : PlaceDots(d, R, notch, pocket0, pockets, bore, bolts, dotD / 2, wall, pIn, pOut);
+        double dotD = Math.Max(1.5, 3 * d.Process.NozzleMm);
+        double dotDepth = Math.Min(2 * d.Process.LayerMm, Math.Min(t / 4, (t - pocketZ0) / 2));
+        var dotRadius = !rd.PolarityDots ? null : PlaceDots(d, R, notch, pocket0, pockets, bore, bolts, dotD / 2, wall, pIn, pOut);
         var features = new List<PartFeature>
         {
             new("rim", FeatureKind.Rim, 0, rim, 0, t, 0, R),
         };
         if (bore is not null) features.Add(new("bore", FeatureKind.Bore, 0, bore, 0, t, 0, 0));
         for (int j = 0; j < bolts.Count; j++)
-            features.Add(new($"bolt-{j}", FeatureKind.BoltHole, j, bolts[j], 0, t, BoltAngle(rd.BoltCircle!, j), rd.BoltCircle!.Diameter / 2));
+            features.Add(new($"bolt-{j}", FeatureKind.BoltHole, j, bolts[j], 0, t, BoltAngle(rd.BoltCircle!, j), rd.BoltCircle!.CircleDiameterMm / 2));
         if (notch > 0) features.Add(new("index-notch", FeatureKind.IndexNotch, 0, Contour.FullCircle(new Vec2(R, 0), notch), 0, t, 0, R));
 
-        double pitch = DesignGeometry.MagnetPitchRadiusMm(d);
+        double pitch = d.Magnets.Shape.PitchRadiusMm;
         var dots = new List<Contour>();
         for (int i = 0; i < poles; i++)
         {
@@ -121,16 +114,16 @@ internal static class RotorBuilder
                 features.Add(new($"mark-{i}", FeatureKind.PolarityMark, i, dot, t - dotDepth, t, a, rDot));
             }
         }
-        if (dotRadius is null && rd.Marks == "none")
+        if (dotRadius is null && !rd.PolarityDots)
             notes.Add("no polarity dots (rotor.marks: none): mark each magnet's north pole yourself, and count north-up magnets from pocket 0 (even pockets on the front rotor)");
         else if (dotRadius is null)
         {
             notes.Add("no polarity dots: there is no room beside the pockets; count north-up magnets from pocket 0 (even pockets on the front rotor)");
-            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, name, "no-polarity-marks", $"{name}: no room beside the pockets for polarity dots; left out"));
+            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, id, "no-polarity-marks", $"{name}: no room beside the pockets for polarity dots; left out"));
         }
 
         string whyNot = through ? "" : "its magnet pockets are blind (rotor.pocket_floor > 0)";
-        var (process, material) = ProcessChoice.Resolve(name, d.Parts.Rotor, rd.Material, "PLA", through, whyNot, diags);
+        var (process, material) = ProcessChoice.Resolve(id, d.Parts.For(PartRole.Rotor), through, whyNot, diags);
 
         var st = new PrismaticStack(t).Outer(rim);
         if (bore is not null) st.Through(bore);
@@ -149,10 +142,10 @@ internal static class RotorBuilder
         }
         else foreach (var dot in dots) st.Cut(dot, t - dotDepth, t);
 
-        notes.Insert(0, name switch
+        notes.Insert(0, id.Side switch
         {
-            "rotor-back" => "rotor-back: magnets go in with the NORTH pole facing out of the pocket (toward the stator) in the dotted pockets (the odd ones, counting from the rim notch), south pole out in the others. Assembled with the two rim notches in line, each back magnet faces a front magnet of the opposite pole, so they attract across the stator.",
-            "rotor-front" => "rotor-front: magnets go in with the NORTH pole facing out of the pocket (toward the stator) in the dotted pockets (the even ones, pocket 0 at the rim notch), south pole out in the others.",
+            PartSide.Back => "rotor-back: magnets go in with the NORTH pole facing out of the pocket (toward the stator) in the dotted pockets (the odd ones, counting from the rim notch), south pole out in the others. Assembled with the two rim notches in line, each back magnet faces a front magnet of the opposite pole, so they attract across the stator.",
+            PartSide.Front => "rotor-front: magnets go in with the NORTH pole facing out of the pocket (toward the stator) in the dotted pockets (the even ones, pocket 0 at the rim notch), south pole out in the others.",
             _ => through
                 ? "rotor: magnets go in with the NORTH pole toward the dotted face in the dotted pockets (the even ones, pocket 0 at the rim notch), south pole toward it in the others."
                 : "rotor: magnets go in with the NORTH pole facing out of the pocket (toward the stator) in the dotted pockets (the even ones, pocket 0 at the rim notch), south pole out in the others.",
@@ -161,13 +154,13 @@ internal static class RotorBuilder
 
         return new PartSpec
         {
-            Name = name,
+            Id = id,
             Process = process,
             Material = material,
             HeightMm = t,
             Layers = st.Build(),
             Features = features,
-            Instances = new[] { Instance(d, stack, name, t) },
+            Instances = new[] { Instance(stack, id, t) },
             CutProfile = cutProfile,
             Marks = marks,
             Notes = notes,
@@ -178,20 +171,20 @@ internal static class RotorBuilder
     /// Where the dots go: the radius of their centres, or null when there is no room. Inside the pocket's inner
     /// edge first, else outside its outer edge.
     /// </summary>
-    private static double? PlaceDots(D.Design d, double R, double notch, Contour pocket0, Contour[] pockets, Contour? bore,
+    private static double? PlaceDots(MachineModel d, double R, double notch, Contour pocket0, Contour[] pockets, Contour? bore,
         IReadOnlyList<Contour> bolts, double rDot, double wall, double pIn, double pOut)
     {
         foreach (double r in new[] { pIn - wall - rDot, pOut + wall + rDot })
         {
-            if (r - rDot < (bore is null ? 0 : d.Rotor.Bore / 2) + wall - 1e-9) continue;
+            if (r - rDot < (bore is null ? 0 : d.Rotor.BoreMm / 2) + wall - 1e-9) continue;
             if (r + rDot > R - wall + 1e-9) continue;
             bool ok = true;
             for (int i = 0; i < pockets.Length && ok; i++)
             {
                 var c = Vec2.FromAngleDeg(DesignGeometry.PoleAngleDeg(d, i)) * r;
-                foreach (var b in bolts) if (ExactGeometry.Distance(b, c) < rDot + wall - 1e-9 || Inside(b, c)) ok = false;
+                foreach (var b in bolts) if (Exact2D.PointContour(c, b) < rDot + wall - 1e-9 || Inside(b, c)) ok = false;
                 foreach (var p in new[] { pockets[i], pockets[(i + 1) % pockets.Length], pockets[(i + pockets.Length - 1) % pockets.Length] })
-                    if (ExactGeometry.Distance(p, c) < rDot + wall - 1e-9) ok = false;
+                    if (Exact2D.PointContour(c, p) < rDot + wall - 1e-9) ok = false;
                 if (notch > 0 && (c - new Vec2(R, 0)).Length < notch + rDot + wall - 1e-9) ok = false;
             }
             if (ok) return r;
@@ -201,21 +194,24 @@ internal static class RotorBuilder
 
     private static bool Inside(Contour circle, Vec2 p) => circle.Circle is { } c && (p - c.Center).Length < c.Radius;
 
-    public static double BoltAngle(D.BoltCircle bc, int j) => j * 360.0 / bc.Count;
+    public static double BoltAngle(BoltPattern bc, int j) => j * 360.0 / bc.Count;
 
-    public static IReadOnlyList<Contour> BoltHoles(D.BoltCircle? bc)
+    public static IReadOnlyList<Contour> BoltHoles(BoltPattern? bc)
     {
         if (bc is null) return Array.Empty<Contour>();
         return Enumerable.Range(0, bc.Count)
-            .Select(j => Contour.FullCircle(Vec2.FromAngleDeg(BoltAngle(bc, j)) * (bc.Diameter / 2), bc.Hole / 2)).ToArray();
+            .Select(j => Contour.FullCircle(Vec2.FromAngleDeg(BoltAngle(bc, j)) * (bc.CircleDiameterMm / 2), bc.HoleMm / 2)).ToArray();
     }
 
-    private static PartInstance Instance(D.Design d, AxialStack stack, string name, double t)
+    private static PartInstance Instance(AxialStack stack, PartId id, double t)
     {
-        var slab = stack.Slabs.First(s => s.Kind == SlabKind.Rotor && s.Owner == name);
-        // The stator-side face is the part's top: a rotor on the +z side of the stator faces -z (flipped).
-        bool flipped = d.Machine.Layout != "dual-stator" && slab.ZMin > 0;
-        double rank = d.Machine.Layout == "dual-stator" ? 0 : Math.Sign(slab.ZMin + slab.ZMax);
-        return new PartInstance(0, name, slab.ZMin, t, flipped, 0, 0, rank);
+        var slab = stack.Slab(SlabKind.Rotor, id);
+        // The stator-side face is the part's top: a rotor with stators only on its -z side (it sits on the +z side
+        // of the stationary pack) faces -z (flipped). A rotor between two stators is centred and not flipped.
+        bool statorAbove = stack.OfKind(SlabKind.Stator).Any(s => s.ZMin >= slab.ZMax);
+        bool statorBelow = stack.OfKind(SlabKind.Stator).Any(s => s.ZMax <= slab.ZMin);
+        bool flipped = statorBelow && !statorAbove;
+        double rank = Math.Sign(slab.ZMin + slab.ZMax);
+        return new PartInstance(0, id, slab.ZMin, t, flipped, 0, 0, rank);
     }
 }

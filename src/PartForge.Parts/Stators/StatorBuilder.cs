@@ -1,8 +1,11 @@
+using PartForge.Design.Machines;
+using PartForge.Design.Parts;
 using PartForge.Design.Stack;
+using PartForge.Geometry.Exact;
 using PartForge.Geometry.Primitives;
 using PartForge.Geometry.Profiles;
+using PartForge.Geometry.Solids;
 using PartForge.Parts.Shapes;
-using D = PartForge.Design.Model;
 
 namespace PartForge.Parts.Stators;
 
@@ -31,24 +34,33 @@ namespace PartForge.Parts.Stators;
 /// </summary>
 internal static class StatorBuilder
 {
-    public sealed record Variant(string Name, bool Flipped, bool HasSensors, bool SensorsOnTop, double ExplodeRank);
+    public sealed record Variant(PartId Id, bool Flipped, bool HasSensors, bool SensorsOnTop, double ExplodeRank);
 
-    public static IReadOnlyList<Variant> Variants(D.Design d) => d.Machine.Layout switch
+    /// <summary>
+    /// Each ring of the layout, placed by the stack: a ring with rotors only on its +z side is turned over (its
+    /// grooved top face then faces away from the rotor); the first ring carries the sensors, in the face toward
+    /// the rotor it faces (the +z one when rotors are on both sides); the exploded view moves a ring by the sign
+    /// of its mid-plane.
+    /// </summary>
+    public static IReadOnlyList<Variant> Variants(MachineModel d)
     {
-        "single-rotor" => new[] { new Variant("stator", true, true, false, 0) },
-        "dual-stator" => new[]
+        var stack = d.Stack;
+        var rotors = stack.OfKind(SlabKind.Rotor).ToList();
+        return d.Layout.Stators.Select(id =>
         {
-            new Variant("stator-front", false, true, false, 1),
-            new Variant("stator-back", true, false, false, -1),
-        },
-        _ => new[] { new Variant("stator", false, true, true, 0) },
-    };
+            var ring = stack.Slab(SlabKind.Stator, id);
+            bool above = rotors.Any(r => r.ZMin >= ring.ZMax), below = rotors.Any(r => r.ZMax <= ring.ZMin);
+            bool flipped = above && !below;
+            bool sensorsOnTop = above != flipped;
+            return new Variant(id, flipped, id == d.Layout.Stators[0], sensorsOnTop, Math.Sign(ring.ZMin + ring.ZMax));
+        }).ToArray();
+    }
 
     /// <summary>
     /// Part-local angle of coil k's seat: k x 360 / coils, negated on a ring that is turned over in the machine,
     /// so that seat-k (and former copy k) is at coil k's machine angle k x 360 / coils either way.
     /// </summary>
-    public static double LocalCoilAngleDeg(D.Design d, int k, bool flipped)
+    public static double LocalCoilAngleDeg(MachineModel d, int k, bool flipped)
     {
         double a = DesignGeometry.CoilAngleDeg(d, k);
         return flipped && a != 0 ? 360 - a : a;
@@ -57,16 +69,16 @@ internal static class StatorBuilder
     /// <summary>
     /// Builds one ring.
     /// </summary>
-    public static PartSpec Build(D.Design d, AxialStack stack, CoilGeometry coil, Contour formerFootprint, Variant v, List<PartDiagnostic> diags)
+    public static PartSpec Build(MachineModel d, AxialStack stack, CoilGeometry coil, Contour formerFootprint, Variant v, List<PartDiagnostic> diags)
     {
         var sd = d.Stator;
-        double Ro = sd.OuterDiameter / 2, Ri = sd.InnerDiameter / 2, s = sd.Thickness;
-        int n = d.Machine.Coils;
+        double Ro = sd.OuterDiameterMm / 2, Ri = sd.InnerDiameterMm / 2, s = sd.ThicknessMm;
+        int n = d.CoilsPerStator;
         double pitch = coil.PitchRadiusMm;
         double c = DesignGeometry.SeatClearanceMm(d);
         double wall = DesignGeometry.MinWallMm(d);
         double dw = coil.WireOverallMm > 0 ? coil.WireOverallMm : 0.5;
-        double grooveDepth = Math.Min(Math.Max(2 * d.Process.Layer, 2 * dw), s / 3);
+        double grooveDepth = Math.Min(Math.Max(2 * d.Process.LayerMm, 2 * dw), s / 3);
         double channelW = Math.Max(1.0, 3 * dw);
         var o = new Vec2(0, 0);
         var notes = new List<string>();
@@ -84,8 +96,8 @@ internal static class StatorBuilder
 
         // Seats.
         var seat0 = ContourOffset.Offset(formerFootprint, c).Translated(new Vec2(pitch, 0));
-        var (seatMin, seatMax) = ExactGeometry.RadialExtent(seat0);
-        double seatOut = ExactGeometry.RayExit(seat0, new Vec2(pitch, 0), new Vec2(1, 0));
+        var (seatMin, seatMax) = Exact2D.RadialExtent(seat0);
+        double seatOut = Exact2D.RayExit(seat0, new Vec2(pitch, 0), new Vec2(1, 0));
         for (int k = 0; k < n; k++)
         {
             double a = LocalCoilAngleDeg(d, k, v.Flipped);
@@ -95,12 +107,12 @@ internal static class StatorBuilder
         }
 
         // Sensors (angles in the machine frame; a flipped ring carries them mirrored).
-        var sensorAngles = v.HasSensors && d.Sensor.Kind != "none" ? coil.SensorAnglesDeg : Array.Empty<double>();
+        var sensorAngles = v.HasSensors && d.Sensor.Kind != SensorKind.None ? coil.SensorAnglesDeg : Array.Empty<double>();
         double rs = coil.SensorRadiusMm > 0 ? coil.SensorRadiusMm : pitch;
         var body = d.Sensor.Body;
-        double pl = body.Length + 2 * c, pw = body.Width + 2 * c;
-        double ph = Math.Min(body.Height, s);
-        if (body.Height >= s) notes.Add("the sensor body is as tall as the ring: its pocket goes through");
+        double pl = body.LengthMm + 2 * c, pw = body.WidthMm + 2 * c;
+        double ph = Math.Min(body.HeightMm, s);
+        if (body.HeightMm >= s) notes.Add("the sensor body is as tall as the ring: its pocket goes through");
         double sensorMax = 0;
         var sensorChannelStarts = new List<(double AngleDeg, double RadiusMm)>();
         for (int i = 0; i < sensorAngles.Count; i++)
@@ -110,7 +122,7 @@ internal static class StatorBuilder
             double z0 = v.SensorsOnTop ? s - ph : 0, z1 = v.SensorsOnTop ? s : ph;
             st.Cut(pocket, z0, z1);
             features.Add(new($"sensor-{i}", FeatureKind.SensorPocket, i, pocket, z0, z1, a, rs));
-            sensorMax = Math.Max(sensorMax, ExactGeometry.RadialExtent(pocket).Max);
+            sensorMax = Math.Max(sensorMax, Exact2D.RadialExtent(pocket).Max);
             double rLead = rs;
             if (!v.SensorsOnTop && ph < s)
             {
@@ -128,15 +140,15 @@ internal static class StatorBuilder
         (double Lo, double Hi)? mountBand = null;
         if (sd.Mount is { } m)
         {
-            double rm = m.CircleDiameter / 2;
+            double rm = m.CircleDiameterMm / 2;
             for (int j = 0; j < m.Count; j++)
             {
                 double a = StatorLayout.MountAngleDeg(d, mountOffset, j);
-                var hole = Contour.FullCircle(Vec2.FromAngleDeg(a) * rm, m.Hole / 2);
+                var hole = Contour.FullCircle(Vec2.FromAngleDeg(a) * rm, m.HoleMm / 2);
                 st.Through(hole);
                 features.Add(new($"mount-{j}", FeatureKind.MountHole, j, hole, 0, s, a, rm));
             }
-            mountBand = (rm - m.Hole / 2 - wall, rm + m.Hole / 2 + wall);
+            mountBand = (rm - m.HoleMm / 2 - wall, rm + m.HoleMm / 2 + wall);
         }
 
         // Collector band: widest free radial interval outside the seats and sensors, clear of the mount holes.
@@ -173,7 +185,7 @@ internal static class StatorBuilder
         {
             channelEnd = Ro + 1.0;
             notes.Add("no room for a collector groove between the seats and the rim: every channel runs to the rim, where the leads leave the ring");
-            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, v.Name, "no-collector", $"{v.Name}: no free band for a collector groove; the lead channels run straight to the rim"));
+            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, v.Id, "no-collector", $"{v.Id.Name}: no free band for a collector groove; the lead channels run straight to the rim"));
         }
 
         // Channels.
@@ -195,21 +207,22 @@ internal static class StatorBuilder
             features.Add(new($"sensor-channel-{i}", FeatureKind.WireChannel, n + i, ch, zg0, s, a, (r0 + channelEnd) / 2));
         }
 
-        var (process, material) = ProcessChoice.Resolve(v.Name, d.Parts.Stator, sd.Material, "PLA", false,
+        var (process, material) = ProcessChoice.Resolve(v.Id, d.Parts.For(PartRole.Stator), false,
             "a stator ring has wire grooves and blind sensor pockets", diags);
-        notes.Insert(0, $"{v.Name}: push each former into its seat, slotted flange on the grooved face, flats matching; centre it on the ring's thickness and glue it. Lay the leads in the channels to the collector groove and out at the terminal exit.");
-        if (v.Name == "stator-back") notes.Add("stator-back has no sensor pockets: the timing sensors sit in stator-front.");
+        notes.Insert(0, $"{v.Id.Name}: push each former into its seat, slotted flange on the grooved face, flats matching; centre it on the ring's thickness and glue it. Lay the leads in the channels to the collector groove and out at the terminal exit.");
+        if (!v.HasSensors && d.Sensor.Kind != SensorKind.None)
+            notes.Add($"{v.Id.Name} has no sensor pockets: the timing sensors sit in {d.Layout.Stators[0].Name}.");
 
-        var slab = stack.Slabs.First(x => x.Kind == SlabKind.Stator && x.Owner == v.Name);
+        var slab = stack.Slab(SlabKind.Stator, v.Id);
         return new PartSpec
         {
-            Name = v.Name,
+            Id = v.Id,
             Process = process,
             Material = material,
             HeightMm = s,
             Layers = st.Build(),
             Features = features,
-            Instances = new[] { new PartInstance(0, v.Name, slab.ZMin, s, v.Flipped, 0, 0, v.ExplodeRank) },
+            Instances = new[] { new PartInstance(0, v.Id, slab.ZMin, s, v.Flipped, 0, 0, v.ExplodeRank) },
             Notes = notes,
         };
     }

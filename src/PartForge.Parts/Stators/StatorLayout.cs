@@ -1,5 +1,5 @@
+using PartForge.Design.Machines;
 using PartForge.Parts.Shapes;
-using D = PartForge.Design.Model;
 
 namespace PartForge.Parts.Stators;
 
@@ -18,10 +18,10 @@ internal static class StatorLayout
 {
     public const double TerminalAngleDeg = 180;
 
-    public static double MountOffsetDeg(D.Design d, IReadOnlyList<double> sensorAnglesDeg)
+    public static double MountOffsetDeg(MachineModel d, IReadOnlyList<double> sensorAnglesDeg)
     {
         if (d.Stator.Mount is not { } m) return 0;
-        var avoid = Enumerable.Range(0, d.Machine.Coils).Select(k => DesignGeometry.CoilAngleDeg(d, k))
+        var avoid = Enumerable.Range(0, d.CoilsPerStator).Select(k => DesignGeometry.CoilAngleDeg(d, k))
             .Concat(sensorAnglesDeg).Concat(sensorAnglesDeg.Select(a => -a)).Append(TerminalAngleDeg).ToArray();
         double Score(double phi0) => Enumerable.Range(0, m.Count)
             .Min(j => avoid.Min(a => AngularDistance(phi0 + j * 360.0 / m.Count, a)));
@@ -29,7 +29,7 @@ internal static class StatorLayout
         return Score(half) > Score(0) + 1e-9 ? half : 0;
     }
 
-    public static double MountAngleDeg(D.Design d, double offsetDeg, int j) => offsetDeg + j * 360.0 / d.Stator.Mount!.Count;
+    public static double MountAngleDeg(MachineModel d, double offsetDeg, int j) => offsetDeg + j * 360.0 / d.Stator.Mount!.Count;
 
     public static double AngularDistance(double a, double b)
     {

@@ -31,14 +31,14 @@ internal static class PresetPipeline
 
     public static (ElectricalResult E, PartSet Parts) Stages(Design.Model.Design d)
     {
-        var e = ElectricalEngine.Evaluate(d);
-        var parts = PartsBuilder.Build(d, e, Precision.FromChordalTolerance(d.Mesh.ChordalTolerance));
+        var e = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(d));
+        var parts = PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), e, Precision.FromChordalTolerance(d.Mesh.ChordalTolerance));
         return (e, parts);
     }
 
     public static CheckReport Check(Design.Model.Design d, CheckOptions? options = null)
     {
         var (e, parts) = Stages(d);
-        return CheckRunner.Run(d, e, parts, options);
+        return CheckRunner.Run(PartForge.Design.Machines.MachineModel.From(d), e, parts, options);
     }
 }

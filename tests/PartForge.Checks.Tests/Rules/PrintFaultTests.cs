@@ -14,7 +14,7 @@ public class PrintFaultTests
     private static readonly TestMachine Base = new();
 
     private static CheckResult One(CheckReport r, string id, string? part = null) =>
-        r.Checks.First(c => c.Id == id && (part is null || c.Part == part));
+        r.Checks.First(c => c.Id == id && (part is null || c.PartName == part));
 
     private static void AssertOnlyFailure(CheckReport report, string id)
     {
@@ -43,7 +43,7 @@ public class PrintFaultTests
     }
 
     private static bool Near(Contour a, Contour b, double d) =>
-        PartForge.Checks.Clearance.Box2.Of(a).DistanceTo(PartForge.Checks.Clearance.Box2.Of(b)) < d;
+        PartForge.Geometry.Exact.Box2.Of(a).DistanceTo(PartForge.Geometry.Exact.Box2.Of(b)) < d;
 
     private static List<Vec2> Points(Contour c, double step)
     {
@@ -126,7 +126,7 @@ public class PrintFaultTests
         // |c_p - c_b| - 6.075 - 1.7 (circle to circle).
         var bad = Base.With(m => m.BoltCircleD = 62.4);
         var parts = bad.Parts();
-        var rotor = parts.Get("rotor");
+        var rotor = parts.Get(PartForge.Design.Parts.PartId.Rotor);
         double expected = rotor.FeaturesOf(FeatureKind.MagnetPocket)
             .SelectMany(p => rotor.FeaturesOf(FeatureKind.BoltHole).Select(b => (p.Position - b.Position).Length - 6.075 - 1.7)).Min();
         var r = bad.Check(CheckRunner.ViewsFrom(parts));
@@ -166,7 +166,7 @@ public class PrintFaultTests
         // Stator rim close to the seats: the wall is the stator radius minus the seat's outer reach, sampled.
         var bad = Base.With(m => { m.StatorOd = 2 * (40 + 9.9); m.MountCount = 0; });
         var parts = bad.Parts();
-        var stator = parts.Get("stator");
+        var stator = parts.Get(PartForge.Design.Parts.PartId.Stator);
         // The rim is a circle about the axis: the wall from a sampled seat point p is R - |p|.
         double rimR = 40 + 9.9;
         double expected = stator.FeaturesOf(FeatureKind.CoilSeat).SelectMany(s => Points(s.Contour, 0.005)).Min(p => rimR - p.Length);
@@ -184,7 +184,7 @@ public class PrintFaultTests
         // A wide sensor body between coils: the wall to the nearest seat, sampled from both boundaries.
         var bad = Base.With(m => m.SensorWidth = 7.5);
         var parts = bad.Parts();
-        var stator = parts.Get("stator");
+        var stator = parts.Get(PartForge.Design.Parts.PartId.Stator);
         double expected = stator.FeaturesOf(FeatureKind.SensorPocket)
             .SelectMany(s => stator.FeaturesOf(FeatureKind.CoilSeat).Where(q => Near(s.Contour, q.Contour, 3)).Select(q => Sampled(s.Contour, q.Contour))).Min();
         var r = bad.Check(CheckRunner.ViewsFrom(parts));

@@ -13,8 +13,8 @@ public class PipelineEvaluatorTests
     public void Coarse_sweep_polygons_give_exactly_the_checks_of_the_build_pipeline(string preset)
     {
         var d = DesignLoader.LoadText(SweepRunnerTests.Preset(preset), preset + ".yaml").Design!;
-        var fast = PipelineEvaluator.EvaluateStages(d).Checks.Checks;
-        var full = BuildPipeline.Evaluate(d).Checks.Checks;
+        var fast = PipelineEvaluator.EvaluateStages(PartForge.Design.Machines.MachineModel.From(d)).Checks.Checks;
+        var full = BuildPipeline.Evaluate(PartForge.Design.Machines.MachineModel.From(d)).Checks.Checks;
         Assert.Equal(full.Select(c => (c.Id, c.Part, c.StatusText, c.Value, c.Limit, c.Margin)), fast.Select(c => (c.Id, c.Part, c.StatusText, c.Value, c.Limit, c.Margin)));
     }
 
@@ -22,8 +22,8 @@ public class PipelineEvaluatorTests
     public void Metrics_are_the_electrical_engines_and_the_checkers_values()
     {
         var d = DesignLoader.LoadText(SweepRunnerTests.Preset("wind-duo"), "wind-duo.yaml").Design!;
-        var ev = BuildPipeline.Evaluate(d);
-        var o = new PipelineEvaluator().Evaluate(d);
+        var ev = BuildPipeline.Evaluate(PartForge.Design.Machines.MachineModel.From(d));
+        var o = new PipelineEvaluator().Evaluate(PartForge.Design.Machines.MachineModel.From(d));
         Assert.Equal(ev.Checks.StatusText, o.Status);
         Assert.Equal(ev.Electrical.Phase!.EmfRmsV, o.Metrics[SweepMetrics.PhaseEmfRms]);
         Assert.Equal(ev.Electrical.LineEmfRmsV, o.Metrics[SweepMetrics.LineEmfRms]);

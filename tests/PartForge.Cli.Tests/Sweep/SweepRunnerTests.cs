@@ -8,8 +8,8 @@ public class SweepRunnerTests
     /// <summary>A test double: a result that depends on the loaded design only, so order and determinism are visible.</summary>
     private sealed class EchoEvaluator : ISweepEvaluator
     {
-        public SweepOutcome Evaluate(Design.Model.Design d) => new(d.Gap.AirGap > 1.6 ? "warn" : "pass", "",
-            new Dictionary<string, double> { [SweepMetrics.Turns] = d.Coils.Turns ?? 0, [SweepMetrics.PhaseEmfRms] = (d.Coils.Turns ?? 0) * 0.1 / d.Gap.AirGap });
+        public SweepOutcome Evaluate(Design.Machines.MachineModel d) => new(d.Gap.AirGapMm > 1.6 ? "warn" : "pass", "",
+            new Dictionary<string, double> { [SweepMetrics.Turns] = d.Coils.Turns ?? 0, [SweepMetrics.PhaseEmfRms] = (d.Coils.Turns ?? 0) * 0.1 / d.Gap.AirGapMm });
     }
 
     internal static string Preset(string name)

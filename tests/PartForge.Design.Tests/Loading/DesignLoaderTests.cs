@@ -153,22 +153,26 @@ public class DesignLoaderTests
     public void Defaults_are_filled_and_derived_keys_resolved()
     {
         string text = Crank.Replace("  connection: star\n", "");
-        var d = DesignLoader.LoadText(text, "t.yaml").Design!;
-        Assert.Equal("star", d.Machine.Connection);
-        Assert.Equal(40, d.Coils.PitchRadius);                 // from magnets.pitch_radius
-        Assert.Equal(0.1, d.Tolerances.PrintZ);                // documented default
-        Assert.Equal(0.01, d.Mesh.ChordalTolerance);
-        Assert.Equal(3, d.Sensor.Count);                       // one per phase when not given
-        Assert.Null(d.Rotor.BackIron);
+        var loaded = DesignLoader.LoadText(text, "t.yaml");
+        var d = loaded.Design!;
+        var m = loaded.Machine!;
+        Assert.Null(d.Machine.Connection);                     // the file as written ...
+        Assert.Equal(PartForge.Design.Machines.Connection.Star, m.Connection); // ... and the machine it describes
+        Assert.Equal(40, m.Coils.PitchRadiusMm);               // from magnets.pitch_radius
+        Assert.Equal(0.1, m.Tolerances.PrintZMm);              // documented default
+        Assert.Equal(0.01, m.ChordalToleranceMm);
+        Assert.Equal(3, m.Sensor.Count);                       // one per phase when not given
+        Assert.Null(m.Rotor.BackIronThicknessMm);
     }
 
     [Fact]
     public void Arc_magnets_resolve_their_pitch_radius_to_the_mid_radius()
     {
         var p = PartForge.Design.Presets.PresetLibrary.Find("hydro-arc")!;
-        var d = DesignLoader.LoadText(p.Text, "h.yaml").Design!;
-        Assert.Equal(37.5, d.Magnets.PitchRadius);
-        Assert.Equal(37.5, d.Coils.PitchRadius);
+        var m = DesignLoader.LoadText(p.Text, "h.yaml").Machine!;
+        Assert.IsType<PartForge.Design.Machines.Magnets.ArcMagnet>(m.Magnets.Shape);
+        Assert.Equal(37.5, m.Magnets.Shape.PitchRadiusMm);
+        Assert.Equal(37.5, m.Coils.PitchRadiusMm);
     }
 
     [Fact]

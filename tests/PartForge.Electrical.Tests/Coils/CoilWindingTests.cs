@@ -1,3 +1,4 @@
+using PartForge.Design.Machines;
 using PartForge.Electrical.Coils;
 using PartForge.Electrical.Wire;
 

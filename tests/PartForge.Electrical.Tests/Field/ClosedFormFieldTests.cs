@@ -1,3 +1,4 @@
+using PartForge.Design.Machines.Magnets;
 using PartForge.Electrical.Field;
 using PartForge.Electrical.Flux;
 
@@ -120,7 +121,7 @@ public class ClosedFormFieldTests
     [InlineData(25.0, 12.0, -5.0)]
     public void ArcAgainstSurfaceChargeIntegration(double x, double y, double z)
     {
-        var g = new MagnetGeometry { Shape = MagnetShape.Arc, InnerRadiusMm = 30, OuterRadiusMm = 45, SpanDeg = 28, ThicknessMm = 3, PitchRadiusMm = 37.5 };
+        var g = new ArcMagnet(30, 45, 28, 3);
         var src = new MagnetSource(g, 0, -3, 0, 1.25, 0);
         double a = 14 * Math.PI / 180;
         var top = SurfaceCharge.Sector(30, 45, -a, a, 0, x, y, z, 600, 600);
@@ -133,7 +134,7 @@ public class ClosedFormFieldTests
     [Fact]
     public void SourcePlacementAndDipole()
     {
-        var g = new MagnetGeometry { Shape = MagnetShape.Block, LengthMm = 20, WidthMm = 10, ThicknessMm = 5, PitchRadiusMm = 60 };
+        var g = new BlockMagnet(20, 10, 5, 60);
         var src = new MagnetSource(g, 90, 1, 6, 1.3, 3);
         // At 90 degrees the block's radial length lies along +y.
         Assert.Equal(CuboidField.Bz(1.3, 50, 70, -5, 5, 1, 6, 58, -2, -1), src.BzExact(2, 58, -1), 12);
@@ -154,7 +155,7 @@ public class ArcPolygonConvergenceTests
     [InlineData(46.0, 11.5, -2.0)]
     public void DefaultToleranceIsConverged(double x, double y, double z)
     {
-        var g = new MagnetGeometry { Shape = MagnetShape.Arc, InnerRadiusMm = 30, OuterRadiusMm = 45, SpanDeg = 28, ThicknessMm = 3, PitchRadiusMm = 37.5 };
+        var g = new ArcMagnet(30, 45, 28, 3);
         var a = new MagnetSource(g, 0, 0, 3, 1.3, 0);
         var f = new MagnetSource(g, 0, 0, 3, 1.3, 0, MagnetSource.ArcChordalToleranceMm / 20);
         double scale = Math.Abs(f.BzExact(37.5, 0, -0.5));
@@ -178,7 +179,7 @@ public class ArcDetailLevelTests
     [InlineData(-80.0, -5.0, -0.5)]
     public void CoarseLevelsAgreeWithTheFinest(double x, double y, double z)
     {
-        var g = new MagnetGeometry { Shape = MagnetShape.Arc, InnerRadiusMm = 30, OuterRadiusMm = 45, SpanDeg = 28, ThicknessMm = 3, PitchRadiusMm = 37.5 };
+        var g = new ArcMagnet(30, 45, 28, 3);
         var a = new MagnetSource(g, 0, 0, 3, 1.3, 0);
         double scale = Math.Abs(a.BzFinest(37.5, 0, -0.5));
         Assert.Equal(a.BzFinest(x, y, z), a.BzExact(x, y, z), scale * 1e-4);
@@ -188,7 +189,7 @@ public class ArcDetailLevelTests
     [Fact]
     public void TouchingImageForceIsConverged()
     {
-        var g = new MagnetGeometry { Shape = MagnetShape.Arc, InnerRadiusMm = 30, OuterRadiusMm = 45, SpanDeg = 28, ThicknessMm = 3, PitchRadiusMm = 37.5 };
+        var g = new ArcMagnet(30, 45, 28, 3);
         var m = new MagnetSource(g, 0, 0, 3, 1.3, 0);
         var img = m.ImageIn(3, 0);
         double coarse = MagneticPull.AxialForceN(m, new[] { img }, 0);

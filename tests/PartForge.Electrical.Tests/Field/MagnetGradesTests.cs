@@ -1,3 +1,4 @@
+using PartForge.Design.Machines.Magnets;
 using PartForge.Electrical.Field;
 
 namespace PartForge.Electrical.Tests.Field;
@@ -10,7 +11,7 @@ public class MagnetGradesTests
     [InlineData("N42", 1.30)]
     [InlineData("N52", 1.45)]
     [InlineData("N42SH", 1.30)]
-    public void MidRange(string grade, double br) => Assert.Equal(br, MagnetGrades.MidRangeBrTesla(grade)!.Value, 9);
+    public void MidRange(string grade, double br) => Assert.Equal(br, PartForge.Design.Materials.MagnetGrades.MidRangeBrTesla(grade)!.Value, 9);
 
     // Documented interpolation between the anchors, and within the published ranges of the anchors' neighbours.
     [Fact]
@@ -19,7 +20,7 @@ public class MagnetGradesTests
         double prev = 0;
         for (int n = 35; n <= 52; n++)
         {
-            double b = MagnetGrades.MidRangeBrTesla("N" + n)!.Value;
+            double b = PartForge.Design.Materials.MagnetGrades.MidRangeBrTesla("N" + n)!.Value;
             Assert.True(b > prev);
             Assert.InRange(b, 1.17, 1.48);
             prev = b;
@@ -33,17 +34,19 @@ public class MagnetGradesTests
     [InlineData("")]
     public void UnknownGradesAreRejected(string grade)
     {
-        Assert.Null(MagnetGrades.MidRangeBrTesla(grade));
-        var diags = new List<Diagnostic>();
-        Assert.Null(MagnetGrades.FromDesign(new PartForge.Design.Model.Magnets { Grade = grade }, diags));
-        Assert.Contains(diags, d => d.Id == "magnet-grade-unknown" && d.Severity == DiagnosticSeverity.Error && d.Message.Contains("magnets.grade"));
+        Assert.Null(PartForge.Design.Materials.MagnetGrades.MidRangeBrTesla(grade));
     }
 
     [Fact]
     public void GivenBrOverridesTheGrade()
     {
-        var diags = new List<Diagnostic>();
-        Assert.Equal(1.21, MagnetGrades.FromDesign(new PartForge.Design.Model.Magnets { Grade = "N52", Br = 1.21 }, diags));
-        Assert.Empty(diags);
+        var d = TestDesigns.Crank();
+        var m = PartForge.Design.Machines.MachineModel.From(Copy.With(d, magnets: new PartForge.Design.Model.Magnets
+        {
+            Shape = "disc", Diameter = 12, Thickness = 4, Grade = "N52", Br = 1.21, PitchRadius = 40,
+        }));
+        Assert.Equal(1.21, m.Magnets.BrTesla);
+        Assert.Equal("br", m.Magnets.BrSource);
+        Assert.Equal(1.21, ElectricalEngine.Evaluate(m).Magnet.BrTesla);
     }
 }

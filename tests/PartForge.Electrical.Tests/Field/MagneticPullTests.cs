@@ -1,3 +1,4 @@
+using PartForge.Design.Machines.Magnets;
 using PartForge.Electrical.Field;
 
 namespace PartForge.Electrical.Tests.Field;
@@ -16,7 +17,7 @@ public class MagneticPullTests
     [InlineData(4.0, 3.86)]
     public void TwoDiscMagnets(double gap, double newtons)
     {
-        var g = new MagnetGeometry { Shape = MagnetShape.Disc, DiameterMm = 10, ThicknessMm = 3, PitchRadiusMm = 0 };
+        var g = new DiscMagnet(10, 3, 0);
         var lower = new MagnetSource(g, 0, -3, 0, 1.30, 0);
         var upper = new MagnetSource(g, 0, gap, gap + 3, 1.30, 0);
         double f = MagneticPull.AxialForceN(upper, new[] { lower }, gap);
@@ -30,7 +31,7 @@ public class MagneticPullTests
     [Fact]
     public void ImageInIronIsThePairAtTwiceTheGap()
     {
-        var g = new MagnetGeometry { Shape = MagnetShape.Disc, DiameterMm = 10, ThicknessMm = 3, PitchRadiusMm = 0 };
+        var g = new DiscMagnet(10, 3, 0);
         var m = new MagnetSource(g, 0, 0, 3, 1.30, 0);
         var image = m.ImageIn(3.5, 0); // iron face 0.5 mm above the magnet
         Assert.Equal(3.5 + 0.5, image.ZMinMm, 12);
@@ -41,7 +42,7 @@ public class MagneticPullTests
     [Fact]
     public void BlockPairAgainstBruteForce()
     {
-        var g = new MagnetGeometry { Shape = MagnetShape.Block, LengthMm = 10, WidthMm = 6, ThicknessMm = 3, PitchRadiusMm = 0 };
+        var g = new BlockMagnet(10, 6, 3, 0);
         var a = new MagnetSource(g, 0, -3, 0, 1.2, 0);
         var b = new MagnetSource(g, 0, 2, 5, 1.2, 0);
         double f = MagneticPull.AxialForceN(b, new[] { a }, 2);
@@ -63,19 +64,19 @@ public class MagneticPullTests
     public void DesignLevelPull()
     {
         var crank = TestDesigns.Crank();
-        var p = MagneticPull.Compute(crank)!;
+        var p = MagneticPull.Compute(PartForge.Design.Machines.MachineModel.From(crank))!;
         Assert.True(p.RotorToRotorN > 0);
         Assert.Equal(0, p.MagnetToBackIronN);
         Assert.Equal(p.RotorToRotorPerMagnetN * 12, p.RotorToRotorN, 9);
-        var single = MagneticPull.Compute(TestDesigns.Arc())!;
+        var single = MagneticPull.Compute(PartForge.Design.Machines.MachineModel.From(TestDesigns.Arc()))!;
         Assert.Equal(0, single.RotorToRotorN);
         Assert.True(single.MagnetToBackIronN > 0);
-        var large = MagneticPull.Compute(TestDesigns.Large())!;
-        var noIron = MagneticPull.Compute(new PartForge.Design.Model.Design
+        var large = MagneticPull.Compute(PartForge.Design.Machines.MachineModel.From(TestDesigns.Large()))!;
+        var noIron = MagneticPull.Compute(PartForge.Design.Machines.MachineModel.From(new PartForge.Design.Model.Design
         {
             Machine = TestDesigns.Large().Machine, Magnets = TestDesigns.Large().Magnets, Coils = TestDesigns.Large().Coils, Stator = TestDesigns.Large().Stator,
             Rotor = new PartForge.Design.Model.Rotor { OuterDiameter = 270, Thickness = 8, PocketFloor = 2 },
-        })!;
+        }))!;
         Assert.True(large.RotorToRotorN > noIron.RotorToRotorN, "back iron strengthens the rotor-to-rotor pull");
     }
 }
@@ -87,7 +88,7 @@ public class MagneticPullTouchingTests
     [Fact]
     public void TouchingGradingShortcutIsExact()
     {
-        var g = new MagnetGeometry { Shape = MagnetShape.Block, LengthMm = 12, WidthMm = 8, ThicknessMm = 3, PitchRadiusMm = 0 };
+        var g = new BlockMagnet(12, 8, 3, 0);
         var m = new MagnetSource(g, 0, 0, 3, 1.3, 0);
         var img = m.ImageIn(3, 0);
         Assert.Equal(MagneticPull.AxialForceN(m, new[] { img }, 0, 8), MagneticPull.AxialForceN(m, new[] { img }, 3), 1e-3 * Math.Abs(MagneticPull.AxialForceN(m, new[] { img }, 0, 8)));

@@ -1,3 +1,4 @@
+using PartForge.Design.Machines.Magnets;
 using PartForge.Design.Stack;
 using PartForge.Electrical.Coils;
 using PartForge.Electrical.Field;
@@ -13,10 +14,9 @@ public class CoilFluxTests
     private static (RotorField Field, CoilWinding Coil) Build(M.Design d)
     {
         var diags = new List<Diagnostic>();
-        var g = MagnetGeometry.FromDesign(d, diags)!;
-        double br = MagnetGrades.FromDesign(d.Magnets, diags)!.Value;
-        var field = RotorField.FromDesign(d, g, br, AxialStack.From(d), diags, 0);
-        var spec = CoilSpec.FromDesign(d, g, WireSpec.FromDesign(d.Coils, diags)!, diags)!;
+        var m = PartForge.Design.Machines.MachineModel.From(d);
+        var field = RotorField.From(m, 0);
+        var spec = CoilSpec.From(m, WireSpec.From(m.Coils.Wire, m.Coils.EnamelGrade), diags)!;
         return (field, spec.Wind(d.Coils.Turns!.Value));
     }
 
@@ -30,8 +30,8 @@ public class CoilFluxTests
     public void DefaultQuadratureIsConverged(string which)
     {
         var d = Pick(which);
-        var a = ElectricalEngine.Evaluate(d);
-        var f = ElectricalEngine.Evaluate(d, FluxQuadrature.Fine);
+        var a = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(d));
+        var f = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(d), FluxQuadrature.Fine);
         Assert.Equal(f.CoilFluxLinkagePeakWb, a.CoilFluxLinkagePeakWb, f.CoilFluxLinkagePeakWb * 1e-3);
         Assert.Equal(f.FluxLinkage!.CoefficientsWb[0], a.FluxLinkage!.CoefficientsWb[0], Math.Abs(f.FluxLinkage.CoefficientsWb[0]) * 1e-3);
         Assert.Equal(f.Phase!.EmfRmsV, a.Phase!.EmfRmsV, f.Phase.EmfRmsV * 1e-3);
@@ -121,7 +121,7 @@ public class CoilFluxTests
         };
         var (field, coil) = Build(d);
         var series = CoilFlux.Compute(field, coil.Outline, coil.Turns, FluxQuadrature.Default with { FarFactor = 0 });
-        var stack = AxialStack.From(d);
+        var stack = PartForge.Design.Machines.MachineModel.From(d).Stack;
         var magnet = stack.Slabs.Single(s => s.Kind == SlabKind.Magnet);
         double a = 6, len = 4;
         double F(double u) => u / Math.Sqrt(u * u + a * a);

@@ -18,7 +18,7 @@ public class EmfTests
     [Fact]
     public void FaradayConsistencyNearSinusoidal()
     {
-        var r = ElectricalEngine.Evaluate(NearSine());
+        var r = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(NearSine()));
         Assert.True(r.Phase!.ThdPercent < 3, $"THD {r.Phase.ThdPercent}");
         double f = r.ElectricalHz;
         Assert.Equal(16 / 2 * 500 / 60.0, f, 12);
@@ -32,7 +32,7 @@ public class EmfTests
     public void WorkedFrequencyExample()
     {
         var d = TestDesigns.Crank();
-        var r = ElectricalEngine.Evaluate(d);
+        var r = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(d));
         Assert.Equal(6 * 400 / 60.0, r.ElectricalHz, 12);
         Assert.Equal(0.4443, 4.4429 * (6 * 500 / 60.0) * 100 * 2e-5, 4);
     }
@@ -41,7 +41,7 @@ public class EmfTests
     [Fact]
     public void EmfIsTheNumericalDerivativeOfFluxLinkage()
     {
-        var r = ElectricalEngine.Evaluate(TestDesigns.Crank());
+        var r = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(TestDesigns.Crank()));
         var s = r.FluxLinkage!;
         double w = 2 * Math.PI * r.RatedRpm / 60;
         var th = r.Waveforms!.ThetaMechDeg;
@@ -59,7 +59,7 @@ public class EmfTests
     [Fact]
     public void LineFromPhaseWaveforms()
     {
-        var r = ElectricalEngine.Evaluate(TestDesigns.Crank());
+        var r = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(TestDesigns.Crank()));
         var wv = r.Waveforms!;
         var diff = wv.PhaseEmfV[0].Zip(wv.PhaseEmfV[1], (a, b) => a - b).ToArray();
         double rms = Math.Sqrt(diff.Sum(v => v * v) / diff.Length);
@@ -67,7 +67,7 @@ public class EmfTests
         // The crank's EMF has a third harmonic, so its line RMS is below sqrt(3) x phase RMS by exactly the triplens.
         double nonTriplen = Math.Sqrt(r.Harmonics.Where(h => h.Order % 3 != 0).Sum(h => h.PeakV * h.PeakV) / 2);
         Assert.Equal(Math.Sqrt(3) * nonTriplen, r.LineEmfRmsV, r.LineEmfRmsV * 1e-6);
-        var s = ElectricalEngine.Evaluate(NearSine());
+        var s = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(NearSine()));
         Assert.Equal(Math.Sqrt(3) * s.Phase!.EmfRmsV, s.LineEmfRmsV, s.LineEmfRmsV * 0.005);
         // ke: line EMF per 1000 rpm.
         Assert.Equal(r.LineEmfRmsV * 1000 / r.RatedRpm, r.KeVPerKrpm, 1e-9);
@@ -77,7 +77,7 @@ public class EmfTests
     [Fact]
     public void PhasesAreBalanced()
     {
-        var r = ElectricalEngine.Evaluate(TestDesigns.Large());
+        var r = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(TestDesigns.Large()));
         var wv = r.Waveforms!;
         int m = wv.ThetaElecDeg.Count, shift = m / 3;
         for (int i = 0; i < m; i++)
@@ -92,11 +92,11 @@ public class EmfTests
     public void DualRotorFieldsAdd()
     {
         var d = TestDesigns.Crank();
-        var dual = ElectricalEngine.Evaluate(d);
-        var single = ElectricalEngine.Evaluate(Copy.With(d, machine: Copy.Machine(d.Machine, layout: "single-rotor")));
+        var dual = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(d));
+        var single = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(Copy.With(d, machine: Copy.Machine(d.Machine, layout: "single-rotor"))));
         Assert.InRange(dual.CoilFluxLinkagePeakWb / single.CoilFluxLinkagePeakWb, 1.6, 2.0);
         // Back iron raises the flux (image method).
-        var iron = ElectricalEngine.Evaluate(Copy.With(d, machine: Copy.Machine(d.Machine, layout: "single-rotor"), rotor: Copy.Rotor(d.Rotor, new M.BackIron { Thickness = 2 })));
+        var iron = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(Copy.With(d, machine: Copy.Machine(d.Machine, layout: "single-rotor"), rotor: Copy.Rotor(d.Rotor, new M.BackIron { Thickness = 2 }))));
         Assert.True(iron.CoilFluxLinkagePeakWb > single.CoilFluxLinkagePeakWb);
         Assert.True(iron.Magnet.BackIronImageModel);
     }

@@ -52,7 +52,7 @@ public class OperatingPointsTests
     [InlineData("arc")]
     public void EngineOperatingPointsAreConsistent(string which)
     {
-        var r = ElectricalEngine.Evaluate(Flux.CoilFluxTests.Pick(which));
+        var r = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(Flux.CoilFluxTests.Pick(which)));
         var g = r.Generator!;
         double w = 2 * Math.PI * r.RatedRpm / 60;
         Assert.Equal(g.OutputPowerW + g.CopperLossW, g.ShaftTorqueNm * w, 1e-9);

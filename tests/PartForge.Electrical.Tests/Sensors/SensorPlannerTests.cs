@@ -17,12 +17,11 @@ public class SensorPlannerTests
     public void HallsFollowTheirLineEmf(string which)
     {
         var d = Flux.CoilFluxTests.Pick(which);
-        var r = ElectricalEngine.Evaluate(d);
+        var r = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(d));
         var s = r.Sensors!.Sensors;
         Assert.Equal(3, s.Count);
         Assert.All(s, x => Assert.True(x.Fits));
-        var diags = new List<Diagnostic>();
-        var field = RotorField.FromDesign(d, MagnetGeometry.FromDesign(d, diags)!, r.Magnet.BrTesla, AxialStack.From(d), diags);
+        var field = RotorField.From(PartForge.Design.Machines.MachineModel.From(d));
         var wv = r.Waveforms!;
         int p = r.PolePairs, m = wv.ThetaElecDeg.Count;
         for (int x = 0; x < 3; x++)
@@ -52,7 +51,7 @@ public class SensorPlannerTests
     public void SingleSensorSwitchesAtTheEmfZeroCrossing()
     {
         var d = TestDesigns.Pulse();
-        var r = ElectricalEngine.Evaluate(d);
+        var r = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(d));
         var sl = r.Sensors!;
         var s = Assert.Single(sl.Sensors);
         Assert.True(s.Fits);
@@ -62,8 +61,7 @@ public class SensorPlannerTests
         // EMF ~ d lambda/d theta of the phase (series-connected, coil 0 in phase): zero and rising.
         Assert.True(Math.Abs(series.Derivative(th)) < 1e-3 * r.CoilFluxLinkagePeakWb * r.PolePairs);
         Assert.True(series.Derivative(th + h) > 0 && series.Derivative(th - h) < 0);
-        var diags = new List<Diagnostic>();
-        var field = RotorField.FromDesign(d, MagnetGeometry.FromDesign(d, diags)!, r.Magnet.BrTesla, AxialStack.From(d), diags);
+        var field = RotorField.From(PartForge.Design.Machines.MachineModel.From(d));
         double thDeg = onElec / r.PolePairs;
         Vec2 At(double rotorDeg) => Vec2.FromAngleDeg(s.AngleDeg - rotorDeg) * s.RadiusMm;
         double before = field.Bz(At(thDeg - 0.5).X, At(thDeg - 0.5).Y, 0), after = field.Bz(At(thDeg + 0.5).X, At(thDeg + 0.5).Y, 0);
@@ -75,8 +73,8 @@ public class SensorPlannerTests
     public void AdvanceShiftsTheSensor()
     {
         var d = TestDesigns.Pulse();
-        var a = ElectricalEngine.Evaluate(d).Sensors!;
-        var b = ElectricalEngine.Evaluate(Copy.With(d, sensor: new PartForge.Design.Model.Sensor { Kind = "hall", Count = 1, AdvanceElec = 20 })).Sensors!;
+        var a = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(d)).Sensors!;
+        var b = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(Copy.With(d, sensor: new PartForge.Design.Model.Sensor { Kind = "hall", Count = 1, AdvanceElec = 20 }))).Sensors!;
         Assert.Equal(a.SwitchOnElecDeg!.Value - 20, b.SwitchOnElecDeg!.Value, 9);
         double shift = Math.IEEERemainder(b.Sensors[0].AngleDeg - a.Sensors[0].AngleDeg + 20.0 / 4, 180.0 / 4);
         Assert.Equal(0, shift, 6);

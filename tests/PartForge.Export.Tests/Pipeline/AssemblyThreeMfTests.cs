@@ -112,7 +112,7 @@ public sealed class AssemblyThreeMfTests : IDisposable
 
         foreach (var o in objects)
         {
-            var part = set.Get(Regex.Replace(o.Name, @"-\d+$", ""));
+            var part = set.Parts.Single(p => p.Name == Regex.Replace(o.Name, @"-\d+$", ""));
             var report = MeshValidator.Validate(o.Mesh);
             Assert.True(report.IsValid, $"{o.Name}: {report}"); // closed, outward, no degenerate triangle
             Assert.Equal(part.Mesh.TriangleCount, o.Mesh.TriangleCount);
@@ -121,7 +121,7 @@ public sealed class AssemblyThreeMfTests : IDisposable
 
         // The other file keeps its contract form: one object per printed part (the back irons are cut steel).
         var (perPart, _) = ReadModel(Path.Combine(r.OutputFolder!, "wind-duo.3mf"));
-        Assert.Equal(set.Parts.Where(p => p.Process == Parts.PartProcess.Print).Select(p => p.Name), perPart.Select(o => o.Name));
+        Assert.Equal(set.Parts.Where(p => p.Process == PartForge.Design.Machines.PartProcess.Print).Select(p => p.Name), perPart.Select(o => o.Name));
     }
 
     [Fact]

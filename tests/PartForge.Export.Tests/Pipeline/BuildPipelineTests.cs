@@ -49,7 +49,7 @@ public sealed class BuildPipelineTests : IDisposable
         Assert.All(r.Evaluation!.Parts!.Parts, p => Assert.True(p.MeshMade));
         foreach (var e in r.Results!.Parts)
         {
-            var p = r.Evaluation.Parts.Get(e.Name);
+            var p = r.Evaluation.Parts.Parts.Single(x => x.Name == e.Name);
             Assert.Equal(p.Mesh.TriangleCount, e.Triangles);
             Assert.Equal(p.VolumeMm3, e.VolumeMm3);
             Assert.True(e.VolumeMm3 > 0);
@@ -74,7 +74,7 @@ public sealed class BuildPipelineTests : IDisposable
             OutputDir = Path.Combine(_dir, "out"), Formats = "stl", Parts = "rotor",
         });
         Assert.Equal(PipelineStatus.Ok, r.Status);
-        var rotor = r.Evaluation!.Parts!.Get("rotor");
+        var rotor = r.Evaluation!.Parts!.Get(PartForge.Design.Parts.PartId.Rotor);
         Assert.True(rotor.Mesh.TriangleCount <= 82_996, $"{rotor.Mesh.TriangleCount} triangles");
         double v = rotor.Mesh.SignedVolume();
         Assert.InRange(v, 1_179_311.3 - 60, 1_179_311.3);

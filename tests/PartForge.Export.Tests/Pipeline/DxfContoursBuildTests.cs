@@ -45,8 +45,8 @@ public sealed class DxfContoursBuildTests : IDisposable
 
     private static CutPlan PlanOf(PipelineResult r, string part)
     {
-        var p = r.Evaluation!.Parts!.Get(part);
-        return KerfCompensation.Apply(new CutSheet(p.Name, p.CutProfile!, p.Marks, r.Evaluation.Design.Process.Kerf));
+        var p = r.Evaluation!.Parts!.Parts.Single(x => x.Name == part);
+        return KerfCompensation.Apply(new CutSheet(p.Name, p.CutProfile!, p.Marks, r.Evaluation.Machine.Process.KerfMm));
     }
 
     [Fact]

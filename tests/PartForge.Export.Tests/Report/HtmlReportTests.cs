@@ -27,7 +27,7 @@ public class HtmlReportTests
     public void Drawing_dimensions_equal_the_design_values(string preset)
     {
         var ev = Pipeline.Evaluate(preset);
-        var d = ev.Design;
+        var d = Pipeline.Design(preset);
         string html = HtmlReport.Render(ReportFiles.InputOf(ev, false, embedAssemblyPreview: false));
         var drawings = SvgBlocks(html).Where(s => s.Attribute("data-part") != null).ToDictionary(s => s.Attribute("data-part")!.Value);
         Assert.Equal(ev.Parts!.Parts.Select(p => p.Name).OrderBy(n => n), drawings.Keys.OrderBy(n => n));
@@ -94,11 +94,11 @@ public class HtmlReportTests
         foreach (var g in gaps)
         {
             string part = g.Attribute("data-dim")!.Value["running_gap:".Length..];
-            double expected = checker.Where(c => c.Part == part).Min(c => c.Value);
+            double expected = checker.Where(c => c.PartName == part).Min(c => c.Value);
             Assert.Equal(Math.Round(expected, 4), double.Parse(g.Attribute("data-value")!.Value, CultureInfo.InvariantCulture));
         }
         // Every rotating part the checker reports a running gap for is marked in the section.
-        Assert.Equal(checker.Select(c => c.Part).Distinct().OrderBy(p => p), gaps.Select(g => g.Attribute("data-dim")!.Value["running_gap:".Length..]).Distinct().OrderBy(p => p));
+        Assert.Equal(checker.Select(c => c.PartName).Distinct().OrderBy(p => p), gaps.Select(g => g.Attribute("data-dim")!.Value["running_gap:".Length..]).Distinct().OrderBy(p => p));
     }
 
     [Theory]
@@ -106,7 +106,7 @@ public class HtmlReportTests
     public void Bom_quantities_follow_the_design_and_the_wire_total(string preset)
     {
         var ev = Pipeline.Evaluate(preset);
-        var d = ev.Design;
+        var d = Pipeline.Design(preset);
         var bom = ReportFiles.BomOf(ev);
         int rotors = d.Machine.Layout == "dual-rotor" ? 2 : 1, stators = d.Machine.Layout == "dual-stator" ? 2 : 1;
         Assert.Equal(d.Machine.Poles * rotors, bom.InCategory("magnets").Single().Quantity);
@@ -118,7 +118,7 @@ public class HtmlReportTests
         var fasteners = bom.InCategory("fasteners").ToList();
         int expectedFasteners = (d.Rotor.BoltCircle?.Count ?? 0) * rotors + (d.Stator.Mount?.Count ?? 0) * stators;
         Assert.Equal(expectedFasteners, (int)fasteners.Sum(f => f.Quantity));
-        if (d.Sensor.Kind != "none") Assert.Equal(d.Sensor.Count, bom.InCategory("sensors").Single().Quantity);
+        if (d.Sensor.Kind != "none") Assert.Equal(ev.Machine.Sensor.Count, bom.InCategory("sensors").Single().Quantity);
         // Every part appears with its quantity.
         foreach (var p in ev.Parts!.Parts)
             Assert.Contains(bom.Lines, l => (l.Item == p.Name || (p.Name == "former" && l.Category == "formers")) && l.Quantity == p.Quantity);

@@ -23,11 +23,19 @@ internal static class Pipeline
             var loaded = DesignLoader.Load(Path.Combine(RepoRoot(), "presets", preset + ".yaml"));
             Assert.True(loaded.Success, string.Join("; ", loaded.Errors));
             var d = loaded.Design!;
-            ev = BuildPipeline.Evaluate(d);
+            ev = BuildPipeline.Evaluate(PartForge.Design.Machines.MachineModel.From(d));
             Assert.NotNull(ev.Parts);
             Cache[preset] = ev;
             return ev;
         }
+    }
+
+    /// <summary>The preset's design file as written (the values a builder measures against).</summary>
+    public static Design.Model.Design Design(string preset)
+    {
+        var loaded = DesignLoader.Load(Path.Combine(RepoRoot(), "presets", preset + ".yaml"));
+        Assert.True(loaded.Success, string.Join("; ", loaded.Errors));
+        return loaded.Design!;
     }
 
     public static IEnumerable<object[]> Presets() =>

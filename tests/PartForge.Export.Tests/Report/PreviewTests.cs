@@ -1,3 +1,4 @@
+using PartForge.Design.Machines;
 using PartForge.Export.Report;
 using PartForge.Export.Tests.Report;
 using PartForge.Parts;

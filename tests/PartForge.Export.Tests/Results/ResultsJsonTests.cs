@@ -33,7 +33,7 @@ public class ResultsJsonTests
         Assert.Equal(["format", "design", "summary", "electrical", "checks", "parts"], j.RootElement.EnumerateObject().Select(p => p.Name));
         Assert.Equal(["pole_pairs", "electrical_hz", "magnetic_gap", "winding_factor", "magnet", "coil", "coil_flux_linkage_peak_wb", "phase", "line_emf_rms_v", "ke_v_per_krpm"],
             j.RootElement.GetProperty("electrical").EnumerateObject().Select(p => p.Name));
-        Assert.Equal(["id", "part", "status", "value", "limit", "unit", "margin", "message"], j.RootElement.GetProperty("checks")[0].EnumerateObject().Select(p => p.Name));
+        Assert.Equal(["id", "part", "counterpart", "status", "value", "limit", "unit", "margin", "message"], j.RootElement.GetProperty("checks")[0].EnumerateObject().Select(p => p.Name));
         Assert.Equal(1.8, j.RootElement.GetProperty("electrical").GetProperty("magnetic_gap").GetDouble()); // binary noise rounded away
     }
 

@@ -33,7 +33,7 @@ public sealed class GeometryAgainstIndependentTests
         var loaded = DesignLoader.Load(file);
         Assert.True(loaded.Success, label);
         var d = loaded.Design!;
-        var ev = BuildPipeline.Evaluate(d);
+        var ev = BuildPipeline.Evaluate(PartForge.Design.Machines.MachineModel.From(d));
         Assert.NotNull(ev.Parts);
         double tol = d.Mesh.ChordalTolerance;
         const double grid = 1e-4; // the kernel's snap grid (Precision.DefaultGridMm)

@@ -1,6 +1,7 @@
 using NetTopologySuite.Geometries;
 using NtsGeometry = NetTopologySuite.Geometries.Geometry;
 using PartForge.Geometry.Profiles;
+using PartForge.Geometry.Solids;
 using PartForge.Parts;
 using LineSegment = PartForge.Geometry.Profiles.LineSegment;
 

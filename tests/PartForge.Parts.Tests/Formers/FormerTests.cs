@@ -10,14 +10,14 @@ public class FormerTests
     {
         var d = TestDesigns.SingleRotor();
         var coil = TestDesigns.RoundCoil(d, 5, 20, 60, 100);
-        return (d, coil, PartsBuilder.Build(d, coil, TestDesigns.Prec(d)));
+        return (d, coil, PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), coil, TestDesigns.Prec(d)));
     }
 
     [Fact]
     public void WindingWindowIsTheCoilWindow()
     {
         var (d, coil, set) = Single();
-        var former = set.Get("former");
+        var former = set.Get(PartForge.Design.Parts.PartId.Former);
         var core = former.Feature("core");
         // The core is the electrical engine's window moved to the former's frame: same circle, height = coils.height.
         var w = coil.WindingWindow.Circle!.Value;
@@ -35,7 +35,7 @@ public class FormerTests
     public void VolumeMatchesTrueCircleGeometry()
     {
         var (_, _, set) = Single();
-        var former = set.Get("former");
+        var former = set.Get(PartForge.Design.Parts.PartId.Former);
         double rf = 4 + 5 + 1.0, k = 0.6, f = 0.8, h = 5, rc = 4, rsp = 4 - 1.2, a = 0.5; // slot 1.0 wide
         // Source: pi r^2; circular segment r^2 acos((r-k)/r) - (r-k) sqrt(2rk-k^2); strip integral of sqrt(r^2-y^2).
         double flange = Geo.Circle(rf) - Geo.SegmentArea(rf, k);
@@ -50,7 +50,7 @@ public class FormerTests
     public void FootprintHasNoMirrorSymmetry()
     {
         var (_, _, set) = Single();
-        var fp = set.Get("former").Feature("flange-lower").Contour;
+        var fp = set.Get(PartForge.Design.Parts.PartId.Former).Feature("flange-lower").Contour;
         var flat = Assert.Single(fp.Segments.OfType<LineSegment>());
         var mid = (flat.From + flat.To) * 0.5;
         // The flat faces 135 degrees: mirrored in x or in y it would face 45 or 225 degrees, so it only fits one way.
@@ -62,8 +62,8 @@ public class FormerTests
     public void FitsItsSeatWithTheStatedClearance()
     {
         var (d, coil, set) = Single();
-        var former = set.Get("former");
-        var stator = set.Get("stator");
+        var former = set.Get(PartForge.Design.Parts.PartId.Former);
+        var stator = set.Get(PartForge.Design.Parts.PartId.Stator);
         var si = stator.Instances.Single();
         double clearance = d.Tolerances.PrintXy + 0.10;
         foreach (var inst in former.Instances)
@@ -83,7 +83,7 @@ public class FormerTests
     public void MeshValid()
     {
         var (_, _, set) = Single();
-        var r = MeshValidator.Validate(set.Get("former").Mesh);
+        var r = MeshValidator.Validate(set.Get(PartForge.Design.Parts.PartId.Former).Mesh);
         Assert.True(r.IsValid, r.ToString());
         Assert.Equal(1, r.Genus); // the spindle hole; the lead slot is open at the edge
     }

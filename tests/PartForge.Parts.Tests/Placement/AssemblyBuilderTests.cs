@@ -10,7 +10,7 @@ public class AssemblyBuilderTests
     public void EveryCopyPlacedAtItsStackPosition()
     {
         var d = TestDesigns.DualRotor();
-        var set = PartsBuilder.Build(d, TestDesigns.RoundCoil(d, 6, 15, 45, 75), TestDesigns.Prec(d));
+        var set = PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), TestDesigns.RoundCoil(d, 6, 15, 45, 75), TestDesigns.Prec(d));
         var placed = AssemblyBuilder.Build(set, exploded: false);
         Assert.Equal(set.Parts.Sum(p => p.Quantity), placed.Count);
         Assert.Equal(12, placed.Count(p => p.Name == "former"));
@@ -28,23 +28,23 @@ public class AssemblyBuilderTests
         // Nominal axial positions are the AxialStack slabs.
         foreach (var name in new[] { "rotor-front", "rotor-back" })
         {
-            var slab = set.Stack.Slabs.Single(s => s.Kind == SlabKind.Rotor && s.Owner == name);
+            var slab = set.Stack.Slabs.Single(s => s.Kind == SlabKind.Rotor && s.Owner.Name == name);
             var mesh = placed.Single(p => p.Name == name).Mesh.Bounds();
             Assert.Equal(slab.ZMin, mesh.Min.Z, 4);
             Assert.Equal(slab.ZMax, mesh.Max.Z, 4);
         }
         // The rotors' stator-side faces are the air gap away from the stationary pack (magnets recessed here).
         double pack = set.Stack.StationaryThicknessMm;
-        Assert.Equal(pack / 2 + d.Gap.AirGap, set.Get("rotor-front").Instances[0].BottomZMm, 9);
-        Assert.Equal(-(pack / 2 + d.Gap.AirGap), set.Get("rotor-back").Instances[0].TopZMm, 9);
+        Assert.Equal(pack / 2 + d.Gap.AirGap, set.Get(PartForge.Design.Parts.PartId.RotorFront).Instances[0].BottomZMm, 9);
+        Assert.Equal(-(pack / 2 + d.Gap.AirGap), set.Get(PartForge.Design.Parts.PartId.RotorBack).Instances[0].TopZMm, 9);
     }
 
     [Fact]
     public void FormersSitOnTheirCoilCentres()
     {
         var d = TestDesigns.SingleRotor();
-        var set = PartsBuilder.Build(d, TestDesigns.RoundCoil(d, 5, 20, 60, 100), TestDesigns.Prec(d));
-        var placed = AssemblyBuilder.Build(set, exploded: false, onlyParts: new[] { "former" });
+        var set = PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), TestDesigns.RoundCoil(d, 5, 20, 60, 100), TestDesigns.Prec(d));
+        var placed = AssemblyBuilder.Build(set, exploded: false, onlyParts: new[] { PartForge.Design.Parts.PartId.Former });
         Assert.Equal(9, placed.Count);
         foreach (var pp in placed)
         {
@@ -54,7 +54,7 @@ public class AssemblyBuilderTests
             // Centre of the flange's bounding box: the round flange less its small flat, within the flat depth.
             Assert.InRange(Math.Sqrt((cx - 40 * Math.Cos(a)) * (cx - 40 * Math.Cos(a)) + (cy - 40 * Math.Sin(a)) * (cy - 40 * Math.Sin(a))), 0, 0.6);
             // Centred on the stator ring's mid-plane.
-            var ring = set.Get("stator").Instances[0];
+            var ring = set.Get(PartForge.Design.Parts.PartId.Stator).Instances[0];
             Assert.Equal((ring.BottomZMm + ring.TopZMm) / 2, (min.Z + max.Z) / 2, 4);
         }
     }
@@ -63,7 +63,7 @@ public class AssemblyBuilderTests
     public void ExplodedMovesPartsApartByTheExplodeDistance()
     {
         var d = TestDesigns.DualRotor();
-        var set = PartsBuilder.Build(d, TestDesigns.RoundCoil(d, 6, 15, 45, 75), TestDesigns.Prec(d));
+        var set = PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), TestDesigns.RoundCoil(d, 6, 15, 45, 75), TestDesigns.Prec(d));
         var nominal = AssemblyBuilder.Build(set, exploded: false);
         var exploded = AssemblyBuilder.Build(set, exploded: true);
         double e = d.Assembly.Explode;

@@ -1,3 +1,4 @@
+using PartForge.Design.Machines;
 using PartForge.Design.Model;
 using PartForge.Geometry.Meshes;
 using PartForge.Geometry.Primitives;
@@ -7,9 +8,9 @@ namespace PartForge.Parts.Tests.Rotors;
 
 public class RotorTests
 {
-    private static PartSet Single() { var d = TestDesigns.SingleRotor(); return PartsBuilder.Build(d, TestDesigns.RoundCoil(d, 5, 20, 60, 100), TestDesigns.Prec(d)); }
-    private static PartSet Dual() { var d = TestDesigns.DualRotor(); return PartsBuilder.Build(d, TestDesigns.RoundCoil(d, 6, 15, 45, 75), TestDesigns.Prec(d)); }
-    private static PartSet DualStator(PartForge.Design.Model.Design? d = null) { d ??= TestDesigns.DualStator(); return PartsBuilder.Build(d, TestDesigns.RoundCoil(d, 6, 45), TestDesigns.Prec(d)); }
+    private static PartSet Single() { var d = TestDesigns.SingleRotor(); return PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), TestDesigns.RoundCoil(d, 5, 20, 60, 100), TestDesigns.Prec(d)); }
+    private static PartSet Dual() { var d = TestDesigns.DualRotor(); return PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), TestDesigns.RoundCoil(d, 6, 15, 45, 75), TestDesigns.Prec(d)); }
+    private static PartSet DualStator(PartForge.Design.Model.Design? d = null) { d ??= TestDesigns.DualStator(); return PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), TestDesigns.RoundCoil(d, 6, 45), TestDesigns.Prec(d)); }
 
     /// <summary>rotor.marks: none and rotor.index: none leave the rotor as the bare disc with its pockets and
     /// holes: no polarity dots, no notch (the rim is one full circle), and the volume drops by exactly the
@@ -29,8 +30,8 @@ public class RotorTests
                 Marks = "none", Index = "none",
             },
         };
-        var marked = Single().Get("rotor");
-        var bare = PartsBuilder.Build(d1, TestDesigns.RoundCoil(d1, 5, 20, 60, 100), TestDesigns.Prec(d1)).Get("rotor");
+        var marked = Single().Get(PartForge.Design.Parts.PartId.Rotor);
+        var bare = PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d1), TestDesigns.RoundCoil(d1, 5, 20, 60, 100), TestDesigns.Prec(d1)).Get(PartForge.Design.Parts.PartId.Rotor);
         Assert.NotEmpty(marked.FeaturesOf(FeatureKind.PolarityMark));
         Assert.NotEmpty(marked.FeaturesOf(FeatureKind.IndexNotch));
         Assert.Empty(bare.FeaturesOf(FeatureKind.PolarityMark));
@@ -44,7 +45,7 @@ public class RotorTests
     [Fact]
     public void DiscPocketsAtPoleAnglesWithClearance()
     {
-        var rotor = Single().Get("rotor");
+        var rotor = Single().Get(PartForge.Design.Parts.PartId.Rotor);
         var pockets = rotor.FeaturesOf(FeatureKind.MagnetPocket).ToList();
         Assert.Equal(12, pockets.Count);
         for (int i = 0; i < 12; i++)
@@ -63,7 +64,7 @@ public class RotorTests
     [Fact]
     public void BlockPocketsAreRadialRectangles()
     {
-        var rotor = Dual().Get("rotor-front");
+        var rotor = Dual().Get(PartForge.Design.Parts.PartId.RotorFront);
         foreach (var p in rotor.FeaturesOf(FeatureKind.MagnetPocket))
         {
             var pts = p.Contour.Segments.Select(s => s.Start).ToArray();
@@ -82,7 +83,7 @@ public class RotorTests
     [Fact]
     public void ArcPocketsWidenedAsDocumented()
     {
-        var rotor = DualStator().Get("rotor");
+        var rotor = DualStator().Get(PartForge.Design.Parts.PartId.Rotor);
         var p0 = rotor.Feature("pocket-0");
         var arcs = p0.Contour.Segments.OfType<ArcSegment>().ToArray();
         Assert.Equal(2, arcs.Length);
@@ -98,7 +99,7 @@ public class RotorTests
     [Fact]
     public void VolumeMatchesTrueCircleGeometry()
     {
-        var rotor = Single().Get("rotor");
+        var rotor = Single().Get(PartForge.Design.Parts.PartId.Rotor);
         double R = 55, t = 7, rn = 1.0, depth = 7 - 1.2, dotR = 0.75, dotDepth = 0.4;
         // Source: area of a circle pi r^2, volume of a prism area x height, lens area of two circles (standard).
         double v = (Geo.Circle(R) - Geo.LensArea(R, rn, R)) * t - Geo.Circle(4) * t - 4 * Geo.Circle(1.7) * t
@@ -115,7 +116,7 @@ public class RotorTests
     [Fact]
     public void PolarityDotsBesideNorthUpPocketsOnly()
     {
-        var rotor = Single().Get("rotor");
+        var rotor = Single().Get(PartForge.Design.Parts.PartId.Rotor);
         var marks = rotor.FeaturesOf(FeatureKind.PolarityMark).ToList();
         Assert.Equal(6, marks.Count);
         double wall = 2 * 0.4;
@@ -138,8 +139,8 @@ public class RotorTests
     public void FrontAndBackMagnetsFacingEachOtherAttract()
     {
         var set = Dual();
-        var front = set.Get("rotor-front");
-        var back = set.Get("rotor-back");
+        var front = set.Get(PartForge.Design.Parts.PartId.RotorFront);
+        var back = set.Get(PartForge.Design.Parts.PartId.RotorBack);
         var fi = front.Instances.Single();
         var bi = back.Instances.Single();
         Assert.True(fi.Flipped);   // front is on +z, its stator-side (top) face points -z
@@ -170,10 +171,10 @@ public class RotorTests
     [Fact]
     public void MeshesValidWithGenusEqualToThroughHoles()
     {
-        var single = Single().Get("rotor");
+        var single = Single().Get(PartForge.Design.Parts.PartId.Rotor);
         Check(single, 1 + 4);                 // bore + 4 bolt holes; pockets and dots are blind
-        foreach (var name in new[] { "rotor-front", "rotor-back" }) Check(Dual().Get(name), 1 + 6);
-        Check(DualStator().Get("rotor"), 1 + 3 + 8); // through pockets
+        foreach (var id in new[] { PartForge.Design.Parts.PartId.RotorFront, PartForge.Design.Parts.PartId.RotorBack }) Check(Dual().Get(id), 1 + 6);
+        Check(DualStator().Get(PartForge.Design.Parts.PartId.Rotor), 1 + 3 + 8); // through pockets
     }
 
     private static void Check(PartModel p, int genus)
@@ -194,7 +195,7 @@ public class RotorTests
             Stator = d.Stator, Sensor = d.Sensor, Mesh = d.Mesh,
             Parts = new PartOverrides { Rotor = new PartOverride { Process = "cut", Material = "acrylic" } },
         };
-        var set = PartsBuilder.Build(blind, TestDesigns.RoundCoil(blind, 5, 20, 60, 100), TestDesigns.Prec(blind));
+        var set = PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(blind), TestDesigns.RoundCoil(blind, 5, 20, 60, 100), TestDesigns.Prec(blind));
         Assert.True(set.HasErrors);
         var err = Assert.Single(set.Diagnostics, x => x.Severity == DiagnosticSeverity.Error);
         Assert.Equal("cut-not-prismatic", err.Code);
@@ -207,12 +208,12 @@ public class RotorTests
             Stator = ds.Stator, Sensor = ds.Sensor, Mesh = ds.Mesh,
             Parts = new PartOverrides { Rotor = new PartOverride { Process = "cut", Material = "acrylic" } },
         };
-        var rotor = DualStator(through).Get("rotor");
+        var rotor = DualStator(through).Get(PartForge.Design.Parts.PartId.Rotor);
         Assert.Equal(PartProcess.Cut, rotor.Process);
         Assert.NotNull(rotor.CutProfile);
         Assert.Equal(1 + 3 + 8, rotor.CutProfile!.Holes.Count);
         Assert.Equal(4, rotor.Marks.Count);          // the dots become engraving
         Assert.Single(rotor.Solid.Layers);            // a single-thickness sheet
-        Assert.Equal(1.18, rotor.DensityGPerCm3);
+        Assert.Equal(1180, rotor.Material.DensityKgM3);
     }
 }

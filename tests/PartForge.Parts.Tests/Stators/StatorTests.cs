@@ -9,14 +9,14 @@ public class StatorTests
     private static PartSet Build(PartForge.Design.Model.Design d, params double[] sensors)
     {
         double build = d.Machine.Layout == "single-rotor" ? 5 : 6;
-        return PartsBuilder.Build(d, TestDesigns.RoundCoil(d, build, sensors), TestDesigns.Prec(d));
+        return PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), TestDesigns.RoundCoil(d, build, sensors), TestDesigns.Prec(d));
     }
 
     [Fact]
     public void SeatsOnThePitchCircleDoNotOverlap()
     {
         var d = TestDesigns.SingleRotor();
-        var stator = Build(d, 20, 60, 100).Get("stator");
+        var stator = Build(d, 20, 60, 100).Get(PartForge.Design.Parts.PartId.Stator);
         var seats = stator.FeaturesOf(FeatureKind.CoilSeat).ToList();
         Assert.Equal(9, seats.Count);
         double rs = 10 + 0.2; // flange radius + seat clearance
@@ -57,11 +57,11 @@ public class StatorTests
                 // The pocket opens on the face toward the rotor: machine z of its open end is nearer the rotor.
                 double open = pockets[i].Z0Mm == 0 ? inst.ToMachineZ(0) : inst.ToMachineZ(stator.HeightMm);
                 double other = pockets[i].Z0Mm == 0 ? inst.ToMachineZ(stator.HeightMm) : inst.ToMachineZ(0);
-                var rotorSlab = set.Stack.Slabs.Where(s => s.Kind == SlabKind.Rotor).OrderByDescending(s => s.Owner == "rotor-front").First(); // dual-rotor: toward rotor-front
+                var rotorSlab = set.Stack.Slabs.Where(s => s.Kind == SlabKind.Rotor).OrderByDescending(s => s.Owner == PartForge.Design.Parts.PartId.RotorFront).First(); // dual-rotor: toward rotor-front
                 double rotorMid = (rotorSlab.ZMin + rotorSlab.ZMax) / 2;
                 Assert.True(Math.Abs(open - rotorMid) < Math.Abs(other - rotorMid), $"{d.Name}: sensor pocket faces away from the rotor");
             }
-            if (set.Find("stator-back") is { } back) Assert.Empty(back.FeaturesOf(FeatureKind.SensorPocket));
+            if (set.Find(PartForge.Design.Parts.PartId.StatorBack) is { } back) Assert.Empty(back.FeaturesOf(FeatureKind.SensorPocket));
         }
     }
 
@@ -69,7 +69,7 @@ public class StatorTests
     public void VolumeWithoutSensorsMatchesClosedForm()
     {
         var d = TestDesigns.SingleRotor("none");
-        var stator = Build(d).Get("stator");
+        var stator = Build(d).Get(PartForge.Design.Parts.PartId.Stator);
         double Ro = 65, Ri = 15, s = 6, p = 40, rf = 10, k = 0.6, c = 0.2, dw = 0.357;
         // Seat = footprint grown by c; for a convex footprint its area is A + P c + pi c^2 (Steiner's formula).
         var (arc, chord) = Geo.SegmentArcChord(rf, k);
@@ -93,11 +93,11 @@ public class StatorTests
     [Fact]
     public void MeshesValidWithGenusEqualToThroughHoles()
     {
-        Check(Build(TestDesigns.SingleRotor(), 20, 60, 100).Get("stator"), 1 + 9 + 4 + 3);   // bore, seats, mounts, sensor lead holes
-        Check(Build(TestDesigns.DualRotor(), 15, 45, 75).Get("stator"), 1 + 12 + 6);        // sensors on the grooved face: no lead holes
+        Check(Build(TestDesigns.SingleRotor(), 20, 60, 100).Get(PartForge.Design.Parts.PartId.Stator), 1 + 9 + 4 + 3);   // bore, seats, mounts, sensor lead holes
+        Check(Build(TestDesigns.DualRotor(), 15, 45, 75).Get(PartForge.Design.Parts.PartId.Stator), 1 + 12 + 6);        // sensors on the grooved face: no lead holes
         var ds = Build(TestDesigns.DualStator(), 45);
-        Check(ds.Get("stator-front"), 1 + 4 + 4 + 1);
-        Check(ds.Get("stator-back"), 1 + 4 + 4);
+        Check(ds.Get(PartForge.Design.Parts.PartId.StatorFront), 1 + 4 + 4 + 1);
+        Check(ds.Get(PartForge.Design.Parts.PartId.StatorBack), 1 + 4 + 4);
     }
 
     private static void Check(PartModel p, int genus)
@@ -111,8 +111,8 @@ public class StatorTests
     public void DualStatorRingsMirrorEachOtherAcrossTheRotor()
     {
         var set = Build(TestDesigns.DualStator(), 45);
-        var front = set.Get("stator-front");
-        var back = set.Get("stator-back");
+        var front = set.Get(PartForge.Design.Parts.PartId.StatorFront);
+        var back = set.Get(PartForge.Design.Parts.PartId.StatorBack);
         var fi = front.Instances.Single();
         var bi = back.Instances.Single();
         Assert.False(fi.Flipped);

@@ -1,0 +1,184 @@
+using PartForge.Design.Machines.Magnets;
+using PartForge.Design.Materials;
+using PartForge.Design.Parts;
+using PartForge.Design.Stack;
+using PartForge.Geometry;
+
+namespace PartForge.Design.Machines;
+
+/// <summary>
+/// The machine a design describes, resolved once by the loader into typed, immutable values: the layout, the
+/// magnet shape, the part roles and materials, every default filled, and the axial stack computed. Every stage
+/// after the loader reads only this model (never the design file's strings). Made by <see cref="From"/> from a
+/// validated design; there is no other way to make one, so a model is always consistent with its stack.
+/// </summary>
+public sealed class MachineModel
+{
+    private MachineModel() { }
+
+    /// <summary>The design's name (output file names).</summary>
+    public required string Name { get; init; }
+
+    public required Layout Layout { get; init; }
+
+    /// <summary>Magnets per rotor face.</summary>
+    public required int Poles { get; init; }
+
+    /// <summary>Coils per stator.</summary>
+    public required int CoilsPerStator { get; init; }
+
+    /// <summary>1 or 3.</summary>
+    public required int Phases { get; init; }
+
+    public required Connection Connection { get; init; }
+    public required double RatedRpm { get; init; }
+    public required double MaxRpm { get; init; }
+
+    public required MagnetSet Magnets { get; init; }
+    public required RotorSpec Rotor { get; init; }
+    public required CoilSet Coils { get; init; }
+    public required FormerSpec Former { get; init; }
+    public required StatorSpec Stator { get; init; }
+    public required SensorSpec Sensor { get; init; }
+    public required GapSpec Gap { get; init; }
+    public required ToleranceSpec Tolerances { get; init; }
+    public required ProcessSpec Process { get; init; }
+    public required OperationSpec Operation { get; init; }
+
+    /// <summary>Largest distance between a true arc and its facets, mm (<c>mesh.chordal_tolerance</c>).</summary>
+    public required double ChordalToleranceMm { get; init; }
+
+    /// <summary>Axial distance added between neighbouring parts in the exploded assembly, mm.</summary>
+    public required double ExplodeMm { get; init; }
+
+    /// <summary>The process and material asked for each part role.</summary>
+    public required PartPlan Parts { get; init; }
+
+    /// <summary>The nominal axial stack of every face, computed once.</summary>
+    public required AxialStack Stack { get; init; }
+
+    /// <summary>The grid and chordal tolerance every part is made on.</summary>
+    public Precision Precision => Precision.FromChordalTolerance(ChordalToleranceMm);
+
+    /// <summary>Pole pairs p.</summary>
+    public int PolePairs => Poles / 2;
+
+    /// <summary>Coils in the whole machine (every stator).</summary>
+    public int CoilsInMachine => CoilsPerStator * Layout.Stators.Count;
+
+    /// <summary>The rotor's pockets go through it (dual-stator, or <c>rotor.pocket_floor: 0</c>).</summary>
+    public bool ThroughPockets => Layout.RotorBetweenStators || !(Rotor.PocketFloorMm > 0);
+
+    /// <summary>
+    /// The model of a design the loader has validated (every cross-key rule passed). Throws
+    /// <see cref="ArgumentException"/> for a design that breaks them: that is a caller's bug, since the loader
+    /// refuses such a design with located errors first.
+    /// </summary>
+    public static MachineModel From(Model.Design d)
+    {
+        ArgumentNullException.ThrowIfNull(d);
+        var layout = Layout.Parse(d.Machine.Layout) ?? throw Bad("machine.layout", d.Machine.Layout);
+        var kind = MagnetShapes.Find(d.Magnets.Shape) ?? throw Bad("magnets.shape", d.Magnets.Shape);
+        if (kind.Validate(d.Magnets) is { Count: > 0 } problems)
+            throw new ArgumentException($"magnets.{problems[0].Key} {problems[0].Message}", nameof(d));
+        var shape = kind.Make(d.Magnets);
+        double br = d.Magnets.Br ?? MagnetGrades.MidRangeBrTesla(d.Magnets.Grade) ?? throw Bad("magnets.grade", d.Magnets.Grade);
+        var magnets = new MagnetSet(shape, d.Magnets.Grade, br, d.Magnets.Br is not null);
+
+        int phases = d.Machine.Phases;
+        var connection = d.Machine.Connection switch
+        {
+            null => phases == 3 ? Connection.Star : Connection.Series,
+            "star" => Connection.Star,
+            "delta" => Connection.Delta,
+            "series" => Connection.Series,
+            "parallel" => Connection.Parallel,
+            var other => throw Bad("machine.connection", other),
+        };
+
+        var r = d.Rotor;
+        var rotor = new RotorSpec(r.OuterDiameter, r.Thickness, r.Bore, r.PocketClearance, r.PocketFloor,
+            r.BoltCircle is { } bc ? new BoltPattern(bc.Diameter, bc.Count, bc.Hole) : null,
+            r.BackIron?.Thickness, MaterialOf(r.Material, "rotor.material"), r.Marks != "none", r.Index != "none");
+
+        var c = d.Coils;
+        var coilShape = c.Shape switch { "round" => CoilShape.Round, "keystone" => CoilShape.Keystone, var o => throw Bad("coils.shape", o) };
+        int enamel = c.Enamel switch { "grade-1" => 1, "grade-2" => 2, "grade-3" => 3, var o => throw Bad("coils.enamel", o) };
+        var coils = new CoilSet(coilShape, new WireSize(c.Wire.Awg, c.Wire.Awg is null ? c.Wire.Diameter : null), enamel, c.Turns,
+            c.TargetEmf is { } t && c.Turns is null ? new EmfTarget(t.Rms, t.Rpm) : null, c.FillFactor, c.Height,
+            c.PitchRadius ?? shape.PitchRadiusMm, c.Core.Diameter, c.Core.Width, c.MaxTemperature);
+
+        var former = new FormerSpec(d.Former.Flange, d.Former.Margin);
+        var s = d.Stator;
+        var stator = new StatorSpec(s.InnerDiameter, s.OuterDiameter, s.Thickness,
+            s.Mount is { } mt ? new BoltPattern(mt.CircleDiameter, mt.Count, mt.Hole) : null, MaterialOf(s.Material, "stator.material"));
+
+        var sn = d.Sensor;
+        var sensorKind = sn.Kind switch { "none" => SensorKind.None, "hall" => SensorKind.Hall, "reed" => SensorKind.Reed, var o => throw Bad("sensor.kind", o) };
+        var sensor = new SensorSpec(sensorKind, sn.Count ?? (phases == 3 ? 3 : 1), sn.AdvanceElec, new SensorBody(sn.Body.Length, sn.Body.Width, sn.Body.Height));
+
+        var gap = new GapSpec(d.Gap.AirGap, d.Gap.MinRunningGap);
+        var tol = new ToleranceSpec(d.Tolerances.PrintXy, d.Tolerances.PrintZ, d.Tolerances.Runout, d.Tolerances.AxialPlay);
+        var p = d.Process;
+        var process = new ProcessSpec(p.Nozzle, p.Layer, p.MinWallLines, p.Kerf,
+            p.DxfContours switch { "polyline" => CutContourStyle.Polyline, "entities" => CutContourStyle.Entities, var o => throw Bad("process.dxf_contours", o) });
+        var op = d.Operation;
+        var operation = new OperationSpec(op.LoadResistance, op.SupplyVoltage, op.SwitchDrop, op.LeadAllowance);
+
+        var plan = new Dictionary<PartRole, PartChoice>();
+        foreach (var role in Enum.GetValues<PartRole>())
+        {
+            var over = OverrideOf(d.Parts, role);
+            string? section = role switch { PartRole.Rotor => r.Material, PartRole.Stator => s.Material, _ => null };
+            string material = over?.Material ?? section ?? PartRoleFacts.Of(role).DefaultMaterial;
+            PartProcess? asked = over?.Process switch
+            {
+                null => null,
+                "print" => PartProcess.Print,
+                "cut" => PartProcess.Cut,
+                var o => throw Bad($"parts.{PartRoleFacts.Of(role).OverrideKey}.process", o),
+            };
+            plan[role] = new PartChoice(asked, MaterialOf(material, $"parts.{PartRoleFacts.Of(role).OverrideKey}.material"));
+        }
+
+        return new MachineModel
+        {
+            Name = d.Name,
+            Layout = layout,
+            Poles = d.Machine.Poles,
+            CoilsPerStator = d.Machine.Coils,
+            Phases = phases,
+            Connection = connection,
+            RatedRpm = d.Machine.RatedRpm,
+            MaxRpm = d.Machine.MaxRpm,
+            Magnets = magnets,
+            Rotor = rotor,
+            Coils = coils,
+            Former = former,
+            Stator = stator,
+            Sensor = sensor,
+            Gap = gap,
+            Tolerances = tol,
+            Process = process,
+            Operation = operation,
+            ChordalToleranceMm = d.Mesh.ChordalTolerance,
+            ExplodeMm = d.Assembly.Explode,
+            Parts = new PartPlan(plan),
+            Stack = AxialStack.Of(layout, rotor, shape.ThicknessMm, coils, former, stator, gap),
+        };
+    }
+
+    private static Model.PartOverride? OverrideOf(Model.PartOverrides o, PartRole role) => role switch
+    {
+        PartRole.Rotor => o.Rotor,
+        PartRole.BackIron => o.BackIron,
+        PartRole.Former => o.Former,
+        PartRole.Stator => o.Stator,
+        _ => o.Spacer,
+    };
+
+    private static Material MaterialOf(string name, string key) => MaterialTable.Find(name) ?? throw Bad(key, name);
+
+    private static ArgumentException Bad(string key, string? value) =>
+        new($"{key}: '{value}' is not a value the loader accepts; load designs through DesignLoader", "d");
+}

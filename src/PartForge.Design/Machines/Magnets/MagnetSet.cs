@@ -1,0 +1,12 @@
+namespace PartForge.Design.Machines.Magnets;
+
+/// <summary>The rotor magnets: their shape (with size and thickness) and their remanence.</summary>
+/// <param name="Shape">Plan shape, sizes, thickness and pitch radius.</param>
+/// <param name="Grade">The grade named in the design (N35 ... N52 with an optional suffix).</param>
+/// <param name="BrTesla">Remanence used: <c>magnets.br</c> when given, else the grade's mid-range value.</param>
+/// <param name="BrGiven">True when <c>magnets.br</c> was given (then the grade is not used for Br).</param>
+public sealed record MagnetSet(MagnetShape Shape, string Grade, double BrTesla, bool BrGiven)
+{
+    /// <summary>"br" when <c>magnets.br</c> was given, else the grade name.</summary>
+    public string BrSource => BrGiven ? "br" : Grade;
+}
