@@ -51,8 +51,8 @@ public static class HalfSection
         foreach (var b in bodies.OrderBy(b => Order(b.Kind)))
         {
             if (!(b.RMax > b.RMin) || !(b.ZMax > b.ZMin)) continue;
-            c.Rect(b.RMin, b.ZMin, b.RMax - b.RMin, b.ZMax - b.ZMin, "cut cut-" + b.Kind,
-                ("data-kind", b.Kind), ("data-owner", b.Owner),
+            c.Rect(b.RMin, b.ZMin, b.RMax - b.RMin, b.ZMax - b.ZMin, "cut cut-" + Word(b.Kind),
+                ("data-kind", Word(b.Kind)), ("data-owner", b.Owner),
                 ("data-rmin", SvgCanvas.Num(b.RMin)), ("data-rmax", SvgCanvas.Num(b.RMax)),
                 ("data-zmin", SvgCanvas.Num(b.ZMin)), ("data-zmax", SvgCanvas.Num(b.ZMax)));
         }
@@ -72,16 +72,27 @@ public static class HalfSection
         double lx = 0, ly = Math.Min(zMin, lowest) - text * 4.2;
         foreach (var kind in bodies.Select(b => b.Kind).Distinct().OrderBy(Order))
         {
-            c.Rect(lx, ly, text * 1.6, text * 1.1, "cut cut-" + kind);
-            c.Text(lx + text * 2, ly + text * 0.15, kind, text * 0.9, "caption");
-            lx += text * (3 + kind.Length * 0.62);
+            string word = Word(kind);
+            c.Rect(lx, ly, text * 1.6, text * 1.1, "cut cut-" + word);
+            c.Text(lx + text * 2, ly + text * 0.15, word, text * 0.9, "caption");
+            lx += text * (3 + word.Length * 0.62);
         }
         c.Text(right - text, top - text * 1.4, "radius to the right, axial position up, mm, to scale", text * 0.85, "caption", "end");
         return c.ToSvg("section", title, displayWidthPx, ("data-section", "half"));
     }
 
-    private static int Order(string kind) => kind switch
-    {
-        "stator" => 0, "former" => 1, "copper" => 2, "spacer" => 3, "rotor" => 4, "back-iron" => 5, "magnet" => 6, _ => 7,
-    };
+    /// <summary>Drawing order (back to front) and the legend's word (also the CSS fill class) of each kind of body.</summary>
+    private static readonly (PartForge.Design.Stack.SlabKind Kind, string Word)[] Kinds =
+    [
+        (PartForge.Design.Stack.SlabKind.Stator, "stator"),
+        (PartForge.Design.Stack.SlabKind.Former, "former"),
+        (PartForge.Design.Stack.SlabKind.Copper, "copper"),
+        (PartForge.Design.Stack.SlabKind.Rotor, "rotor"),
+        (PartForge.Design.Stack.SlabKind.BackIron, "back-iron"),
+        (PartForge.Design.Stack.SlabKind.Magnet, "magnet"),
+    ];
+
+    private static int Order(PartForge.Design.Stack.SlabKind kind) => Array.FindIndex(Kinds, k => k.Kind == kind);
+
+    private static string Word(PartForge.Design.Stack.SlabKind kind) => Kinds[Order(kind)].Word;
 }

@@ -29,36 +29,36 @@ public static class SectionBuilder
                 {
                     // The rotor disc is cut where the pocket is (the magnet is drawn in it); a blind pocket
                     // keeps a floor on the side away from the stator.
-                    bodies.Add(new SectionBody("rotor", s.Owner.Name, rotIn, Math.Max(rotIn, magIn), s.ZMin, s.ZMax, s.Owner.Name));
-                    bodies.Add(new SectionBody("rotor", s.Owner.Name, Math.Min(rotOut, magOut), rotOut, s.ZMin, s.ZMax, s.Owner.Name));
+                    bodies.Add(new SectionBody(SlabKind.Rotor, s.Owner.Name, rotIn, Math.Max(rotIn, magIn), s.ZMin, s.ZMax, s.Owner.Name));
+                    bodies.Add(new SectionBody(SlabKind.Rotor, s.Owner.Name, Math.Min(rotOut, magOut), rotOut, s.ZMin, s.ZMax, s.Owner.Name));
                     double floor = s.Thickness - stack.PocketDepthMm;
                     if (floor > 1e-9 && !d.ThroughPockets)
                     {
                         bool backIsUp = Math.Abs(s.ZMax) > Math.Abs(s.ZMin);
                         double fz0 = backIsUp ? s.ZMax - floor : s.ZMin;
-                        bodies.Add(new SectionBody("rotor", s.Owner.Name, magIn, magOut, fz0, fz0 + floor, s.Owner.Name + " pocket floor"));
+                        bodies.Add(new SectionBody(SlabKind.Rotor, s.Owner.Name, magIn, magOut, fz0, fz0 + floor, s.Owner.Name + " pocket floor"));
                     }
                     break;
                 }
                 case SlabKind.Magnet:
-                    bodies.Add(new SectionBody("magnet", s.Owner.Name, magIn, magOut, s.ZMin, s.ZMax, "magnet"));
+                    bodies.Add(new SectionBody(SlabKind.Magnet, s.Owner.Name, magIn, magOut, s.ZMin, s.ZMax, "magnet"));
                     break;
                 case SlabKind.BackIron:
-                    bodies.Add(new SectionBody("back-iron", s.Owner.Name, backIron?.RMin ?? rotIn, backIron?.RMax ?? rotOut, s.ZMin, s.ZMax, "back iron"));
+                    bodies.Add(new SectionBody(SlabKind.BackIron, s.Owner.Name, backIron?.RMin ?? rotIn, backIron?.RMax ?? rotOut, s.ZMin, s.ZMax, "back iron"));
                     break;
                 case SlabKind.Stator:
-                    bodies.Add(new SectionBody("stator", s.Owner.Name, statIn, Math.Max(statIn, coil.FormerRMin), s.ZMin, s.ZMax, s.Owner.Name));
-                    bodies.Add(new SectionBody("stator", s.Owner.Name, Math.Min(statOut, coil.FormerRMax), statOut, s.ZMin, s.ZMax, s.Owner.Name));
+                    bodies.Add(new SectionBody(SlabKind.Stator, s.Owner.Name, statIn, Math.Max(statIn, coil.FormerRMin), s.ZMin, s.ZMax, s.Owner.Name));
+                    bodies.Add(new SectionBody(SlabKind.Stator, s.Owner.Name, Math.Min(statOut, coil.FormerRMax), statOut, s.ZMin, s.ZMax, s.Owner.Name));
                     break;
                 case SlabKind.Former:
                     double flange = d.Former.FlangeMm;
-                    bodies.Add(new SectionBody("former", s.Owner.Name, coil.FormerRMin, coil.FormerRMax, s.ZMin, s.ZMin + flange, "former flange"));
-                    bodies.Add(new SectionBody("former", s.Owner.Name, coil.FormerRMin, coil.FormerRMax, s.ZMax - flange, s.ZMax, "former flange"));
-                    bodies.Add(new SectionBody("former", s.Owner.Name, coil.WindowRMin, coil.WindowRMax, s.ZMin + flange, s.ZMax - flange, "former core"));
+                    bodies.Add(new SectionBody(SlabKind.Former, s.Owner.Name, coil.FormerRMin, coil.FormerRMax, s.ZMin, s.ZMin + flange, "former flange"));
+                    bodies.Add(new SectionBody(SlabKind.Former, s.Owner.Name, coil.FormerRMin, coil.FormerRMax, s.ZMax - flange, s.ZMax, "former flange"));
+                    bodies.Add(new SectionBody(SlabKind.Former, s.Owner.Name, coil.WindowRMin, coil.WindowRMax, s.ZMin + flange, s.ZMax - flange, "former core"));
                     break;
                 case SlabKind.Copper:
-                    bodies.Add(new SectionBody("copper", s.Owner.Name, coil.CopperRMin, coil.WindowRMin, s.ZMin, s.ZMax, "winding"));
-                    bodies.Add(new SectionBody("copper", s.Owner.Name, coil.WindowRMax, coil.CopperRMax, s.ZMin, s.ZMax, "winding"));
+                    bodies.Add(new SectionBody(SlabKind.Copper, s.Owner.Name, coil.CopperRMin, coil.WindowRMin, s.ZMin, s.ZMax, "winding"));
+                    bodies.Add(new SectionBody(SlabKind.Copper, s.Owner.Name, coil.WindowRMax, coil.CopperRMax, s.ZMin, s.ZMax, "winding"));
                     break;
             }
         }
