@@ -21,48 +21,64 @@ public static class ElectricalView
     {
         var coil = r.Coil ?? throw new InvalidOperationException("the electrical result has no coil; the report needs one");
         var outline = coil.Outline ?? throw new InvalidOperationException("the electrical result has no coil outline");
+        // One value per row; each row's key is the results document's path of the same number (a test reads every
+        // row back from the results document).
         var rows = new List<ReportRow>
         {
-            new("pole pairs", I(r.PolePairs), "", "pole_pairs"),
-            new("electrical frequency at rated speed", F(r.ElectricalHz, 2), "Hz", "electrical_hz"),
-            new("magnetic gap (magnet face to copper)", F(r.MagneticGapMm, 3), "mm", "magnetic_gap"),
-            new("winding factor", F(r.WindingFactor, 4), "", "winding_factor"),
-            new("magnet remanence Br", F(r.Magnet.BrTesla, 3), "T", "magnet.br"),
-            new("turns per coil" + (coil.TurnsSolved ? " (solved for the target EMF)" : ""), I(coil.Turns), "", "coil.turns"),
-            new("wire bare / overall diameter", $"{F(coil.WireBareMm, 4)} / {F(coil.WireOverallMm, 4)}", "mm", "coil.wire_bare"),
-            new("fill factor", F(coil.FillFactor, 3), "", "coil.fill_factor"),
-            new("coil height / radial build", $"{F(coil.HeightMm, 2)} / {F(coil.RadialBuildMm, 3)}", "mm", "coil.height"),
-            new("mean turn length", F(coil.MeanTurnMm, 2), "mm", "coil.mean_turn"),
-            new("wire per coil (with leads)", F(coil.WireLengthM, 3), "m", "coil.wire_length_m"),
-            new("coil resistance at 20 C / hot", $"{F(coil.Resistance20COhm, 4)} / {F(coil.ResistanceHotOhm, 4)}", "ohm", "coil.resistance_20c_ohm"),
-            new("coil inductance" + (coil.InductanceIsApproximate ? " (approximate)" : ""), F(coil.InductanceUh, 1), "uH", "coil.inductance_uh"),
-            new("copper per coil", F(coil.CopperMassG, 2), "g", "coil.copper_mass_g"),
-            new("coil flux linkage, peak", F(r.CoilFluxLinkagePeakWb, 6), "Wb", "coil_flux_linkage_peak_wb"),
-            new("coil EMF at rated speed", F(r.CoilEmfRmsV, 3), "V rms", "coil.emf_rms_v"),
+            new("pole pairs", I(r.PolePairs), "", "electrical.pole_pairs"),
+            new("electrical frequency at rated speed", F(r.ElectricalHz, 2), "Hz", "electrical.electrical_hz"),
+            new("magnetic gap (magnet face to copper)", F(r.MagneticGapMm, 3), "mm", "electrical.magnetic_gap"),
+            new("winding factor", F(r.WindingFactor, 4), "", "electrical.winding_factor"),
+            new("magnet remanence Br", F(r.Magnet.BrTesla, 3), "T", "electrical.magnet.br"),
+            new("turns per coil" + (coil.TurnsSolved ? " (solved for the target EMF)" : ""), I(coil.Turns), "", "electrical.coil.turns"),
+            new("wire bare diameter", F(coil.WireBareMm, 4), "mm", "electrical.coil.wire_bare"),
+            new("wire overall (enamelled) diameter", F(coil.WireOverallMm, 4), "mm", "electrical.coil.wire_overall"),
+            new("fill factor", F(coil.FillFactor, 3), "", "electrical.coil.fill_factor"),
+            new("coil height", F(coil.HeightMm, 2), "mm", "electrical.coil.height"),
+            new("coil radial build", F(coil.RadialBuildMm, 3), "mm", "electrical.coil.radial_build"),
+            new("mean turn length", F(coil.MeanTurnMm, 2), "mm", "electrical.coil.mean_turn"),
+            new("wire per coil (with leads)", F(coil.WireLengthM, 3), "m", "electrical.coil.wire_length_m"),
+            new("coil resistance at 20 C", F(coil.Resistance20COhm, 4), "ohm", "electrical.coil.resistance_20c_ohm"),
+            new($"coil resistance at {F(coil.MaxTemperatureC, 1)} C", F(coil.ResistanceHotOhm, 4), "ohm", "electrical.coil.resistance_hot_ohm"),
+            new("coil inductance" + (coil.InductanceIsApproximate ? " (approximate)" : ""), F(coil.InductanceUh, 1), "uH", "electrical.coil.inductance_uh"),
+            new("copper per coil", F(coil.CopperMassG, 2), "g", "electrical.coil.copper_mass_g"),
+            new("coil flux linkage, peak", F(r.CoilFluxLinkagePeakWb, 6), "Wb", "electrical.coil_flux_linkage_peak_wb"),
+            new("coil EMF at rated speed", F(r.CoilEmfRmsV, 3), "V rms", "electrical.coil.emf_rms_v"),
         };
         if (r.Phase is { } ph)
         {
-            rows.Add(new("connection, coils in series per phase", $"{Words.Of(ph.Connection)}, {ph.CoilsInSeries}", "", "phase.coils_in_series"));
-            rows.Add(new("phase EMF at rated speed, peak / rms", $"{F(ph.EmfPeakV, 3)} / {F(ph.EmfRmsV, 3)}", "V", "phase.emf_rms_v"));
-            rows.Add(new("phase resistance at 20 C / hot", $"{F(ph.Resistance20COhm, 4)} / {F(ph.ResistanceHotOhm, 4)}", "ohm", "phase.resistance_20c_ohm"));
-            rows.Add(new("phase EMF distortion (THD)", F(ph.ThdPercent, 2), "%", "phase.thd_percent"));
+            rows.Add(new("coils in series per phase (" + Words.Of(ph.Connection) + ")", I(ph.CoilsInSeries), "", "electrical.phase.coils_in_series"));
+            rows.Add(new("phase EMF at rated speed, peak", F(ph.EmfPeakV, 3), "V", "electrical.phase.emf_peak_v"));
+            rows.Add(new("phase EMF at rated speed", F(ph.EmfRmsV, 3), "V rms", "electrical.phase.emf_rms_v"));
+            rows.Add(new("phase resistance at 20 C", F(ph.Resistance20COhm, 4), "ohm", "electrical.phase.resistance_20c_ohm"));
+            rows.Add(new("phase resistance hot", F(ph.ResistanceHotOhm, 4), "ohm", "electrical.phase.resistance_hot_ohm"));
+            rows.Add(new("phase EMF distortion (THD)", F(ph.ThdPercent, 2), "%", "electrical.phase.thd_percent"));
         }
-        rows.Add(new("line EMF at rated speed", F(r.LineEmfRmsV, 3), "V rms", "line_emf_rms_v"));
-        rows.Add(new("line EMF at max speed", F(r.LineEmfRmsAtMaxRpmV, 3), "V rms", "line_emf_rms_at_max_rpm_v"));
-        rows.Add(new("EMF constant ke", F(r.KeVPerKrpm, 3), "V per 1000 rpm", "ke_v_per_krpm"));
-        rows.Add(new("torque constant kt", F(r.KtNmPerA, 4), "N m/A", "kt_nm_per_a"));
-        rows.Add(new("wire for the machine (all coils, leads)", F(TotalWireM(d, r), 2), "m", "wire_total_m"));
+        rows.Add(new("line EMF at rated speed", F(r.LineEmfRmsV, 3), "V rms", "electrical.line_emf_rms_v"));
+        rows.Add(new("line EMF at max speed", F(r.LineEmfRmsAtMaxRpmV, 3), "V rms", "electrical.line_emf_rms_at_max_rpm_v"));
+        rows.Add(new("EMF constant ke", F(r.KeVPerKrpm, 3), "V per 1000 rpm", "electrical.ke_v_per_krpm"));
+        rows.Add(new("torque constant kt", F(r.KtNmPerA, 4), "N m/A", "electrical.kt_nm_per_a"));
+        rows.Add(new("wire for the machine (all coils, leads)", F(TotalWireM(d, r), 2), "m", "electrical.wire_total_m"));
         if (r.Generator is { } g)
         {
-            rows.Add(new($"generator into {F(g.LoadResistanceOhm, 2)} ohm at {F(g.Rpm, 0)} rpm: current / terminal voltage", $"{F(g.CurrentA, 3)} / {F(g.TerminalVoltageV, 3)}", "A / V", "generator.current_a"));
-            rows.Add(new("generator output / copper loss / efficiency", $"{F(g.OutputPowerW, 2)} W / {F(g.CopperLossW, 2)} W / {F(g.Efficiency * 100, 1)} %", "", "generator.output_power_w"));
-            rows.Add(new("generator shaft torque / current density", $"{F(g.ShaftTorqueNm, 4)} N m / {F(g.CurrentDensityAPerMm2, 2)} A/mm2", "", "generator.shaft_torque_nm"));
+            string at = $"generator into {F(g.LoadResistanceOhm, 2)} ohm at {F(g.Rpm, 0)} rpm";
+            rows.Add(new($"{at}: current", F(g.CurrentA, 3), "A", "operating.generator.current_a"));
+            rows.Add(new($"{at}: terminal voltage", F(g.TerminalVoltageV, 3), "V", "operating.generator.terminal_voltage_v"));
+            rows.Add(new($"{at}: output", F(g.OutputPowerW, 2), "W", "operating.generator.output_power_w"));
+            rows.Add(new($"{at}: copper loss", F(g.CopperLossW, 2), "W", "operating.generator.copper_loss_w"));
+            rows.Add(new($"{at}: efficiency", F(g.Efficiency, 3), "", "operating.generator.efficiency"));
+            rows.Add(new($"{at}: shaft torque", F(g.ShaftTorqueNm, 4), "N m", "operating.generator.shaft_torque_nm"));
+            rows.Add(new($"{at}: current density", F(g.CurrentDensityAPerMm2, 2), "A/mm2", "operating.generator.current_density_a_per_mm2"));
         }
         if (r.Motor is { } m)
         {
-            rows.Add(new($"motor ({m.Drive}) on {F(m.SupplyVoltageV, 1)} V: no-load speed", F(m.NoLoadRpm, 0), "rpm", "motor.no_load_rpm"));
-            rows.Add(new("motor stall torque / stall current", $"{F(m.StallTorqueNm, 4)} N m / {F(m.StallCurrentA, 2)} A", "", "motor.stall_torque_nm"));
-            rows.Add(new($"motor at {F(m.RatedRpm, 0)} rpm: current / torque / efficiency", $"{F(m.CurrentAtRatedA, 3)} A / {F(m.TorqueAtRatedNm, 4)} N m / {F(m.EfficiencyAtRated * 100, 1)} %", "", "motor.current_at_rated_a"));
+            string on = $"motor ({m.Drive}) on {F(m.SupplyVoltageV, 1)} V";
+            rows.Add(new($"{on}: no-load speed", F(m.NoLoadRpm, 0), "rpm", "operating.motor.no_load_rpm"));
+            rows.Add(new($"{on}: stall torque", F(m.StallTorqueNm, 4), "N m", "operating.motor.stall_torque_nm"));
+            rows.Add(new($"{on}: stall current", F(m.StallCurrentA, 2), "A", "operating.motor.stall_current_a"));
+            rows.Add(new($"{on}, at {F(m.RatedRpm, 0)} rpm: current", F(m.CurrentAtRatedA, 3), "A", "operating.motor.current_at_rated_a"));
+            rows.Add(new($"{on}, at {F(m.RatedRpm, 0)} rpm: torque", F(m.TorqueAtRatedNm, 4), "N m", "operating.motor.torque_at_rated_nm"));
+            rows.Add(new($"{on}, at {F(m.RatedRpm, 0)} rpm: efficiency", F(m.EfficiencyAtRated, 3), "", "operating.motor.efficiency_at_rated"));
         }
 
         var coilWave = new List<PlotSeries>();
@@ -82,7 +98,7 @@ public static class ElectricalView
         if (r.Winding.Table.Count > 0)
             tables.Add(new ReportTable("Winding table: which coil goes to which phase, and which way it is wound",
                 ["coil", "angle, deg", "phase", "direction"],
-                r.Winding.Table.Select(c => (IReadOnlyList<string>)[I(c.Coil + 1), F(c.AngleDeg, 2), c.Phase.ToString(), c.Direction > 0 ? "forward" : "reversed"]).ToArray()));
+                r.Winding.Table.Select(c => (IReadOnlyList<string>)[I(c.Coil), F(c.AngleDeg, 2), c.Phase.ToString(), c.Direction > 0 ? "forward" : "reversed"]).ToArray()));
         if (r.Sensors is { } s && s.Sensors.Count > 0)
             tables.Add(new ReportTable($"Timing sensors ({Words.Of(s.Kind)}): {s.Rule}",
                 ["sensor", "angle, deg", "radius, mm", "electrical deg", "fits between coils"],

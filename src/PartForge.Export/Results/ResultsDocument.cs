@@ -14,6 +14,15 @@ public sealed record ResultsDocument
     public required ElectricalSection Electrical { get; init; }
     public required IReadOnlyList<CheckEntry> Checks { get; init; }
     public required IReadOnlyList<PartEntry> Parts { get; init; }
+
+    /// <summary>The operating points (CONTRACT "Additions": <c>operating</c>).</summary>
+    public OperatingSection Operating { get; init; } = new(0, null, null);
+
+    /// <summary>Masses and forces of the rotating assembly (CONTRACT "Additions": <c>mechanics</c>).</summary>
+    public MechanicsSection Mechanics { get; init; } = new(0, 0, [], "");
+
+    /// <summary>The bill of materials, line by line (empty when no parts could be made).</summary>
+    public IReadOnlyList<BomEntry> Bom { get; init; } = [];
 }
 
 /// <summary>pass / warn / fail and the counts; <see cref="Forced"/> when --force wrote a failing design.</summary>
@@ -27,12 +36,30 @@ public sealed record CheckEntry(string Id, string Part, string Status, double Va
 {
     /// <summary>The other part of the pair the check is about, or null (CONTRACT "Additions": every check carries it).</summary>
     public string? Counterpart { get; init; }
+
+    /// <summary>Where the limiting value occurs (features; rotor angle for the rotation sweep), or null.</summary>
+    public string? Where { get; init; }
+
+    /// <summary>The rotor angle at which it occurs, degrees, or null.</summary>
+    public double? WhereAngleDeg { get; init; }
+
+    /// <summary>The published source or stated assumption behind the check.</summary>
+    public string? Basis { get; init; }
 }
 
 public sealed record PartEntry(string Name, string Process, int Quantity, IReadOnlyList<string> Files, double VolumeMm3, long Triangles)
 {
     /// <summary>Material of the part (an addition to the contract).</summary>
     public string? Material { get; init; }
+
+    /// <summary>What the part is for: rotor, back-iron, former, stator, hub-spacer, gap-gauge, rim-spacer.</summary>
+    public string? Role { get; init; }
+
+    /// <summary>Mass of one copy, g (solid, 100% infill); 0 when the parts were not measured.</summary>
+    public double MassG { get; init; }
+
+    /// <summary>The part turns with the shaft.</summary>
+    public bool Rotating { get; init; }
 }
 
 /// <summary>The "electrical" object of the contract.</summary>
@@ -43,12 +70,67 @@ public sealed record ElectricalSection
     public required double MagneticGap { get; init; }
     public required double WindingFactor { get; init; }
     public required double MagnetBr { get; init; }
+
+    /// <summary>"br" when magnets.br was given, else the grade (additions: <c>magnet.source</c>, <c>magnet.shape</c>, <c>magnet.description</c>).</summary>
+    public string MagnetSource { get; init; } = "";
+    public string MagnetShape { get; init; } = "";
+    public string MagnetDescription { get; init; } = "";
     public required CoilSection Coil { get; init; }
     public required double CoilFluxLinkagePeakWb { get; init; }
     public required PhaseSection Phase { get; init; }
     public required double LineEmfRmsV { get; init; }
     public required double KeVPerKrpm { get; init; }
+
+    // Additions: every figure the report shows.
+    public double FluxPerTurnPeakWb { get; init; }
+    public double LineEmfPeakV { get; init; }
+    public double LineEmfRmsAtMaxRpmV { get; init; }
+    public double LineEmfPeakAtMaxRpmV { get; init; }
+    public double KtNmPerA { get; init; }
+    public double WireTotalM { get; init; }
+    public double RatedRpm { get; init; }
+    public IReadOnlyList<HarmonicEntry> Harmonics { get; init; } = [];
+
+    /// <summary>Which coil goes to which phase, and which way it is wound (CONTRACT "Additions": <c>electrical.winding_table</c>).</summary>
+    public IReadOnlyList<WindingEntry> WindingTable { get; init; } = [];
+
+    /// <summary>The timing sensors (CONTRACT "Additions": <c>electrical.sensors</c>).</summary>
+    public IReadOnlyList<SensorEntry> Sensors { get; init; } = [];
+
+    /// <summary>hall, reed or none.</summary>
+    public string SensorKind { get; init; } = "";
+
+    /// <summary>How the sensor angles were found, one sentence (empty without sensors).</summary>
+    public string SensorRule { get; init; } = "";
 }
+
+/// <summary>One odd harmonic of the phase EMF at rated speed.</summary>
+public sealed record HarmonicEntry(int Order, double PeakV, double PercentOfFundamental);
+
+/// <summary>One coil of the winding table: index (from 0, coil 0 on +x), angle, phase letter, +1 wound forward or -1 reversed.</summary>
+public sealed record WindingEntry(int Coil, double AngleDeg, string Phase, int Direction);
+
+/// <summary>One timing sensor: label, mechanical angle, radius (mm), electrical angle, inverted output, room between the coils (mm).</summary>
+public sealed record SensorEntry(string Label, double AngleDeg, double Radius, double ElectricalDeg, bool Inverted, double Clearance, bool Fits);
+
+/// <summary>The operating points at rated speed: as a generator into the load, and as a motor on the supply (null when not computed).</summary>
+public sealed record OperatingSection(double Rpm, GeneratorEntry? Generator, MotorEntry? Motor);
+
+public sealed record GeneratorEntry(double Rpm, double LoadResistanceOhm, double CurrentA, double CoilCurrentA, double TerminalVoltageV,
+    double OutputPowerW, double CopperLossW, double Efficiency, double ShaftTorqueNm, double CurrentDensityAPerMm2);
+
+public sealed record MotorEntry(string Drive, double SupplyVoltageV, double SwitchDropV, double PathResistanceOhm, double NoLoadRpm,
+    double StallTorqueNm, double StallCurrentA, double RatedRpm, double CurrentAtRatedA, double TorqueAtRatedNm, double OutputPowerAtRatedW,
+    double InputPowerAtRatedW, double EfficiencyAtRated, double CurrentDensityAtRatedAPerMm2, double CurrentDensityAtStallAPerMm2);
+
+/// <summary>
+/// The rotating assembly: its mass (rotating parts and magnets), one magnet's mass, and the axial pull on each
+/// rotor at the running gap (<c>pull_n</c>, by rotor part name), with the model used.
+/// </summary>
+public sealed record MechanicsSection(double RotatingMassKg, double MagnetMassG, IReadOnlyList<(string Part, double N)> PullN, string PullMethod);
+
+/// <summary>One line of the bill of materials.</summary>
+public sealed record BomEntry(string Category, string Item, string Specification, double Quantity, string Unit, string Notes);
 
 public sealed record CoilSection
 {
@@ -74,6 +156,15 @@ public sealed record CoilSection
     public required double ResistanceHotOhm { get; init; }
     public required double InductanceUh { get; init; }
     public required double CopperMassG { get; init; }
+
+    // Additions.
+    public int? WireAwg { get; init; }
+    public double RadialBuild { get; init; }
+    public double LeadAllowance { get; init; }
+    public double MaxTemperatureC { get; init; }
+    public double WireOhmPerM20C { get; init; }
+    public double EmfRmsV { get; init; }
+    public bool TurnsSolved { get; init; }
 }
 
 /// <summary>
@@ -82,4 +173,13 @@ public sealed record CoilSection
 /// </summary>
 public sealed record KeystoneOutline(double InnerRadius, double OuterRadius, double WindowWidth, double Width, double RadialBuild);
 
-public sealed record PhaseSection(int CoilsInSeries, double EmfPeakV, double EmfRmsV, double Resistance20cOhm);
+public sealed record PhaseSection(int CoilsInSeries, double EmfPeakV, double EmfRmsV, double Resistance20cOhm)
+{
+    // Additions.
+    public string Connection { get; init; } = "";
+    public int ParallelPaths { get; init; } = 1;
+    public double EmfFundamentalRmsV { get; init; }
+    public double ResistanceHotOhm { get; init; }
+    public double InductanceUh { get; init; }
+    public double ThdPercent { get; init; }
+}

@@ -42,6 +42,9 @@ public static class ResultsJson
                 w.WriteString("unit", c.Unit);
                 Num(w, "margin", c.Margin, "checks." + c.Id + ".margin");
                 w.WriteString("message", c.Message);
+                if (c.Where is { } where) w.WriteString("where", where); else w.WriteNull("where");
+                if (c.WhereAngleDeg is { } wa) Num(w, "where_angle_deg", wa, "checks." + c.Id + ".where_angle_deg"); else w.WriteNull("where_angle_deg");
+                if (c.Basis is { } basis) w.WriteString("basis", basis); else w.WriteNull("basis");
                 w.WriteEndObject();
             }
             w.WriteEndArray();
@@ -58,6 +61,24 @@ public static class ResultsJson
                 Num(w, "volume_mm3", p.VolumeMm3, "parts." + p.Name + ".volume_mm3");
                 w.WriteNumber("triangles", p.Triangles);
                 if (p.Material != null) w.WriteString("material", p.Material);
+                if (p.Role != null) w.WriteString("role", p.Role);
+                Num(w, "mass_g", p.MassG, "parts." + p.Name + ".mass_g");
+                w.WriteBoolean("rotating", p.Rotating);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            WriteOperating(w, doc.Operating);
+            WriteMechanics(w, doc.Mechanics);
+            w.WriteStartArray("bom");
+            foreach (var l in doc.Bom)
+            {
+                w.WriteStartObject();
+                w.WriteString("category", l.Category);
+                w.WriteString("item", l.Item);
+                w.WriteString("specification", l.Specification);
+                Num(w, "quantity", l.Quantity, "bom.quantity");
+                w.WriteString("unit", l.Unit);
+                w.WriteString("notes", l.Notes);
                 w.WriteEndObject();
             }
             w.WriteEndArray();
@@ -76,6 +97,9 @@ public static class ResultsJson
         Num(w, "winding_factor", e.WindingFactor, "electrical.winding_factor");
         w.WriteStartObject("magnet");
         Num(w, "br", e.MagnetBr, "electrical.magnet.br");
+        w.WriteString("source", e.MagnetSource);
+        w.WriteString("shape", e.MagnetShape);
+        w.WriteString("description", e.MagnetDescription);
         w.WriteEndObject();
         var c = e.Coil;
         w.WriteStartObject("coil");
@@ -103,6 +127,13 @@ public static class ResultsJson
         Num(w, "resistance_hot_ohm", c.ResistanceHotOhm, "coil.resistance_hot_ohm");
         Num(w, "inductance_uh", c.InductanceUh, "coil.inductance_uh");
         Num(w, "copper_mass_g", c.CopperMassG, "coil.copper_mass_g");
+        if (c.WireAwg is { } awg) w.WriteNumber("wire_awg", awg); else w.WriteNull("wire_awg");
+        Num(w, "radial_build", c.RadialBuild, "coil.radial_build");
+        Num(w, "lead_allowance", c.LeadAllowance, "coil.lead_allowance");
+        Num(w, "max_temperature_c", c.MaxTemperatureC, "coil.max_temperature_c");
+        Num(w, "wire_ohm_per_m_20c", c.WireOhmPerM20C, "coil.wire_ohm_per_m_20c");
+        Num(w, "emf_rms_v", c.EmfRmsV, "coil.emf_rms_v");
+        w.WriteBoolean("turns_solved", c.TurnsSolved);
         w.WriteEndObject();
         Num(w, "coil_flux_linkage_peak_wb", e.CoilFluxLinkagePeakWb, "electrical.coil_flux_linkage_peak_wb");
         w.WriteStartObject("phase");
@@ -110,9 +141,115 @@ public static class ResultsJson
         Num(w, "emf_peak_v", e.Phase.EmfPeakV, "phase.emf_peak_v");
         Num(w, "emf_rms_v", e.Phase.EmfRmsV, "phase.emf_rms_v");
         Num(w, "resistance_20c_ohm", e.Phase.Resistance20cOhm, "phase.resistance_20c_ohm");
+        w.WriteString("connection", e.Phase.Connection);
+        w.WriteNumber("parallel_paths", e.Phase.ParallelPaths);
+        Num(w, "emf_fundamental_rms_v", e.Phase.EmfFundamentalRmsV, "phase.emf_fundamental_rms_v");
+        Num(w, "resistance_hot_ohm", e.Phase.ResistanceHotOhm, "phase.resistance_hot_ohm");
+        Num(w, "inductance_uh", e.Phase.InductanceUh, "phase.inductance_uh");
+        Num(w, "thd_percent", e.Phase.ThdPercent, "phase.thd_percent");
         w.WriteEndObject();
         Num(w, "line_emf_rms_v", e.LineEmfRmsV, "electrical.line_emf_rms_v");
         Num(w, "ke_v_per_krpm", e.KeVPerKrpm, "electrical.ke_v_per_krpm");
+        Num(w, "rated_rpm", e.RatedRpm, "electrical.rated_rpm");
+        Num(w, "flux_per_turn_peak_wb", e.FluxPerTurnPeakWb, "electrical.flux_per_turn_peak_wb");
+        Num(w, "line_emf_peak_v", e.LineEmfPeakV, "electrical.line_emf_peak_v");
+        Num(w, "line_emf_rms_at_max_rpm_v", e.LineEmfRmsAtMaxRpmV, "electrical.line_emf_rms_at_max_rpm_v");
+        Num(w, "line_emf_peak_at_max_rpm_v", e.LineEmfPeakAtMaxRpmV, "electrical.line_emf_peak_at_max_rpm_v");
+        Num(w, "kt_nm_per_a", e.KtNmPerA, "electrical.kt_nm_per_a");
+        Num(w, "wire_total_m", e.WireTotalM, "electrical.wire_total_m");
+        w.WriteStartArray("harmonics");
+        foreach (var h in e.Harmonics)
+        {
+            w.WriteStartObject();
+            w.WriteNumber("order", h.Order);
+            Num(w, "peak_v", h.PeakV, "electrical.harmonics.peak_v");
+            Num(w, "percent_of_fundamental", h.PercentOfFundamental, "electrical.harmonics.percent_of_fundamental");
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+        w.WriteStartArray("winding_table");
+        foreach (var c2 in e.WindingTable)
+        {
+            w.WriteStartObject();
+            w.WriteNumber("coil", c2.Coil);
+            Num(w, "angle_deg", c2.AngleDeg, "electrical.winding_table.angle_deg");
+            w.WriteString("phase", c2.Phase);
+            w.WriteNumber("direction", c2.Direction);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+        w.WriteString("sensor_kind", e.SensorKind);
+        w.WriteString("sensor_rule", e.SensorRule);
+        w.WriteStartArray("sensors");
+        foreach (var s in e.Sensors)
+        {
+            w.WriteStartObject();
+            w.WriteString("label", s.Label);
+            Num(w, "angle_deg", s.AngleDeg, "electrical.sensors.angle_deg");
+            Num(w, "radius", s.Radius, "electrical.sensors.radius");
+            Num(w, "electrical_deg", s.ElectricalDeg, "electrical.sensors.electrical_deg");
+            w.WriteBoolean("inverted", s.Inverted);
+            Num(w, "clearance", s.Clearance, "electrical.sensors.clearance");
+            w.WriteBoolean("fits", s.Fits);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+        w.WriteEndObject();
+    }
+
+    private static void WriteOperating(Utf8JsonWriter w, OperatingSection o)
+    {
+        w.WriteStartObject("operating");
+        Num(w, "rpm", o.Rpm, "operating.rpm");
+        if (o.Generator is { } g)
+        {
+            w.WriteStartObject("generator");
+            Num(w, "rpm", g.Rpm, "operating.generator.rpm");
+            Num(w, "load_resistance_ohm", g.LoadResistanceOhm, "operating.generator.load_resistance_ohm");
+            Num(w, "current_a", g.CurrentA, "operating.generator.current_a");
+            Num(w, "coil_current_a", g.CoilCurrentA, "operating.generator.coil_current_a");
+            Num(w, "terminal_voltage_v", g.TerminalVoltageV, "operating.generator.terminal_voltage_v");
+            Num(w, "output_power_w", g.OutputPowerW, "operating.generator.output_power_w");
+            Num(w, "copper_loss_w", g.CopperLossW, "operating.generator.copper_loss_w");
+            Num(w, "efficiency", g.Efficiency, "operating.generator.efficiency");
+            Num(w, "shaft_torque_nm", g.ShaftTorqueNm, "operating.generator.shaft_torque_nm");
+            Num(w, "current_density_a_per_mm2", g.CurrentDensityAPerMm2, "operating.generator.current_density_a_per_mm2");
+            w.WriteEndObject();
+        }
+        else w.WriteNull("generator");
+        if (o.Motor is { } m)
+        {
+            w.WriteStartObject("motor");
+            w.WriteString("drive", m.Drive);
+            Num(w, "supply_voltage_v", m.SupplyVoltageV, "operating.motor.supply_voltage_v");
+            Num(w, "switch_drop_v", m.SwitchDropV, "operating.motor.switch_drop_v");
+            Num(w, "path_resistance_ohm", m.PathResistanceOhm, "operating.motor.path_resistance_ohm");
+            Num(w, "no_load_rpm", m.NoLoadRpm, "operating.motor.no_load_rpm");
+            Num(w, "stall_torque_nm", m.StallTorqueNm, "operating.motor.stall_torque_nm");
+            Num(w, "stall_current_a", m.StallCurrentA, "operating.motor.stall_current_a");
+            Num(w, "rated_rpm", m.RatedRpm, "operating.motor.rated_rpm");
+            Num(w, "current_at_rated_a", m.CurrentAtRatedA, "operating.motor.current_at_rated_a");
+            Num(w, "torque_at_rated_nm", m.TorqueAtRatedNm, "operating.motor.torque_at_rated_nm");
+            Num(w, "output_power_at_rated_w", m.OutputPowerAtRatedW, "operating.motor.output_power_at_rated_w");
+            Num(w, "input_power_at_rated_w", m.InputPowerAtRatedW, "operating.motor.input_power_at_rated_w");
+            Num(w, "efficiency_at_rated", m.EfficiencyAtRated, "operating.motor.efficiency_at_rated");
+            Num(w, "current_density_at_rated_a_per_mm2", m.CurrentDensityAtRatedAPerMm2, "operating.motor.current_density_at_rated_a_per_mm2");
+            Num(w, "current_density_at_stall_a_per_mm2", m.CurrentDensityAtStallAPerMm2, "operating.motor.current_density_at_stall_a_per_mm2");
+            w.WriteEndObject();
+        }
+        else w.WriteNull("motor");
+        w.WriteEndObject();
+    }
+
+    private static void WriteMechanics(Utf8JsonWriter w, MechanicsSection m)
+    {
+        w.WriteStartObject("mechanics");
+        Num(w, "rotating_mass_kg", m.RotatingMassKg, "mechanics.rotating_mass_kg");
+        Num(w, "magnet_mass_g", m.MagnetMassG, "mechanics.magnet_mass_g");
+        w.WriteStartObject("pull_n");
+        foreach (var (part, n) in m.PullN) Num(w, part, n, "mechanics.pull_n." + part);
+        w.WriteEndObject();
+        w.WriteString("pull_method", m.PullMethod);
         w.WriteEndObject();
     }
 

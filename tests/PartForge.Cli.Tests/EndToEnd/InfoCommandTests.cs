@@ -33,6 +33,25 @@ public class InfoCommandTests
         Assert.Equal(0, r2.ExitCode);
         Assert.Equal("", r2.Stdout);
         Assert.Equal(DesignSchema.Generate(), File.ReadAllText(w.File("design.schema.json")));
+        // An existing file is not replaced without --overwrite (as init), and the file is left as it was.
+        File.WriteAllText(w.File("design.schema.json"), "mine");
+        var r3 = PartforgeProcess.Run(w.Path, "schema", "-o", "design.schema.json");
+        Assert.Equal(2, r3.ExitCode);
+        Assert.Contains("--overwrite", Assert.Single(r3.StderrLines));
+        Assert.Equal("mine", File.ReadAllText(w.File("design.schema.json")));
+        Assert.Equal(0, PartforgeProcess.Run(w.Path, "schema", "-o", "design.schema.json", "--overwrite").ExitCode);
+        Assert.Equal(DesignSchema.Generate(), File.ReadAllText(w.File("design.schema.json")));
+    }
+
+    [Fact]
+    public void Schema_results_prints_the_schema_of_the_results_document()
+    {
+        using var w = new WorkDir();
+        var r = PartforgeProcess.Run(w.Path, "schema", "--results");
+        Assert.Equal(0, r.ExitCode);
+        Assert.Equal(PartForge.Export.Results.ResultsSchema.Text, r.Stdout);
+        using var doc = JsonDocument.Parse(r.Stdout);
+        Assert.Equal("urn:partforge:results:1", doc.RootElement.GetProperty("$id").GetString());
     }
 
     [Fact]

@@ -195,3 +195,35 @@ public class HtmlReportTests
         finally { Directory.Delete(dir, true); }
     }
 }
+
+/// <summary>Every number of the report's electrical table is in the results document, at the path the row names.</summary>
+public class ReportNumbersInResultsTests
+{
+    public static IEnumerable<object[]> Presets() => Pipeline.Presets();
+
+    [Theory]
+    [MemberData(nameof(Presets))]
+    public void Every_electrical_row_of_the_report_is_a_value_of_the_results_document(string preset)
+    {
+        var ev = Pipeline.Evaluate(preset);
+        string html = HtmlReport.Render(ReportFiles.InputOf(ev, false, embedAssemblyPreview: false));
+        using var json = System.Text.Json.JsonDocument.Parse(PartForge.Export.Results.ResultsJson.Serialize(PartForge.Export.Results.ResultsBuilder.Build(ev)));
+        var table = Regex.Match(html, "<table[^>]*id=\"electrical-table\".*?</table>", RegexOptions.Singleline).Value;
+        var rows = Regex.Matches(table, "<tr data-key=\"([^\"]+)\"><th>.*?</th><td class=\"num\">([^<]*)</td>").ToList();
+        Assert.True(rows.Count > 25, $"{preset}: only {rows.Count} keyed rows in the electrical table");
+        foreach (Match row in rows)
+        {
+            string path = row.Groups[1].Value, shown = row.Groups[2].Value;
+            var node = json.RootElement;
+            foreach (var part in path.Split('.'))
+            {
+                Assert.True(node.TryGetProperty(part, out var next), $"{preset}: the report shows {path} = {shown} but the results document has no {path}");
+                node = next;
+            }
+            double value = node.GetDouble();
+            int decimals = shown.Contains('.') ? shown.Length - shown.IndexOf('.') - 1 : 0;
+            Assert.True(Math.Round(value, decimals) == double.Parse(shown, CultureInfo.InvariantCulture),
+                $"{preset}: the report shows {path} = {shown}, the results document {value}");
+        }
+    }
+}
