@@ -96,7 +96,7 @@ internal static class WindingRules
         {
             var better = MaterialTable.All.Where(m => m.IsFilament && m.SofteningC >= t + TemperatureBandC).OrderBy(m => m.SofteningC).FirstOrDefault();
             msg += $"; lower coils.max_temperature to {F(limit - TemperatureBandC)} (less current)"
-                   + (better is not null ? $" or make the {which} from {better.Name} (softens at about {F(better.SofteningC)} C)" : "");
+                   + (better is not null ? $" or make the {which} from {better.Name} ({(weak == former ? "parts.former.material" : "stator.material")}: {better.Name}; softens at about {F(better.SofteningC)} C)" : "");
         }
         return new CheckResult
         {

@@ -2,17 +2,23 @@ namespace PartForge.Design.Model;
 
 public sealed class Magnets
 {
-    [OneOf("disc", "block", "arc"), Doc("disc | block | arc (segment of an annulus).")]
+    [OneOf("disc", "block", "arc", "sector"), Doc("disc | block | arc (segment of an annulus) | sector (trapezoidal block, wider at its outer edge).")]
     public string Shape { get; init; } = "disc";
 
     [Range(0, 500, MinExclusive = true), Doc("Disc magnet diameter, mm (shape: disc).")]
     public double? Diameter { get; init; }
 
-    [Range(0, 500, MinExclusive = true), Doc("Block magnet radial length, mm (shape: block).")]
+    [Range(0, 500, MinExclusive = true), Doc("Radial length, mm (shape: block, sector).")]
     public double? Length { get; init; }
 
     [Range(0, 500, MinExclusive = true), Doc("Block magnet tangential width, mm (shape: block).")]
     public double? Width { get; init; }
+
+    [Range(0, 500, MinExclusive = true), Doc("Tangential width at the inner edge, mm (shape: sector).")]
+    public double? InnerWidth { get; init; }
+
+    [Range(0, 500, MinExclusive = true), Doc("Tangential width at the outer edge, mm (shape: sector).")]
+    public double? OuterWidth { get; init; }
 
     [Range(0, 1000), Doc("Arc segment inner radius, mm (shape: arc).")]
     public double? InnerRadius { get; init; }
@@ -32,6 +38,6 @@ public sealed class Magnets
     [Range(0, 2, MinExclusive = true), Doc("Remanence in tesla; overrides the grade's mid-range value.")]
     public double? Br { get; init; }
 
-    [Range(0, 1000, MinExclusive = true), Doc("Radius of the magnet centres, mm (disc, block).")]
+    [Range(0, 1000, MinExclusive = true), Doc("Radius of the magnet centres, mm (disc, block; sector: the midpoint of its radial centre line).")]
     public double? PitchRadius { get; init; }
 }

@@ -22,7 +22,7 @@ public class PresetLibraryTests
     {
         var designs = PresetLibrary.All.Select(p => DesignLoader.LoadText(p.Text, p.Name).Design!).ToList();
         Assert.Equal(["dual-rotor", "dual-stator", "single-rotor"], designs.Select(d => d.Machine.Layout).Distinct().Order());
-        Assert.Equal(["arc", "block", "disc"], designs.Select(d => d.Magnets.Shape).Distinct().Order());
+        Assert.Equal(["arc", "block", "disc", "sector"], designs.Select(d => d.Magnets.Shape).Distinct().Order());
         Assert.Equal(["keystone", "round"], designs.Select(d => d.Coils.Shape).Distinct().Order());
         Assert.Equal([1, 3], designs.Select(d => d.Machine.Phases).Distinct().Order());
     }

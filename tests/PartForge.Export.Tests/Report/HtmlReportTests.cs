@@ -48,6 +48,15 @@ public class HtmlReportTests
                         Assert.Equal(d.Magnets.Length!.Value + c, dims["pocket_length"], 4);
                         Assert.Equal(d.Magnets.Width!.Value + c, dims["pocket_width"], 4);
                         break;
+                    case "sector":
+                    {
+                        Assert.Equal(d.Magnets.Length!.Value + c, dims["pocket_length"], 4);
+                        // Every side moved out by c/2: a side of slope k gains c/2 sqrt(1 + k^2) across it and c/2 k
+                        // along the outer edge moved out by c/2 (plane geometry).
+                        double k = (d.Magnets.OuterWidth!.Value - d.Magnets.InnerWidth!.Value) / (2 * d.Magnets.Length!.Value);
+                        Assert.Equal(d.Magnets.OuterWidth!.Value + c * (k + Math.Sqrt(1 + k * k)), dims["pocket_outer_width"], 4);
+                        break;
+                    }
                     default:
                         Assert.Equal(d.Magnets.InnerRadius!.Value - c / 2, dims["pocket_inner_radius"], 4);
                         Assert.Equal(d.Magnets.OuterRadius!.Value + c / 2, dims["pocket_outer_radius"], 4);

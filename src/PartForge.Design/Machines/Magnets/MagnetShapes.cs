@@ -9,6 +9,7 @@ public static class MagnetShapes
         DiscMagnet.Registration,
         BlockMagnet.Registration,
         ArcMagnet.Registration,
+        SectorMagnet.Registration,
     ];
 
     /// <summary>The shape registered under a design-file word, or null.</summary>
