@@ -66,7 +66,7 @@ public static partial class PartsBuilder
             specs.Add(former with { Instances = formerInstances });
             specs.AddRange(stators.Select(s => s.Spec));
 
-            part = "spacer";
+            part = PartNames.Of(new PartId(design.Layout.SpacerRole));
             var seatLocal = ContourOffset.Offset(footprint, DesignGeometry.SeatClearanceMm(design));
             if (SpacerBuilder.Build(design, stack, coil, seatLocal, diags) is { } sp) specs.Add(sp);
         }

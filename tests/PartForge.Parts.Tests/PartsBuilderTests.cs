@@ -8,13 +8,13 @@ public class PartsBuilderTests
     {
         var d = TestDesigns.DualRotor();
         var set = PartsBuilder.Build(PartForge.Design.Machines.MachineModel.From(d), TestDesigns.RoundCoil(d, 6, 15, 45, 75), TestDesigns.Prec(d));
-        Assert.Equal(new[] { "rotor-front", "rotor-back", "back-iron", "former", "stator", "spacer" }, set.Parts.Select(p => p.Name));
+        Assert.Equal(new[] { "rotor-front", "rotor-back", "back-iron", "former", "stator", "hub-spacer" }, set.Parts.Select(p => p.Name));
         foreach (var p in set.Parts)
         {
             var (proc, mat) = p.Name switch
             {
                 "back-iron" => (PartProcess.Cut, "steel"),
-                "spacer" => (PartProcess.Cut, "acrylic"),
+                "hub-spacer" => (PartProcess.Cut, "acrylic"),
                 _ => (PartProcess.Print, "PLA"),
             };
             Assert.Equal(proc, p.Process);

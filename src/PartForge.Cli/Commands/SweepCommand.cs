@@ -28,7 +28,7 @@ public static class SweepCommand
             Required = true,
         };
         var csv = new Option<string?>("--csv") { Description = "Also write every variant and all its results to this CSV file." };
-        var target = new Option<string?>("--target") { Description = $"KEY=VALUE: sort the variants by closeness of a result to a value, e.g. phase.emf_rms_v=12. Results: {string.Join(", ", SweepMetrics.All)}." };
+        var target = new Option<string?>("--target") { Description = $"KEY=VALUE: sort the variants by closeness of a result to a value, e.g. electrical.phase.emf_rms_v=12. Results: {string.Join(", ", SweepMetrics.All)}." };
         var json = new Option<bool>("--json") { Description = "Print the sweep as a JSON document instead of a table." };
         var cmd = new Command("sweep", "Evaluate every combination of varied design keys (electrical results and checks, no files) and tabulate the key results.")
         {

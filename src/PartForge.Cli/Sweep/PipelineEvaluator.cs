@@ -50,7 +50,7 @@ public sealed class PipelineEvaluator : ISweepEvaluator
         }
         var report = ev.Checks;
         var gaps = report.WithId(CheckIds.RunningGap).Select(x => x.Value).ToList();
-        if (gaps.Count > 0) m[SweepMetrics.MinRunningGap] = gaps.Min();
+        if (gaps.Count > 0) m[SweepMetrics.WorstRunningGap] = gaps.Min();
         m[SweepMetrics.FailCount] = report.FailCount;
         m[SweepMetrics.WarnCount] = report.WarnCount;
         if (ev.Parts is { HasErrors: true } ps)

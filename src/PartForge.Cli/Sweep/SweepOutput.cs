@@ -72,7 +72,9 @@ public static class SweepOutput
         {
             var c = new List<string> { (r.Index + 1).ToString(Inv) };
             c.AddRange(plan.Axes.Select((a, k) => r.Values[k].ToString("R", Inv)));
-            c.AddRange(SweepMetrics.All.Select(k => r.Outcome.Metrics.TryGetValue(k, out double v) && double.IsFinite(v) ? v.ToString("R", Inv) : ""));
+            // 12 significant digits, as the results document: far below any tolerance, free of binary noise (1.7999999999999998).
+            c.AddRange(SweepMetrics.All.Select(k => r.Outcome.Metrics.TryGetValue(k, out double v) && double.IsFinite(v)
+                ? double.Parse(v.ToString("G12", Inv), Inv).ToString("R", Inv) : ""));
             c.Add(r.Outcome.Status);
             c.Add(r.Outcome.Reason);
             CsvRow(sb, c);
@@ -125,7 +127,7 @@ public static class SweepOutput
                 if (r.Outcome.Reason.Length > 0) w.WriteString("reason", r.Outcome.Reason);
                 w.WriteStartObject("results");
                 foreach (var k in SweepMetrics.All)
-                    if (r.Outcome.Metrics.TryGetValue(k, out double v) && double.IsFinite(v)) w.WriteNumber(k, v);
+                    if (r.Outcome.Metrics.TryGetValue(k, out double v) && double.IsFinite(v)) w.WriteNumber(k, double.Parse(v.ToString("G12", Inv), Inv));
                 w.WriteEndObject();
                 w.WriteEndObject();
             }

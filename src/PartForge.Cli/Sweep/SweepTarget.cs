@@ -10,11 +10,12 @@ public sealed record SweepTarget(string Key, double Value)
     {
         error = null;
         int eq = arg.IndexOf('=');
-        if (eq <= 0) { error = $"--target '{arg}': expected KEY=VALUE, e.g. phase.emf_rms_v=12"; return null; }
-        string key = arg[..eq].Trim();
+        if (eq <= 0) { error = $"--target '{arg}': expected KEY=VALUE, e.g. electrical.phase.emf_rms_v=12"; return null; }
+        string given = arg[..eq].Trim();
+        string key = SweepMetrics.Resolve(given) ?? given;
         if (!SweepMetrics.All.Contains(key))
         {
-            string? near = KeySuggester.Nearest(key, SweepMetrics.All);
+            string? near = KeySuggester.Nearest(key, SweepMetrics.All) ?? KeySuggester.Nearest("electrical." + key, SweepMetrics.All);
             error = $"--target {key}: not a sweep result" + (near != null ? $"; did you mean '{near}'?" : "") +
                     $"; results: {string.Join(", ", SweepMetrics.All)}";
             return null;

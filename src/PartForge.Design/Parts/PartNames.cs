@@ -16,9 +16,9 @@ public static class PartNames
         (PartId.Stator, "stator"),
         (PartId.StatorFront, "stator-front"),
         (PartId.StatorBack, "stator-back"),
-        (PartId.HubSpacer, "spacer"),
-        (PartId.GapGauge, "spacer"),
-        (PartId.RimSpacer, "spacer"),
+        (PartId.HubSpacer, "hub-spacer"),
+        (PartId.GapGauge, "gap-gauge"),
+        (PartId.RimSpacer, "rim-spacer"),
     ];
 
     /// <summary>The word that selects every spacer role on the command line.</summary>

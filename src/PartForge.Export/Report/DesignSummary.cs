@@ -21,7 +21,7 @@ public static class DesignSummary
             new("magnets", $"{m.Shape.Describe()}, {(m.BrGiven ? "Br " + F(m.BrTesla) + " T" : m.Grade)}", "", "magnets.shape"),
             new("magnet pitch radius", F(m.Shape.PitchRadiusMm), "mm", "magnets.pitch_radius"),
             new("rotor diameter x thickness", $"{F(d.Rotor.OuterDiameterMm)} x {F(d.Rotor.ThicknessMm)}", "mm", "rotor.outer_diameter"),
-            new("back iron", d.Rotor.BackIronThicknessMm is { } bi ? F(bi) + " steel" : "none", "mm", "rotor.back_iron.thickness"),
+            d.Rotor.BackIronThicknessMm is { } bi ? new("back iron", F(bi) + " steel", "mm", "rotor.back_iron.thickness") : new("back iron", "none", "", "rotor.back_iron"),
             new("coils", $"{Words.Of(d.Coils.Shape)}, {(d.Coils.Turns is { } t ? I(t) + " turns" : "turns solved for the target EMF")}, {wire}, fill {F(d.Coils.FillFactor)}", "", "coils.turns"),
             new("stator ring", $"D{F(d.Stator.InnerDiameterMm)}-{F(d.Stator.OuterDiameterMm)} x {F(d.Stator.ThicknessMm)}, {d.Stator.Material.Name}", "mm", "stator.outer_diameter"),
             new("nominal air gap / minimum running gap", $"{F(d.Gap.AirGapMm)} / {F(d.Gap.MinRunningGapMm)}", "mm", "gap.air_gap"),

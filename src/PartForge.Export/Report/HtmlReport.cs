@@ -27,7 +27,7 @@ public static class HtmlReport
         // Summary and status
         sb.Append("<section id=\"summary\"><h2>Design summary</h2>\n<p class=\"status-line\">Checks: ").Append(Pill(r.Status))
           .Append(' ').Append(r.Checks.Count(c => c.Status == "fail")).Append(" failed, ")
-          .Append(r.Checks.Count(c => c.Status == "warn")).Append(" warnings, ")
+          .Append(Plural(r.Checks.Count(c => c.Status == "warn"), "warning")).Append(", ")
           .Append(r.Checks.Count(c => c.Status == "pass")).Append(" passed.</p>\n");
         RowsTable(sb, "summary-table", r.Summary);
         sb.Append("</section>\n");
@@ -123,6 +123,8 @@ public static class HtmlReport
         }
         sb.Append("</tbody></table>\n");
     }
+
+    private static string Plural(int n, string word) => n.ToString(System.Globalization.CultureInfo.InvariantCulture) + " " + word + (n == 1 ? "" : "s");
 
     private static string Pill(string status) => $"<span class=\"pill {Esc(status)}\">{Esc(status)}</span>";
 

@@ -41,8 +41,9 @@ public static class PartSketches
             double pr = shape.PitchRadiusMm;
             dias.Add(new("pitch_circle", o, 2 * pr, 205, $"PCD {F(2 * pr)} magnets", DrawCircle: true));
             var pocket0 = p.FeaturesOf(FeatureKind.MagnetPocket).FirstOrDefault();
-            var target = pocket0?.Position ?? o;
             double c = r.PocketClearanceMm;
+            // The note's leader ends on pocket 0's outer edge, clear of the pole badge at its centre.
+            var target = pocket0 is null ? o : Vec2.FromAngleDeg(pocket0.AngleDeg) * shape.RadialRangeMm(c).Max;
             double depth = d.ThroughPockets ? r.ThicknessMm : r.ThicknessMm - r.PocketFloorMm;
             string kind = d.ThroughPockets ? "through" : $"{F(depth)} deep";
             var sizes = shape.PocketSizes(c);

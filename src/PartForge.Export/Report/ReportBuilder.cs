@@ -46,7 +46,7 @@ public static class ReportBuilder
             SectionDimensions = dims,
             Bom = BomBuilder.Build(d, e.TotalWireM, e.WireGramsPerMetre, BomParts(parts)),
             Tables = e.Tables,
-            Notes = e.Notes.Concat(parts.Parts.SelectMany(p => p.Notes.Select(n => $"{p.Name}: {n}"))).ToArray(),
+            Notes = e.Notes.Concat(parts.Parts.SelectMany(p => p.Notes.Select(n => n.StartsWith(p.Name, StringComparison.Ordinal) ? n : $"{p.Name}: {n}"))).ToArray(),
             Previews = previews ?? [],
         };
     }

@@ -41,17 +41,8 @@ public static class ResultsBuilder
         };
     }
 
-    /// <summary>The role's word in the results (the role's own part name for the spacers).</summary>
-    private static string RoleWord(PartRole role) => role switch
-    {
-        PartRole.Rotor => "rotor",
-        PartRole.BackIron => "back-iron",
-        PartRole.Former => "former",
-        PartRole.Stator => "stator",
-        PartRole.HubSpacer => "hub-spacer",
-        PartRole.GapGauge => "gap-gauge",
-        _ => "rim-spacer",
-    };
+    /// <summary>The role's word in the results: the role's part name without a side (rotor, stator, gap-gauge, ...).</summary>
+    private static string RoleWord(PartRole role) => PartNames.Of(new PartId(role));
 
     public static OperatingSection OperatingOf(MachineModel d, ElectricalResult e)
     {

@@ -27,6 +27,6 @@ public class PipelineEvaluatorTests
         Assert.Equal(ev.Checks.StatusText, o.Status);
         Assert.Equal(ev.Electrical.Phase!.EmfRmsV, o.Metrics[SweepMetrics.PhaseEmfRms]);
         Assert.Equal(ev.Electrical.LineEmfRmsV, o.Metrics[SweepMetrics.LineEmfRms]);
-        Assert.Equal(ev.Checks.WithId("running-gap").Min(c => c.Value), o.Metrics[SweepMetrics.MinRunningGap]);
+        Assert.Equal(ev.Checks.WithId("running-gap").Min(c => c.Value), o.Metrics[SweepMetrics.WorstRunningGap]);
     }
 }

@@ -46,14 +46,14 @@ public class SweepCommandTests
         var csv = File.ReadAllText(w.File("s.csv")).Split("\r\n", StringSplitOptions.RemoveEmptyEntries);
         Assert.Equal(7, csv.Length);
         // Sorted by closeness of the phase EMF to 3 V: distances never decrease down the table.
-        int col = Array.IndexOf(csv[0].Split(','), "phase.emf_rms_v");
+        int col = Array.IndexOf(csv[0].Split(','), "electrical.phase.emf_rms_v");
         var d3 = csv.Skip(1).Select(l => Math.Abs(double.Parse(l.Split(',')[col], System.Globalization.CultureInfo.InvariantCulture) - 3)).ToList();
         for (int i = 1; i < d3.Count; i++) Assert.True(d3[i] >= d3[i - 1]);
         // More turns give more EMF (Faraday: e = N dPhi/dt; the larger winding links a little less flux per turn, so not exactly in proportion).
         var json = PartforgeProcess.Run(w.Path, TimeSpan.FromSeconds(300), "sweep", d, "--vary", "coils.turns=100..140:20", "--json", "--quiet");
         Assert.Equal(0, json.ExitCode);
         using var doc = JsonDocument.Parse(json.Stdout);
-        var emf = doc.RootElement.GetProperty("variants").EnumerateArray().Select(v => v.GetProperty("results").GetProperty("phase.emf_rms_v").GetDouble()).ToList();
+        var emf = doc.RootElement.GetProperty("variants").EnumerateArray().Select(v => v.GetProperty("results").GetProperty("electrical.phase.emf_rms_v").GetDouble()).ToList();
         Assert.Equal(3, emf.Count);
         Assert.True(emf[0] < emf[1] && emf[1] < emf[2]);
     }

@@ -63,8 +63,11 @@ public class SweepPlanTests
     public void Target_keys_are_checked_with_a_suggestion()
     {
         Assert.Null(SweepTarget.Parse("phase.emf_rms=12", out var err));
-        Assert.Contains("did you mean 'phase.emf_rms_v'", err);
-        Assert.NotNull(SweepTarget.Parse("phase.emf_rms_v=12", out err));
+        Assert.Contains("did you mean 'electrical.phase.emf_rms_v'", err);
+        Assert.NotNull(SweepTarget.Parse("electrical.phase.emf_rms_v=12", out err));
+        Assert.Null(err);
+        // The short name of earlier versions is read as an alias of the results path.
+        Assert.Equal("electrical.phase.emf_rms_v", SweepTarget.Parse("phase.emf_rms_v=12", out err)!.Key);
         Assert.Null(err);
         Assert.Null(SweepTarget.Parse("phase.emf_rms_v=abc", out err));
     }

@@ -97,7 +97,7 @@ public sealed class AssemblyThreeMfTests : IDisposable
 
         // wind-duo: two rotors, a back iron behind each, 12 formers (machine.coils), one stator, one hub spacer.
         string[] expected = ["rotor-front", "rotor-back", "back-iron-0", "back-iron-1",
-            .. Enumerable.Range(0, 12).Select(k => $"former-{k}"), "stator", "spacer"];
+            .. Enumerable.Range(0, 12).Select(k => $"former-{k}"), "stator", "hub-spacer"];
         Assert.Equal(set.Parts.Sum(p => p.Quantity), objects.Count);
         Assert.Equal(expected, objects.Select(o => o.Name));
         Assert.Equal(objects.Count, objects.Select(o => o.Name).Distinct(StringComparer.Ordinal).Count());
@@ -157,7 +157,7 @@ public sealed class AssemblyThreeMfTests : IDisposable
             ["back-iron-0"] = (11.8 + 2 * e, 13.8 + 2 * e),
             ["back-iron-1"] = (-13.8 - 2 * e, -11.8 - 2 * e),
             ["stator"] = (-3.8, 3.8),
-            ["spacer"] = (-5.3, 5.3),
+            ["hub-spacer"] = (-5.3, 5.3),
         };
         for (int k = 0; k < 12; k++) expected[$"former-{k}"] = (-3.8, 3.8);
         foreach (var o in objects)
