@@ -1,3 +1,4 @@
+using CsCheck;
 using PartForge.Geometry.Layout;
 using PartForge.Geometry.Primitives;
 using PartForge.Geometry.Profiles;
@@ -141,6 +142,40 @@ public class SheetNesterTests
         Assert.Single(res.Bins);
         Assert.Equal(1, res.Bins[0].StockIndex);
         LayoutChecks.AssertValid(res, parts, 2, 2);
+    }
+
+    [Fact]
+    public void RandomScenesAreAlwaysValid()
+    {
+        // Random parts (shapes, sizes, quantities, placed at random local offsets), spacing, sheet sizes and
+        // rotation sets: every layout must pass the same exact checks.
+        Gen.Int.Sample(seed =>
+        {
+            var rnd = new Random(seed);
+            var parts = new List<(LayoutItem Item, double Area)>();
+            int kinds = 1 + rnd.Next(5);
+            for (int k = 0; k < kinds; k++)
+            {
+                double u = 5 + 60 * rnd.NextDouble();
+                (Profile P, double A) shape = rnd.Next(5) switch
+                {
+                    0 => TestShapes.DiscWithHoles(u, 0.1 * u, 0.05 * u),
+                    1 => TestShapes.PolygonDisc(u, 3 + rnd.Next(300), 0.2 * u),
+                    2 => TestShapes.Ring(u, 0.6 * u),
+                    3 => TestShapes.Fork(u, 0.7 * u, 0.2 * u, 0.4 * u),
+                    _ => TestShapes.Rectangle(u, u * (0.1 + rnd.NextDouble())),
+                };
+                // Part-local origin anywhere: the layout must not assume a centred part.
+                var shift = new Vec2(rnd.NextDouble() * 100 - 50, rnd.NextDouble() * 100 - 50);
+                var moved = new Profile(shape.P.Outers.Select(c => c.Translated(shift)).ToArray(), shape.P.Holes.Select(c => c.Translated(shift)).ToArray());
+                parts.Add((new LayoutItem($"p{k}", moved, 1 + rnd.Next(6)), shape.A));
+            }
+            double spacing = rnd.Next(3) == 0 ? 0 : 5 * rnd.NextDouble();
+            var sheets = Enumerable.Range(0, 1 + rnd.Next(2)).Select(_ => new SheetStock(60 + 300 * rnd.NextDouble(), 60 + 300 * rnd.NextDouble(), rnd.Next(3) == 0 ? 1 + rnd.Next(3) : null)).ToArray();
+            var rotations = rnd.Next(3) switch { 0 => LayoutRotations.None, 1 => LayoutRotations.QuarterTurns, _ => LayoutRotations.Every(15 + rnd.Next(60)) };
+            var res = SheetNester.Nest(parts.Select(p => p.Item).ToArray(), sheets, new NestOptions { SpacingMm = spacing, RotationsDeg = rotations }, Fine);
+            LayoutChecks.AssertValid(res, parts, spacing, spacing);
+        }, iter: 40);
     }
 
     [Fact]
