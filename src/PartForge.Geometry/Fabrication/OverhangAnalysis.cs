@@ -3,6 +3,7 @@ using NetTopologySuite.Algorithm.Construct;
 using NetTopologySuite.Geometries;
 using NetTopologySuite.Operation.Overlay;
 using NetTopologySuite.Operation.OverlayNG;
+using NetTopologySuite.Operation.Polygonize;
 using NetTopologySuite.Operation.Union;
 using PartForge.Geometry.Meshes;
 using PartForge.Geometry.Primitives;
@@ -20,7 +21,7 @@ public static class OverhangAnalysis
 {
     /// <summary>
     /// The layered solid's unsupported faces, exactly on its regions: at every level, the layer above minus
-    /// the layer below (all of the layer above when the layer below does not touch it). Each connected piece
+    /// the layer below (all of the layer above when the layer below ends more than the z tolerance lower). Each connected piece
     /// is one region; its span is the largest distance from a point of it to the part of its boundary that
     /// lies on the layer below (where it rests), found with the geometry library's largest-empty-circle
     /// search within <see cref="OverhangOptions.SpanToleranceMm"/>. The lowest layer rests on the bed. Pass
@@ -41,7 +42,7 @@ public static class OverhangAnalysis
             var above = layers[k].Region;
             if (above.IsEmpty) continue;
             var below = layers[k - 1];
-            Region? support = below.Z1 == layers[k].Z0 && !below.Region.IsEmpty ? below.Region : null;
+            Region? support = Math.Abs(below.Z1 - layers[k].Z0) <= options.ZToleranceMm && !below.Region.IsEmpty ? below.Region : null;
             var free = support is null ? above : above.Difference(support);
             var pm = new PrecisionModel(above.Precision.Scale);
             foreach (var poly in free.Polygons)
@@ -151,11 +152,8 @@ public static class OverhangAnalysis
                 z1 = Math.Max(z1, Math.Max(a.Z, Math.Max(b.Z, c.Z)));
             }
             if (area < options.MinAreaMm2) continue;
-            var plan = UnaryUnionOp.Union((NtsGeometry)f.CreateGeometryCollection(members.Select(t => (NtsGeometry)f.CreatePolygon(new[]
-            {
-                XY(pos[tri[3 * t]]), XY(pos[tri[3 * t + 1]]), XY(pos[tri[3 * t + 2]]), XY(pos[tri[3 * t]]),
-            })).Where(p => p.Area > 0).ToArray()));
             bool horizontal = z1 - z0 <= tolZ;
+            var plan = Plan(members, tri, pos, horizontal, area, f);
             NtsGeometry? contact = null;
             if (horizontal)
             {
@@ -185,6 +183,40 @@ public static class OverhangAnalysis
             regions.Add(Describe(plan, z0, area, horizontal, contact, options));
         }
         return new OverhangReport(Ordered(regions));
+    }
+
+    /// <summary>
+    /// A region's triangles in plan. A flat region: its boundary edges (those of one triangle of the region
+    /// only) polygonised, O(n log n), kept when its area matches the triangles'; otherwise, and for sloped
+    /// regions (whose triangles may overlap in plan), the union of the triangles.
+    /// </summary>
+    private static NtsGeometry Plan(List<int> members, int[] tri, List<Vec3> pos, bool horizontal, double area, GeometryFactory f)
+    {
+        if (horizontal)
+        {
+            var count = new Dictionary<long, int>(MixedLongComparer.Instance);
+            foreach (int t in members)
+                for (int k = 0; k < 3; k++)
+                {
+                    long key = EdgeKey(tri[3 * t + k], tri[3 * t + (k + 1) % 3]);
+                    count[key] = count.TryGetValue(key, out int c) ? c + 1 : 1;
+                }
+            var lines = new List<NtsGeometry>();
+            foreach (var (key, c) in count)
+            {
+                if (c != 1) continue;
+                int u = (int)(key >> 32), v = (int)(key & 0xFFFFFFFF);
+                lines.Add(f.CreateLineString(new[] { XY(pos[u]), XY(pos[v]) }));
+            }
+            var pz = new Polygonizer(extractOnlyPolygonal: true);
+            pz.Add(lines);
+            var polys = pz.GetGeometry();
+            if (!polys.IsEmpty && Math.Abs(polys.Area - area) <= 1e-9 * Math.Max(1, area)) return polys;
+        }
+        return UnaryUnionOp.Union((NtsGeometry)f.CreateGeometryCollection(members.Select(t => (NtsGeometry)f.CreatePolygon(new[]
+        {
+            XY(pos[tri[3 * t]]), XY(pos[tri[3 * t + 1]]), XY(pos[tri[3 * t + 2]]), XY(pos[tri[3 * t]]),
+        })).Where(p => p.Area > 0).ToArray()));
     }
 
     private static OverhangRegion Describe(NtsGeometry plan, double z, double area, bool isHorizontal, NtsGeometry? contact, OverhangOptions options)
