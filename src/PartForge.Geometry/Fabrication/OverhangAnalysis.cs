@@ -85,11 +85,9 @@ public static class OverhangAnalysis
         double zMin = double.PositiveInfinity;
         for (int t = 0; t < nt; t++)
         {
-            var (a, b, c) = mesh.Triangle(t);
-            Span<Vec3> corners = stackalloc Vec3[] { a, b, c };
             for (int k = 0; k < 3; k++)
             {
-                var p = corners[k];
+                var p = mesh.Vertices[mesh.Indices[3 * t + k]];
                 if (!ids.TryGetValue(p, out int id)) { id = pos.Count; ids[p] = id; pos.Add(p); }
                 tri[3 * t + k] = id;
                 zMin = Math.Min(zMin, p.Z);
