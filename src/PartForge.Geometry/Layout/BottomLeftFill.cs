@@ -98,6 +98,9 @@ internal sealed class BottomLeftFill
         public required double H { get; init; }
         public List<(int Item, int Copy, int Rot, Vec2 T, int Order)> Placed { get; } = new();
         public HashSet<(int, int)> Fails { get; } = new();
+        /// <summary>Per moving part and rotation: the placed parts whose NFP lies wholly inside the others'
+        /// or outside the IFP, so it can offer no position now or later (it stays in the containment tests).</summary>
+        public Dictionary<(int, int), HashSet<int>> Buried { get; } = new();
         public double PartArea { get; set; }
     }
 
@@ -161,7 +164,7 @@ internal sealed class BottomLeftFill
                 var g = ConvexPolygon.Rotated(grown, deg);
                 // A rotation that maps the layout polygon onto one already listed (a disc turned by a quarter)
                 // can't place the part anywhere new: only the first is kept.
-                if (list.Any(o => o.Min == min && o.Max == max && o.Grown.AsSpan().SequenceEqual(g))) continue;
+                if (list.Any(o => SameShape(o, min, max, g))) continue;
                 var (gMin, gMax) = ConvexPolygon.Bounds(g);
                 list.Add(new Shape
                 {
@@ -173,6 +176,21 @@ internal sealed class BottomLeftFill
 
         var engine = new BottomLeftFill(shapes, area, edgeMarginMm);
         return engine.Fill(items, stocks);
+    }
+
+    /// <summary>
+    /// True when a rotation gives (up to 1e-9 mm, rounding of the rotation) the same bounds and layout
+    /// polygon as an earlier one; skipping it only gives up positions that the earlier one already offers.
+    /// </summary>
+    private static bool SameShape(Shape o, Vec2 min, Vec2 max, Vec2[] g)
+    {
+        const double tol = 1e-9;
+        if ((o.Min - min).Length > tol || (o.Max - max).Length > tol || o.Grown.Length != g.Length) return false;
+        int n = g.Length, shift = -1;
+        for (int i = 0; i < n && shift < 0; i++) if ((g[i] - o.Grown[0]).Length <= tol) shift = i;
+        if (shift < 0) return false;
+        for (int i = 0; i < n; i++) if ((g[(i + shift) % n] - o.Grown[i]).Length > tol) return false;
+        return true;
     }
 
     private static List<double> NormaliseRotations(IReadOnlyList<double> rotationsDeg)
@@ -269,8 +287,10 @@ internal sealed class BottomLeftFill
 
         // The NFPs that reach into the IFP.
         var active = new List<(Nfp N, Vec2 T)>();
-        foreach (var p in bin.Placed)
+        var placedIndex = new List<int>();
+        for (int pi = 0; pi < bin.Placed.Count; pi++)
         {
+            var p = bin.Placed[pi];
             var a = _shapes[p.Item][p.Rot];
             // Box of the NFP: A's box minus B's box.
             double x0 = p.T.X + a.GrownMin.X - s.GrownMax.X, x1 = p.T.X + a.GrownMax.X - s.GrownMin.X;
@@ -278,88 +298,187 @@ internal sealed class BottomLeftFill
             // Touching or apart: no point more than eps inside it is in the IFP (grown by eps).
             if (x1 <= lo.X || x0 >= hi.X || y1 <= lo.Y || y0 >= hi.Y) continue;
             active.Add((NfpOf(p.Item, p.Rot, item, rot), p.T));
+            placedIndex.Add(pi);
         }
+        var grid = new NfpGrid(active, lo, hi);
+        if (!bin.Buried.TryGetValue((item, rot), out var buried)) bin.Buried[(item, rot)] = buried = new HashSet<int>();
 
         bool InIfp(Vec2 q) => q.X >= lo.X - EpsMm && q.X <= hi.X + EpsMm && q.Y >= lo.Y - EpsMm && q.Y <= hi.Y + EpsMm;
-        int lastBlocker = 0;
-        // Free: in the IFP and strictly inside no NFP (except `skip`, the NFP the point is a vertex of).
-        bool Free(Vec2 q, int skip)
+        Vec2? best = null;
+        bool Better(Vec2 q) => best is not { } b || q.Y < b.Y || (q.Y == b.Y && q.X < b.X);
+        void Offer(Vec2 q, int skip)
         {
-            if (!InIfp(q)) return false;
-            if (active.Count == 0) return true;
-            if (lastBlocker != skip && active[lastBlocker].N.StrictlyInside(q - active[lastBlocker].T)) return false;
-            for (int k = 0; k < active.Count; k++)
-            {
-                if (k == lastBlocker || k == skip) continue;
-                if (active[k].N.StrictlyInside(q - active[k].T)) { lastBlocker = k; return false; }
-            }
-            return true;
+            if (InIfp(q) && Better(q) && grid.CoveredBy(q, skip) < 0) best = q;
         }
-        Vec2 Clamp(Vec2 q) => new(Math.Clamp(q.X, lo.X, hi.X), Math.Clamp(q.Y, lo.Y, hi.Y));
 
-        // Candidates: IFP corners, NFP vertices, NFP edges across the IFP's sides.
-        var cands = new List<(Vec2 P, int Owner)> { (lo, -1), (new(hi.X, lo.Y), -1), (new(lo.X, hi.Y), -1), (hi, -1) };
+        // Candidates: IFP corners, NFP vertices, NFP edges across the IFP's sides. An edge that lies inside
+        // one or two other NFPs (its ends inside them and the parts inside each overlapping) offers nothing;
+        // an NFP whose every edge is so (or outside the IFP) is buried for good, as parts are only ever added.
+        Offer(lo, -1); Offer(new Vec2(hi.X, lo.Y), -1); Offer(new Vec2(lo.X, hi.Y), -1); Offer(hi, -1);
+        var live = new List<(Vec2 A, Vec2 B, int Owner)>();
+        var side = new List<(Vec2, int)>();
         for (int k = 0; k < active.Count; k++)
         {
+            if (buried.Contains(placedIndex[k])) continue;
             var (n, t) = active[k];
-            for (int i = 0; i < n.P.Length; i++)
+            int m = n.P.Length;
+            var cov = new int[m];
+            for (int i = 0; i < m; i++)
             {
-                Vec2 a = n.P[i] + t, b = n.P[(i + 1) % n.P.Length] + t;
-                if (InIfp(a)) cands.Add((a, k));
-                AddSideCrossings(a, b, lo, hi, k, cands);
+                Vec2 a = n.P[i] + t;
+                cov[i] = grid.CoveredBy(a, k);
+                if (cov[i] == -1 && InIfp(a) && Better(a)) best = a;
             }
+            int liveBefore = live.Count;
+            for (int i = 0; i < m; i++)
+            {
+                int j = (i + 1) % m;
+                Vec2 a = n.P[i] + t, b = n.P[j] + t;
+                if ((a.X < lo.X - EpsMm && b.X < lo.X - EpsMm) || (a.X > hi.X + EpsMm && b.X > hi.X + EpsMm)
+                    || (a.Y < lo.Y - EpsMm && b.Y < lo.Y - EpsMm) || (a.Y > hi.Y + EpsMm && b.Y > hi.Y + EpsMm)) continue;
+                if (cov[i] >= 0 && cov[j] >= 0 && grid.SegmentCovered(a, b, cov[i], cov[j])) continue;
+                live.Add((a, b, k));
+                side.Clear();
+                AddSideCrossings(a, b, lo, hi, k, side);
+                foreach (var (q, owner) in side) Offer(q, owner);
+            }
+            if (live.Count == liveBefore) buried.Add(placedIndex[k]);
         }
-        Vec2? best = FirstFree(cands, Free);
-        // Crossings of NFP edges with each other, below the best so far: a sweep over the edges' boxes.
-        if (active.Count >= 2)
+
+        // Crossings of live NFP edges with each other, below the best so far, between edges that share a grid cell.
+        if (live.Count >= 2)
         {
             double limitY = best is { } b0 ? b0.Y + EpsMm : hi.Y + EpsMm;
-            var edges = new List<(double X0, double X1, double Y0, double Y1, Vec2 A, Vec2 B, int Owner)>();
+            var edges = live.Where(e => Math.Min(e.A.Y, e.B.Y) <= limitY).ToList();
+            foreach (var (e, f) in grid.EdgePairs(edges))
+            {
+                if (e.Owner == f.Owner) continue;
+                if (SegmentCrossing(e.A, e.B, f.A, f.B) is { } x && x.Y <= limitY && InIfp(x) && Better(x) && grid.CoveredBy(x, -1) < 0) best = x;
+            }
+        }
+        return best is { } found ? new Vec2(Math.Clamp(found.X, lo.X, hi.X), Math.Clamp(found.Y, lo.Y, hi.Y)) : null;
+    }
+
+    /// <summary>
+    /// A uniform grid over the IFP holding the active NFPs by their boxes, so that "is this point inside
+    /// some NFP" looks at the few NFPs of one cell, and edge pairs are only formed within a cell.
+    /// </summary>
+    private sealed class NfpGrid
+    {
+        private readonly List<(Nfp N, Vec2 T)> _active;
+        private readonly double _x0, _y0, _cell;
+        private readonly int _cols, _rows;
+        private readonly int[] _start, _items;
+        private int _last;
+
+        public NfpGrid(List<(Nfp N, Vec2 T)> active, Vec2 lo, Vec2 hi)
+        {
+            _active = active;
+            _x0 = lo.X - 2 * EpsMm;
+            _y0 = lo.Y - 2 * EpsMm;
+            double w = hi.X - lo.X + 4 * EpsMm, h = hi.Y - lo.Y + 4 * EpsMm;
+            // Cells about the size of a typical NFP box, at most 128 a side.
+            double typical = active.Count == 0 ? Math.Max(w, h) : active.Average(a => Math.Max(a.N.Max.X - a.N.Min.X, a.N.Max.Y - a.N.Min.Y));
+            _cell = Math.Max(Math.Max(w, h) / 128, Math.Max(typical, 1e-6));
+            _cols = Math.Max(1, (int)Math.Ceiling(w / _cell));
+            _rows = Math.Max(1, (int)Math.Ceiling(h / _cell));
+            int cells = _cols * _rows;
+            _start = new int[cells + 1];
+            foreach (var (n, t) in active)
+                ForCells(n.Min + t, n.Max + t, cell => _start[cell + 1]++);
+            for (int c = 1; c <= cells; c++) _start[c] += _start[c - 1];
+            _items = new int[_start[cells]];
+            var fill = (int[])_start.Clone();
             for (int k = 0; k < active.Count; k++)
             {
                 var (n, t) = active[k];
-                for (int i = 0; i < n.P.Length; i++)
-                {
-                    Vec2 a = n.P[i] + t, b = n.P[(i + 1) % n.P.Length] + t;
-                    double ex0 = Math.Min(a.X, b.X), ex1 = Math.Max(a.X, b.X), ey0 = Math.Min(a.Y, b.Y), ey1 = Math.Max(a.Y, b.Y);
-                    if (ey0 > limitY || ey1 < lo.Y - EpsMm || ex1 < lo.X - EpsMm || ex0 > hi.X + EpsMm) continue;
-                    edges.Add((ex0, ex1, ey0, ey1, a, b, k));
-                }
+                int kk = k;
+                ForCells(n.Min + t, n.Max + t, cell => _items[fill[cell]++] = kk);
             }
-            edges.Sort((p, q) => p.X0 != q.X0 ? p.X0.CompareTo(q.X0) : p.Owner != q.Owner ? p.Owner.CompareTo(q.Owner) : p.Y0.CompareTo(q.Y0));
-            var cross = new List<(Vec2 P, int Owner)>();
+        }
+
+        private void ForCells(Vec2 min, Vec2 max, Action<int> visit)
+        {
+            var (c0, r0) = CellOf(min);
+            var (c1, r1) = CellOf(max);
+            for (int r = r0; r <= r1; r++)
+                for (int c = c0; c <= c1; c++) visit(r * _cols + c);
+        }
+
+        private (int C, int R) CellOf(Vec2 p) =>
+            (Math.Clamp((int)Math.Floor((p.X - _x0) / _cell), 0, _cols - 1), Math.Clamp((int)Math.Floor((p.Y - _y0) / _cell), 0, _rows - 1));
+
+        /// <summary>An active NFP that holds q strictly (other than `skip`), or -1.</summary>
+        public int CoveredBy(Vec2 q, int skip)
+        {
+            if (_active.Count == 0) return -1;
+            if (_last != skip && _last < _active.Count && Inside(_last, q)) return _last;
+            var (c, r) = CellOf(q);
+            int cell = r * _cols + c;
+            for (int i = _start[cell]; i < _start[cell + 1]; i++)
+            {
+                int k = _items[i];
+                if (k == skip || k == _last) continue;
+                if (Inside(k, q)) { _last = k; return k; }
+            }
+            return -1;
+        }
+
+        public bool Inside(int k, Vec2 q) => _active[k].N.StrictlyInside(q - _active[k].T);
+
+        /// <summary>
+        /// True when the segment from a (strictly inside NFP ka) to b (strictly inside NFP kb) lies strictly
+        /// inside their union: the parameter ranges inside each (Cyrus-Beck clipping against the convex
+        /// polygons, with the eps margin) overlap.
+        /// </summary>
+        public bool SegmentCovered(Vec2 a, Vec2 b, int ka, int kb)
+        {
+            if (ka == kb) return true;
+            if (Inside(ka, b) || Inside(kb, a)) return true;
+            var (_, aHi) = Clip(ka, a, b);
+            var (bLo, _) = Clip(kb, a, b);
+            return aHi > bLo;
+        }
+
+        private (double Lo, double Hi) Clip(int k, Vec2 a, Vec2 b)
+        {
+            var (n, t) = _active[k];
+            Vec2 p = a - t, d = b - a;
+            double lo = double.NegativeInfinity, hi = double.PositiveInfinity;
+            for (int i = 0; i < n.P.Length; i++)
+            {
+                double f0 = n.D[i].Cross(p - n.P[i]) - EpsMm * n.Len[i];
+                double df = n.D[i].Cross(d);
+                if (df == 0) { if (f0 <= 0) return (1, 0); continue; }
+                double root = -f0 / df;
+                if (df > 0) lo = Math.Max(lo, root); else hi = Math.Min(hi, root);
+                if (lo >= hi) return (1, 0);
+            }
+            return (lo, hi);
+        }
+
+        /// <summary>Pairs of edges that share a cell (a pair may come more than once).</summary>
+        public IEnumerable<((Vec2 A, Vec2 B, int Owner) E, (Vec2 A, Vec2 B, int Owner) F)> EdgePairs(List<(Vec2 A, Vec2 B, int Owner)> edges)
+        {
+            var byCell = new Dictionary<int, List<int>>();
             for (int i = 0; i < edges.Count; i++)
             {
-                var e = edges[i];
-                for (int j = i + 1; j < edges.Count && edges[j].X0 <= e.X1 + EpsMm; j++)
+                var (a, b, _) = edges[i];
+                int ii = i;
+                ForCells(new Vec2(Math.Min(a.X, b.X), Math.Min(a.Y, b.Y)), new Vec2(Math.Max(a.X, b.X), Math.Max(a.Y, b.Y)), cell =>
                 {
-                    var f = edges[j];
-                    if (f.Owner == e.Owner || f.Y0 > e.Y1 + EpsMm || f.Y1 < e.Y0 - EpsMm) continue;
-                    if (SegmentCrossing(e.A, e.B, f.A, f.B) is { } x && x.Y <= limitY && InIfp(x)) cross.Add((x, -1));
-                }
+                    if (!byCell.TryGetValue(cell, out var list)) byCell[cell] = list = new List<int>();
+                    list.Add(ii);
+                });
             }
-            if (FirstFree(cross, Free) is { } c && (best is not { } bb || c.Y < bb.Y || (c.Y == bb.Y && c.X < bb.X))) best = c;
+            foreach (var cell in byCell.Keys.OrderBy(k => k))
+            {
+                var list = byCell[cell];
+                for (int i = 0; i < list.Count; i++)
+                    for (int j = i + 1; j < list.Count; j++)
+                        yield return (edges[list[i]], edges[list[j]]);
+            }
         }
-        return best is { } found ? Clamp(found) : null;
-    }
-
-    /// <summary>The lowest, then leftmost free candidate: sorted by y (a primitive-key sort), then the
-    /// candidates of the first y with a free one are all looked at for the leftmost.</summary>
-    private static Vec2? FirstFree(List<(Vec2 P, int Owner)> cands, Func<Vec2, int, bool> free)
-    {
-        var keys = new double[cands.Count];
-        var idx = new int[cands.Count];
-        for (int i = 0; i < keys.Length; i++) { keys[i] = cands[i].P.Y; idx[i] = i; }
-        Array.Sort(keys, idx);
-        Vec2? best = null;
-        for (int i = 0; i < keys.Length; i++)
-        {
-            if (best is { } b && keys[i] > b.Y) break;
-            var (p, owner) = cands[idx[i]];
-            if (best is { } b2 && p.X >= b2.X) continue;
-            if (free(p, owner)) best = p;
-        }
-        return best;
     }
 
     private Nfp NfpOf(int a, int ra, int b, int rb)
