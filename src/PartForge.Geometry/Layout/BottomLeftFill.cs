@@ -154,7 +154,15 @@ internal sealed class BottomLeftFill
             var outers = items[i].Profile.Outers;
             area[i] = LayoutOutline.Area(items[i].Profile);
             if (!(area[i] > 0) || !double.IsFinite(area[i])) throw new ArgumentException($"item '{items[i].Id}' encloses no area", nameof(items));
-            var hull = ConvexPolygon.Hull(LayoutOutline.CoveringPoints(outers, tol / 3));
+            Vec2[] hull;
+            try
+            {
+                hull = ConvexPolygon.Hull(LayoutOutline.CoveringPoints(outers, tol / 3));
+            }
+            catch (ArgumentException ex)
+            {
+                throw new ArgumentException($"item '{items[i].Id}': {ex.Message}", nameof(items), ex);
+            }
             hull = ConvexPolygon.SimplifyOutward(hull, tol / 3);
             var grown = ConvexPolygon.Inflate(hull, spacingMm / 2, tol / 3);
             var list = new List<Shape>(rotations.Count);
