@@ -155,8 +155,8 @@ public static class ContourOffset
         return Contour.FromSegments(segs);
     }
 
-    /// <summary>A point where two pieces that do not follow each other cross or touch, if any (a sweep over the pieces' boxes sorted by x).</summary>
-    private static Vec2? FindSelfCrossing(Contour c)
+    /// <summary>A point where two pieces that do not follow each other cross or touch, if any (a sweep over the pieces' boxes sorted by x). Also used by the corner reliefs to check their result.</summary>
+    internal static Vec2? FindSelfCrossing(Contour c)
     {
         var segs = c.Segments;
         int n = segs.Count;
