@@ -22,11 +22,11 @@ try
         Console.Out.Flush();
         guard.Token.WaitHandle.WaitOne(TimeSpan.FromSeconds(60));
     });
-    Console.Error.WriteLine("interrupt-probe: no signal arrived");
-    return 1;
+    if (!guard.Interrupted) Console.Error.WriteLine("interrupt-probe: no signal arrived");
+    return guard.Resolve(1);
 }
 catch (OperationCanceledException) when (guard.Interrupted)
 {
     // The way the command line is to do it: print nothing more; the guard's line and exit code stand.
-    return guard.WaitForExitCode();
+    return guard.Resolve(3);
 }

@@ -12,8 +12,9 @@ namespace PartForge.Formats.Io;
 /// using var guard = InterruptGuard.Install();
 /// using var tx = guard.Begin(outputDir);        // or OutputTransaction.Begin(outputDir, guard.Token)
 /// ... tx.Stage(...) ...; tx.Commit(info);
-/// // When guard.Token is cancelled, the guard prints the line and ends the process; code that catches the
-/// // OperationCanceledException first should print nothing and return guard.WaitForExitCode().
+/// // When guard.Token is cancelled, the guard prints the line and ends the process. Main returns through
+/// // guard.Resolve(code); code that catches the OperationCanceledException first prints nothing and
+/// // returns guard.Resolve(anything).
 /// </code>
 /// </summary>
 public sealed class InterruptGuard : IDisposable
@@ -109,6 +110,13 @@ public sealed class InterruptGuard : IDisposable
         _done.Set();
         _exit(_exitCode);
     }
+
+    /// <summary>
+    /// The exit code for the command line to return: <paramref name="exitCode"/>, or, once an interrupt has
+    /// arrived, the signal's (after its line is written). Returning from Main ends the process at once, so
+    /// Main returns through this and an interrupt that arrives as the work ends keeps its code and line.
+    /// </summary>
+    public int Resolve(int exitCode) => Interrupted ? WaitForExitCode() : exitCode;
 
     /// <summary>Waits until an interrupt has been handled (its line written) and returns its exit code.</summary>
     public int WaitForExitCode()

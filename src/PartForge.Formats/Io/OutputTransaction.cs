@@ -359,6 +359,9 @@ public sealed partial class OutputTransaction : IDisposable
         lock (_gate)
         {
             _writing.Remove(name);
+            // The token reads cancelled before its callbacks (the rollback) have run: a file finished in that
+            // moment must not count as staged.
+            if (_state == State.Open && _cancel.IsCancellationRequested) RollbackLocked();
             if (_state != State.Open)
             {
                 // Rolled back (cancelled) while this file was being written: it goes too.
