@@ -72,7 +72,9 @@ public static class DesignLoader
             {
                 int offset = start + Math.Max(0, ex.Index);
                 int line = 1;
-                for (int i = 0; i < offset && i < bytes.Length; i++) if (bytes[i] == (byte)'\n') line++;
+                // A line ends at LF, CR LF or a lone CR, as in the YAML reader.
+                for (int i = 0; i < offset && i < bytes.Length; i++)
+                    if (bytes[i] == (byte)'\n' || (bytes[i] == (byte)'\r' && (i + 1 >= bytes.Length || bytes[i + 1] != (byte)'\n'))) line++;
                 string b = ex.BytesUnknown is { Length: > 0 } u ? $"0x{u[0]:X2}" : "a byte";
                 return new DesignSource(shown, null, [new DesignError
                 {

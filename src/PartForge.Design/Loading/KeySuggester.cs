@@ -27,12 +27,14 @@ public static class KeySuggester
 
     /// <summary>
     /// The candidate nearest to <paramref name="word"/>, or null when none is plausibly meant (distance more
-    /// than half the word's length, at least 2). Ties go to the earlier candidate.
+    /// than half the word's length, at least 2). Ties go to the earlier candidate. Look-alike characters count
+    /// as the letter they pass for and invisible ones are ignored (Cyrillic 'о' in "pоles" finds "poles").
     /// </summary>
     public static string? Nearest(string word, IEnumerable<string> candidates)
     {
         string? best = null;
         int bestD = int.MaxValue;
+        word = HiddenCharacters.Skeleton(word);
         string w = word.ToLowerInvariant();
         foreach (var c in candidates)
         {
@@ -46,6 +48,7 @@ public static class KeySuggester
     /// <summary>Suggestion text for an unknown key in a section (also finds a key that belongs to another section).</summary>
     internal static string? ForKey(string key, SectionSpec section, string prefix)
     {
+        key = HiddenCharacters.Skeleton(key);
         var near = Nearest(key, section.Keys.Select(k => k.Key));
         if (near != null) return $"did you mean '{near}'?";
         if (prefix.Length == 0 || section == SectionSpec.Root)

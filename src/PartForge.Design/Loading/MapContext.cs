@@ -17,15 +17,32 @@ internal sealed class MapContext(string file)
 
     public void Add(DesignError e) => Errors.Add(e);
 
-    /// <summary>An error located at a node.</summary>
+    /// <summary>
+    /// An error located at a node. A key path or value with characters outside printable ASCII is shown with
+    /// them as code points (<c>p\u043Eles</c>), and the suggestion starts by naming them.
+    /// </summary>
     public DesignError At(YNode? node, string path, string message, string kind, string? value = null, string? allowed = null, string? suggestion = null) => new()
     {
         File = File,
         Line = node == null || node.FromOverride ? 0 : node.Line,
         Column = node == null || node.FromOverride ? 0 : node.Column,
         FromOverride = node?.FromOverride ?? false,
-        KeyPath = path, Message = message, Kind = kind, Value = value, Allowed = allowed, Suggestion = suggestion,
+        KeyPath = HiddenCharacters.Reveal(path),
+        Message = message, Kind = kind,
+        Value = value == null ? null : HiddenCharacters.Reveal(value),
+        Allowed = allowed,
+        Suggestion = Join(Note("the key", path.Contains('.') ? path[(path.LastIndexOf('.') + 1)..] : path), value == null ? null : Note("the value", value), suggestion),
     };
+
+    /// <summary>"the key contains U+043E CYRILLIC SMALL LETTER O where 'o' looks the same", or null for plain ASCII.</summary>
+    public static string? Note(string what, string text) => HiddenCharacters.Describe(text) is { } d ? what + " " + d : null;
+
+    /// <summary>The non-null parts joined with "; ", or null when there are none.</summary>
+    public static string? Join(params string?[] parts)
+    {
+        var present = parts.Where(p => !string.IsNullOrEmpty(p)).ToArray();
+        return present.Length == 0 ? null : string.Join("; ", present);
+    }
 
     /// <summary>
     /// An error about a key path, placed at the first of the given paths (or their parents) that is in the file:

@@ -1,4 +1,6 @@
 using System.Globalization;
+using System.Reflection;
+using PartForge.Design.Model;
 using PartForge.Design.Keys;
 
 namespace PartForge.Design.Loading;
@@ -24,7 +26,15 @@ internal static class NodeMapper
             string path = prefix.Length == 0 ? key : prefix + "." + key;
             if (seen.TryGetValue(key, out var first))
             {
-                ctx.Add(ctx.At(ks, path, $"is given twice (first on line {first.Line}); keep one", "duplicate"));
+                ctx.Add(ctx.At(ks, path, $"is given twice (first on line {first.Line}, again on line {ks.Line})", "duplicate", suggestion: "keep one"));
+                // The second value is not used, but its own mistakes are reported too, so that removing either
+                // copy leaves no surprise; its keys are not recorded (the first copy's are).
+                if (spec.Find(key) is { } again)
+                {
+                    var scratch = new MapContext(ctx.File);
+                    TryValue(again, entry.Value, path, scratch, out _);
+                    foreach (var e in scratch.Errors) ctx.Add(e);
+                }
                 continue;
             }
             seen[key] = ks;
@@ -67,7 +77,8 @@ internal static class NodeMapper
                     // "back_iron:" with nothing: an optional section stays absent; a section with defaults keeps them.
                     return true;
                 default:
-                    ctx.Add(ctx.At(node, path, $"{Describe(node)} is not allowed here", "type", allowed: "a section of keys (indented 'key: value' lines or { key: value })"));
+                    ctx.Add(ctx.At(node, path, $"{Describe(node)} is not allowed here", "type", allowed: "a section of keys (indented 'key: value' lines or { key: value })",
+                        suggestion: MapContext.Join(node is YScalar hs ? MapContext.Note("the value", hs.Text) : null, MissingSpaceHint(node))));
                     return false;
             }
         }
@@ -147,6 +158,21 @@ internal static class NodeMapper
                     ctx.Add(ctx.At(sc, path, "is not allowed", "pattern", sc.Shown, k.AllowedText()));
                     return false;
                 }
+                if (k.Property.GetCustomAttribute<OutputNameAttribute>() != null)
+                {
+                    if (text.Length > OutputNameAttribute.MaxLength)
+                    {
+                        ctx.Add(ctx.At(sc, path, $"is {text.Length} characters long; output file names are made from it, so it may have at most {OutputNameAttribute.MaxLength}",
+                            "range", sc.Shown, k.AllowedText(), "shorten it"));
+                        return false;
+                    }
+                    if (OutputNameAttribute.IsReserved(text))
+                    {
+                        ctx.Add(ctx.At(sc, path, $"is a device name on Windows, where a file '{text}.3mf' cannot be made", "range", sc.Shown, k.AllowedText(),
+                            $"choose another name, for example '{text}-1'"));
+                        return false;
+                    }
+                }
                 value = text;
                 return true;
             }
@@ -173,11 +199,22 @@ internal static class NodeMapper
         return double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out value);
     }
 
+    /// <summary>"poles:12" where a section was expected: the space after the colon is missing (or is not a plain space).</summary>
+    private static string? MissingSpaceHint(YNode node)
+    {
+        if (node is not YScalar { Quoted: false } s) return null;
+        int colon = s.Text.IndexOf(':');
+        if (colon <= 0 || colon + 1 >= s.Text.Length || s.Text[colon + 1] == ' ') return null;
+        string key = s.Text[..colon], rest = s.Text[(colon + 1)..].TrimStart(' ', '\u00A0', '\u2007', '\u202F', '\t');
+        if (!key.All(ch => char.IsAsciiLetterOrDigit(ch) || ch == '_')) return null;
+        return $"if '{key}' is meant as a key, put a plain space after its ':' ({key}: {HiddenCharacters.Reveal(rest)})";
+    }
+
     private static string Describe(YNode node) => node switch
     {
         YMapping => "a section",
         YSequence => "a list",
-        YScalar s => s.Shown,
+        YScalar s => HiddenCharacters.Reveal(s.Shown),
         _ => "this value",
     };
 }

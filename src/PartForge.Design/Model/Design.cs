@@ -10,8 +10,8 @@ public sealed class Design
     [RequiredKey, Range(1, 1), Doc("Design file format version; must be 1.")]
     public int Partforge { get; init; } = 1;
 
-    [RequiredKey, Pattern("^[a-z0-9]+(-[a-z0-9]+)*$"),
-     Doc("Lowercase letters, digits and '-'; used in output file names.")]
+    [RequiredKey, Pattern("^[a-z0-9]+(-[a-z0-9]+)*$"), OutputName,
+     Doc("Lowercase letters, digits and '-', at most 64 characters, not a device name (con, prn, aux, nul, com0-com9, lpt0-lpt9); used in output file names.")]
     public string Name { get; init; } = "design";
 
     public Machine Machine { get; init; } = new();
