@@ -81,7 +81,12 @@ internal sealed partial class Plant
             var t = _ports[k];
             if (_open[k]) { m.Path[k] = 0; continue; }
             if (t.Load is not null) { m.Path[k] = 2; continue; }
-            if (_alg[k]) continue;
+            if (_alg[k])
+            {
+                // No inductance: a path the new command removed just ends (no stored energy to cut).
+                if (m.Path[k] == 1 && t.Positive(m.Cmd[k]) is null || m.Path[k] == -1 && t.Negative(m.Cmd[k]) is null) m.Path[k] = 0;
+                continue;
+            }
             int ix = Idx[k];
             double i = y[ix];
             if (m.Path[k] != 0 && m.Path[k] * i <= 0) { i = 0; y[ix] = 0; }

@@ -75,21 +75,25 @@ internal sealed partial class Plant : IRightHandSide
         AbsoluteOnly[Theta] = true; // only the angle within a revolution matters, not how many turns
         Atol[Omega] = rtol * w;
         if (Vc >= 0) Atol[Vc] = rtol * vb;
-        double energy = 0.5 * _j * w * w + 0.5 * _cap * vb * vb, iSum = 0;
+        // The integrals (energies, torque impulse, charge) are scaled by their rates over a reference time
+        // (1 ms, or one period of the highest flux order at the speed scale if shorter), so that their per-step
+        // error is small against what they gain in a step, whatever the rotor's inertia.
+        double iSum = 0, pScale = 0, tScale = 0;
         for (int k = 0; k < N; k++)
         {
-            double ik = (vb + m.Circuits[k].Flux.SlopeBoundWbPerRad() * w) / _r[k];
+            double slope = m.Circuits[k].Flux.SlopeBoundWbPerRad();
+            double ik = (vb + slope * w) / _r[k];
             iSum += ik;
-            if (Idx[k] >= 0)
-            {
-                Atol[Idx[k]] = rtol * ik;
-                energy += 0.5 * _l[k] * ik * ik;
-            }
+            pScale += (vb + slope * w) * ik;
+            tScale += slope * ik;
+            if (Idx[k] >= 0) Atol[Idx[k]] = rtol * ik;
         }
-        energy = Math.Max(energy, 1e-12);
-        for (int q = 0; q < QCount; q++) Atol[Q + q] = rtol * energy;
-        Atol[Q + QImpulse] = rtol * Math.Max(_j * w, 1e-12);
-        Atol[Q + QCharge] = rtol * Math.Max(_cap * vb + iSum * 1e-3, 1e-12);
+        pScale += (_tf + _b * w) * w;
+        tScale = Math.Max(tScale, _tf + _b * w);
+        double tRef = Math.Min(1e-3, 2 * Math.PI / (w * Math.Max(1, _flux.MaxOrder)));
+        for (int q = 0; q < QCount; q++) Atol[Q + q] = rtol * Math.Max(pScale * tRef, 1e-15);
+        Atol[Q + QImpulse] = rtol * Math.Max(tScale * tRef, 1e-15);
+        Atol[Q + QCharge] = rtol * Math.Max(iSum * tRef, 1e-15);
         MaxTau = Enumerable.Range(0, N).Where(k => Idx[k] >= 0).Select(k => _l[k] / _r[k]).DefaultIfEmpty(0).Max();
     }
 
