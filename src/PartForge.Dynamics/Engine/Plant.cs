@@ -82,7 +82,7 @@ internal sealed partial class Plant : IRightHandSide
         for (int k = 0; k < N; k++)
         {
             double slope = m.Circuits[k].Flux.SlopeBoundWbPerRad();
-            double ik = (vb + slope * w) / _r[k];
+            double ik = (vb + slope * w) / (_r[k] + _ports[k].MinOhm);
             iSum += ik;
             pScale += (vb + slope * w) * ik;
             tScale += slope * ik;

@@ -18,6 +18,9 @@ internal sealed class PortTable
     /// <summary>A leg of the six-step star (the coil runs from the leg to the star point).</summary>
     public bool IsStarLeg { get; init; }
 
+    /// <summary>The smallest series resistance of any path (0 if there is none), ohm.</summary>
+    public double MinOhm => _pos.Concat(_neg).Append(Load).Where(b => b is not null).Select(b => b!.Value.Ohm).DefaultIfEmpty(0).Min();
+
     public Branch? Positive(int cmd) => _pos[cmd + 1];
 
     public Branch? Negative(int cmd) => _neg[cmd + 1];

@@ -267,9 +267,18 @@ internal sealed class Run
             double bestAt = 0;
             for (int j = 0; j < _nA; j++)
             {
-                if (!(ga[j] >= 0 && gb[j] < 0)) continue;
+                if (!(ga[j] >= 0)) continue;
+                double a = sa, fa = ga[j], b = sb, fb = gb[j];
+                if (!(fb < 0))
+                {
+                    // No sign change at the samples: look for a dip between them (a diode's margin that peaks
+                    // just above zero for a moment, a current that touches zero and recovers).
+                    var dip = Dip(j, sub);
+                    if (dip is null) continue;
+                    (a, fa, b, fb) = dip.Value;
+                }
                 int jj = j;
-                double s = RootFinder.Locate(x => EventValue(jj, x), false, sa, ga[j], sb, gb[j]);
+                double s = RootFinder.Locate(x => EventValue(jj, x), false, a, fa, b, fb);
                 if (s < best) { best = s; bestEdge = -1; }
             }
             int dir = Math.Sign(thb - tha);
@@ -285,6 +294,48 @@ internal sealed class Run
                 }
             }
             if (best < double.PositiveInfinity) return (best, bestEdge, bestDir, bestAt);
+        }
+        return null;
+    }
+
+    /// <summary>
+    /// Dip search for function j in sub-interval sub: the parabola through its three samples (start, middle and
+    /// end of the step) is convex with its vertex inside this sub-interval and dips below half the smallest
+    /// sample; then a golden-section search for the minimum on the sub-interval stops at the first negative
+    /// value. Returns a bracket (a with g at or above zero, b with g below zero) or null.
+    /// </summary>
+    private (double A, double Ga, double B, double Gb)? Dip(int j, int sub)
+    {
+        double g0 = _gA[j], gm = _gM[j], g1 = _gB[j];
+        double c2 = 2 * (g0 - 2 * gm + g1); // p(s) = g0 + c1 s + c2 s^2 through s = 0, 0.5, 1
+        if (!(c2 > 0)) return null;
+        double c1 = 4 * gm - 3 * g0 - g1;
+        double sv = -c1 / (2 * c2);
+        double lo = sub * 0.5, hi = lo + 0.5;
+        if (!(sv > lo && sv < hi)) return null;
+        double pv = g0 + c1 * sv + c2 * sv * sv;
+        if (!(pv < 0.5 * Math.Min(g0, Math.Min(gm, g1)))) return null;
+        double a = lo, fa = sub == 0 ? g0 : gm, b = hi;
+        const double phi = 0.6180339887498949;
+        double x1 = b - phi * (b - a), x2 = a + phi * (b - a);
+        double f1 = EventValue(j, x1), f2 = EventValue(j, x2);
+        for (int it = 0; it < 40; it++)
+        {
+            if (f1 < 0) return (a, fa, x1, f1);
+            if (f2 < 0) return (x1, f1, x2, f2);
+            if (b - a < 1e-9) break;
+            if (f1 < f2)
+            {
+                b = x2; x2 = x1; f2 = f1;
+                x1 = b - phi * (b - a);
+                f1 = EventValue(j, x1);
+            }
+            else
+            {
+                a = x1; fa = f1; x1 = x2; f1 = f2;
+                x2 = a + phi * (b - a);
+                f2 = EventValue(j, x2);
+            }
         }
         return null;
     }
