@@ -27,17 +27,23 @@ public sealed record DriveConnection : CircuitConnection
     public IReadOnlyList<ConductionWindow> Windows => _windows;
 
     /// <summary>
-    /// Windows given within the first of <paramref name="periodsPerRevolution"/> equal periods, repeated over
-    /// the revolution (for example once per magnet, or once per pole pair).
+    /// Windows given within the first of <paramref name="periodsPerRevolution"/> equal periods (angles from 0 to
+    /// 360 / periods; a window whose end is below its start wraps through the end of the period), repeated over
+    /// the revolution, for example once per magnet or once per pole pair.
     /// </summary>
     [Pure]
     public static DriveConnection Periodic(int periodsPerRevolution, params ConductionWindow[] firstPeriod)
     {
+        int n = Math.Max(1, periodsPerRevolution);
+        double pitch = 360.0 / n;
         var all = new List<ConductionWindow>();
-        double pitch = 360.0 / Math.Max(1, periodsPerRevolution);
-        for (int k = 0; k < Math.Max(1, periodsPerRevolution); k++)
+        for (int k = 0; k < n; k++)
             foreach (var w in firstPeriod)
-                all.Add(new ConductionWindow(Wrap(w.OnDeg + k * pitch), Wrap(w.OffDeg + k * pitch), w.Sign));
+            {
+                double width = w.OffDeg >= w.OnDeg ? w.OffDeg - w.OnDeg : w.OffDeg + pitch - w.OnDeg;
+                double on = w.OnDeg + k * pitch;
+                all.Add(new ConductionWindow(Wrap(on), Wrap(on + width), w.Sign));
+            }
         return new DriveConnection(all);
     }
 

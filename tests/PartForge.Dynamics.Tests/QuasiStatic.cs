@@ -74,7 +74,7 @@ internal static class QuasiStatic
     {
         double glo = g(lo);
         Assert.True(glo * g(hi) < 0, "no sign change");
-        for (int i = 0; i < 100; i++)
+        for (int i = 0; i < 60 && hi - lo > 1e-13 * hi; i++)
         {
             double mid = 0.5 * (lo + hi), gm = g(mid);
             if (gm * glo > 0) { lo = mid; glo = gm; } else hi = mid;
