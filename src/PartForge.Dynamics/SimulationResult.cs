@@ -51,6 +51,9 @@ public sealed record SimulationResult
     /// <summary>The sampled trace (empty for invalid input).</summary>
     public TimeSeries Series { get; init; } = new([], [], [], [], [], []);
 
+    /// <summary>Circuits with L > 0 that were solved as L = 0 (see <see cref="SimulationOptions.QuasiStaticRatio"/>).</summary>
+    public IReadOnlyList<int> QuasiStaticCircuits { get; init; } = [];
+
     /// <summary>Accepted integration steps.</summary>
     public long AcceptedSteps { get; init; }
 

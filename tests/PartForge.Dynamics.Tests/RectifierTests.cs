@@ -10,7 +10,7 @@ public class RectifierTests
 
     /// <summary>Mean battery charging current over whole revolutions at a held speed, A.</summary>
     private static SimulationResult Charge(CircuitConnection c, double l, double w, int revs = 6) =>
-        Rigs.Run(Generator(c, l), new ChargeScenario(w * 30 / Math.PI, revs * 2 * Math.PI / w), new SimulationOptions { RelativeTolerance = 1e-9 });
+        Rigs.Run(Generator(c, l), new ChargeScenario(w * 30 / Math.PI, revs * 2 * Math.PI / w), new SimulationOptions { RelativeTolerance = 1e-9, QuasiStaticRatio = 0 });
 
     /// <summary>
     /// Closed form for a sinusoidal EMF of peak ep into a constant voltage vt through rt with L -> 0: conduction

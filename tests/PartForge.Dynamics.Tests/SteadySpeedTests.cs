@@ -37,19 +37,24 @@ public class SteadySpeedTests
     }
 
     // Source: singular perturbation (L/R -> 0): a small but finite L (L/R = 2 us against windows of about 5 ms)
-    // integrated as a current state must reach the same steady speed as the algebraic L = 0 solution of the same
-    // rotor (the two code paths agree within 2e-4, the order of L/R over the window).
+    // integrated as a current state (substitution off) must reach the same steady speed as the algebraic L = 0
+    // solution of the same rotor (the two code paths agree within 2e-4, the order of L/R over the window); with
+    // the default substitution that circuit is solved as L = 0, says so, and gives the L = 0 speed.
     [Fact]
     public void SmallInductanceConvergesToTheQuasiStaticSpeed()
     {
         double root = RootSpeed();
-        var o = new SimulationOptions { SteadyTolerance = 1e-6, RelativeTolerance = 1e-7 };
+        var o = new SimulationOptions { SteadyTolerance = 1e-6, RelativeTolerance = 1e-7, QuasiStaticRatio = 0 };
         var r0 = Rigs.Run(Motor(0), new StartScenario(20) { InitialRpm = root * 30 / Math.PI }, o);
         var r = Rigs.Run(Motor(4e-6), new StartScenario(20) { InitialRpm = r0.SteadyRpm!.Value }, o);
+        Assert.Empty(r.QuasiStaticCircuits);
         Assert.Equal(SimulationOutcome.SteadySpeed, r.Outcome);
         double w0 = r0.SteadyRpm!.Value, w = r.SteadyRpm!.Value;
         Assert.True(Math.Abs(w - w0) <= 2e-4 * w0, $"L = 4 uH: {w} rpm, L = 0: {w0} rpm");
         Assert.True(w < w0, "the lagging current can only lower the speed");
+        var sub = Rigs.Run(Motor(4e-6), new StartScenario(20) { InitialRpm = r0.SteadyRpm!.Value }, o with { QuasiStaticRatio = 1e-3 });
+        Assert.Equal([0], sub.QuasiStaticCircuits);
+        Assert.Equal(w0, sub.SteadyRpm!.Value, 1e-6 * w0);
     }
 
     // Source: with L/R = 1 ms the current lags and is cut short in each window, so the mean torque at a speed is

@@ -86,7 +86,8 @@ internal static class InputCheck
             if (drive.Freewheel is not DiodeFreewheel) p.Add("six-step switching needs a diode freewheel (the bridge's diodes carry the commutating current)");
         }
         if (sc is not null) Scenario(p, sc, m);
-        if (!(o.RelativeTolerance >= 1e-12 && o.RelativeTolerance <= 1e-2)) p.Add(F($"options.relative_tolerance must be 1e-12 to 1e-2 (got {o.RelativeTolerance})"));
+        if (!(o.RelativeTolerance >= 1e-12 && o.RelativeTolerance <= 1e-4)) p.Add(F($"options.relative_tolerance must be 1e-12 to 1e-4 (got {o.RelativeTolerance})"));
+        if (!(o.QuasiStaticRatio >= 0 && o.QuasiStaticRatio <= 0.1)) p.Add(F($"options.quasi_static_ratio must be 0 to 0.1 (got {o.QuasiStaticRatio})"));
         if (o.MaxSteps < 1) p.Add(F($"options.max_steps must be at least 1 (got {o.MaxSteps})"));
         if (o.SeriesMaxPoints < 2 || o.SeriesMaxPoints > 1_000_000) p.Add(F($"options.series_max_points must be 2 to 1000000 (got {o.SeriesMaxPoints})"));
         if (o.SteadyRevolutions < 1 || o.SteadyRevolutions > 100_000) p.Add(F($"options.steady_revolutions must be 1 to 100000 (got {o.SteadyRevolutions})"));

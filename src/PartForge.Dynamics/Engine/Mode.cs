@@ -9,23 +9,31 @@ internal sealed class Mode
 {
     public RotorMode Rotor;
     public int Dir;
+    /// <summary>The rotor's present motion started from rest (breakaway or reversal).</summary>
+    public bool FromRest;
     public readonly int[] Cmd;
     public readonly int[] Path;
+    /// <summary>The circuit's present path started at zero current (a turn-on).</summary>
+    public readonly bool[] FromZero;
 
     public Mode(int circuits)
     {
         Cmd = new int[circuits];
         Path = new int[circuits];
+        FromZero = new bool[circuits];
     }
 
     public void CopyFrom(Mode o)
     {
         Rotor = o.Rotor;
         Dir = o.Dir;
+        FromRest = o.FromRest;
         Array.Copy(o.Cmd, Cmd, Cmd.Length);
         Array.Copy(o.Path, Path, Path.Length);
+        Array.Copy(o.FromZero, FromZero, FromZero.Length);
     }
 
     public bool SameAs(Mode o) =>
-        Rotor == o.Rotor && Dir == o.Dir && Cmd.AsSpan().SequenceEqual(o.Cmd) && Path.AsSpan().SequenceEqual(o.Path);
+        Rotor == o.Rotor && Dir == o.Dir && FromRest == o.FromRest && Cmd.AsSpan().SequenceEqual(o.Cmd)
+        && Path.AsSpan().SequenceEqual(o.Path) && FromZero.AsSpan().SequenceEqual(o.FromZero);
 }

@@ -23,14 +23,14 @@ internal sealed partial class Plant
             var t = _ports[k];
             if (_open[k] || _isLeg[k] || t.Load is not null) continue;
             int p = m.Path[k];
-            if (p != 0) { g[c++] = p * s.Current[k]; continue; }
+            if (p != 0) { g[c++] = p * s.Current[k] + Band(k, m); continue; }
             if (t.Positive(m.Cmd[k]) is { } bp) g[c++] = -PositiveMargin(bp, s.BusV, s.Emf[k]);
             if (t.Negative(m.Cmd[k]) is { } bn) g[c++] = -NegativeMargin(bn, s.BusV, s.Emf[k]);
         }
         if (_legs.Length == 3)
         {
             foreach (int x in _legs)
-                if (m.Path[x] != 0) g[c++] = m.Path[x] * s.Current[x];
+                if (m.Path[x] != 0) g[c++] = m.Path[x] * s.Current[x] + Band(x, m);
             if (s.StarActive >= 2)
             {
                 foreach (int x in _legs)
@@ -48,13 +48,23 @@ internal sealed partial class Plant
                         if (x != z) g[c++] = -PairMargin(x, z, m, s);
             }
         }
-        if (m.Rotor == RotorMode.Moving) g[c++] = m.Dir * y[Omega];
+        if (m.Rotor == RotorMode.Moving) g[c++] = m.Dir * y[Omega] + (m.FromRest ? Atol[Omega] : 0);
         else if (m.Rotor == RotorMode.Stuck) g[c++] = _tf - Math.Abs(s.Torque);
         if (StopOmega > 0 && m.Rotor is RotorMode.Moving or RotorMode.Free) g[c++] = Math.Abs(y[Omega]) - StopOmega;
         if (Vc >= 0 && CutoffV is double vc) g[c++] = y[Vc] - vc;
         if (Vc >= 0 && TargetV is double vt) g[c++] = vt - y[Vc];
         return c;
     }
+
+    /// <summary>
+    /// A path entered at zero current (a turn-on) with a current state ends when its current falls below minus
+    /// this band (the current's absolute tolerance), not at the first rounding below zero: right after a turn-on
+    /// the true current is far smaller than the integration's error, and without the band the path would turn
+    /// off and on again at once. (The rotor's stop after a breakaway has the same band on its speed.) A path
+    /// entered with current flowing ends exactly at zero; the current is set to exactly zero either way.
+    /// Algebraic currents (L = 0) follow their margin exactly and need no band.
+    /// </summary>
+    private double Band(int k, Mode m) => Idx[k] >= 0 && m.FromZero[k] ? Atol[Idx[k]] : 0;
 
     /// <summary>With no star current: how strongly a current would start out of leg x and back through leg z.</summary>
     private double PairMargin(int x, int z, Mode m, Solution s) =>
@@ -70,6 +80,8 @@ internal sealed partial class Plant
     public (double ArcJ, double KickV) Resolve(double[] y)
     {
         var m = Mode;
+        Span<int> before = stackalloc int[N];
+        m.Path.AsSpan().CopyTo(before);
         bool decideRotor = false;
         if (m.Rotor == RotorMode.Moving && m.Dir * y[Omega] <= 0) { y[Omega] = 0; decideRotor = true; }
         else if (m.Rotor == RotorMode.Stuck) decideRotor = true;
@@ -140,7 +152,15 @@ internal sealed partial class Plant
         {
             Solve(y, m, Aux);
             if (Math.Abs(Aux.Torque) <= _tf) { m.Rotor = RotorMode.Stuck; y[Omega] = 0; }
-            else { m.Rotor = RotorMode.Moving; m.Dir = Math.Sign(Aux.Torque); }
+            else { m.Rotor = RotorMode.Moving; m.Dir = Math.Sign(Aux.Torque); m.FromRest = true; }
+        }
+        // A conducting path at exactly zero current is starting from zero (a turn-on, also straight after a
+        // zero crossing); one that changed with current flowing was entered with current; otherwise unchanged.
+        for (int k = 0; k < N; k++)
+        {
+            if (m.Path[k] == 0 || Idx[k] < 0) m.FromZero[k] = false;
+            else if (y[Idx[k]] == 0) m.FromZero[k] = true;
+            else if (m.Path[k] != before[k]) m.FromZero[k] = false;
         }
         double kickV = double.NaN;
         if (cutK >= 0)

@@ -36,7 +36,7 @@ internal sealed partial class Plant : IRightHandSide
     /// <summary>Capacitor voltage limits that end a run (null: none).</summary>
     public double? CutoffV, TargetV;
 
-    public Plant(MachineSetup m, double rtol, double omegaScale, double voltScale)
+    public Plant(MachineSetup m, double rtol, double omegaScale, double voltScale, double quasiStaticRatio)
     {
         N = m.Circuits.Count;
         _j = m.Rotor.InertiaKgM2;
@@ -48,8 +48,10 @@ internal sealed partial class Plant : IRightHandSide
         _open = _ports.Select(p => p.IsOpen).ToArray();
         _isLeg = _ports.Select(p => p.IsStarLeg).ToArray();
         _legs = Enumerable.Range(0, N).Where(k => _isLeg[k]).ToArray();
-        _alg = Enumerable.Range(0, N).Select(k => !_open[k] && _l[k] == 0).ToArray();
         _flux = new FluxTable(m.Circuits.Select(c => c.Flux).ToArray());
+        double tauLimit = quasiStaticRatio * 2 * Math.PI / (Math.Max(1, omegaScale) * Math.Max(1, _flux.MaxOrder));
+        _alg = Enumerable.Range(0, N).Select(k => !_open[k] && (_l[k] == 0 || !_isLeg[k] && _l[k] / _r[k] < tauLimit)).ToArray();
+        QuasiStatic = Enumerable.Range(0, N).Where(k => _alg[k] && _l[k] > 0).ToArray();
         Windows = new WindowTable(m.Circuits);
         _rs = m.Storage.SeriesOhm;
         _cap = m.Storage.FaradsOrZero;
@@ -96,6 +98,9 @@ internal sealed partial class Plant : IRightHandSide
         Atol[Q + QCharge] = rtol * Math.Max(iSum * tRef, 1e-15);
         MaxTau = Enumerable.Range(0, N).Where(k => Idx[k] >= 0).Select(k => _l[k] / _r[k]).DefaultIfEmpty(0).Max();
     }
+
+    /// <summary>Circuits with L > 0 solved as L = 0 (see SimulationOptions.QuasiStaticRatio).</summary>
+    public int[] QuasiStatic { get; }
 
     /// <summary>Highest mechanical order of any flux term.</summary>
     public int MaxOrder => _flux.MaxOrder;

@@ -53,7 +53,7 @@ internal sealed class Run
         double slope = setup.Circuits.Select(c => c.Flux.SlopeBoundWbPerRad()).DefaultIfEmpty(0).Max();
         double wScale = Math.Abs(_omega0);
         if (slope > 0) wScale = Math.Max(wScale, Math.Min(Math.Max(vScale, 1) / slope, 1e5));
-        _p = new Plant(setup, _rtol, wScale, vScale);
+        _p = new Plant(setup, _rtol, wScale, vScale, o.QuasiStaticRatio);
         _dp = new DormandPrince(_p.Size);
         _y = new double[_p.Size];
         _yTmp = new double[_p.Size];
@@ -474,6 +474,7 @@ internal sealed class Run
             AcceptedSteps = _accepted,
             RejectedSteps = _rejected,
             Events = _events,
+            QuasiStaticCircuits = p.QuasiStatic,
         };
     }
 }
