@@ -1,3 +1,4 @@
+using System.Diagnostics.CodeAnalysis;
 using PartForge.Design.Keys;
 using PartForge.Design.Model;
 
@@ -164,6 +165,7 @@ internal static class DesignRules
 
     private static string Article(string word) => word.Length > 0 && "aeiou".Contains(word[0]) ? "an" : "a";
 
-    private static void Set(object target, string property, object? value) =>
-        target.GetType().GetProperty(property)!.SetValue(target, value);
+    private static void Set<[DynamicallyAccessedMembers(DynamicallyAccessedMemberTypes.PublicProperties)] T>(T target, string property, object? value)
+        where T : class =>
+        typeof(T).GetProperty(property)!.SetValue(target, value);
 }
