@@ -38,9 +38,14 @@ public class ToolPackageTests
         string config = w.Write("nuget.config",
             "<?xml version=\"1.0\" encoding=\"utf-8\"?>\n<configuration>\n  <packageSources>\n    <clear />\n" +
             $"    <add key=\"local\" value=\"{packages}\" />\n  </packageSources>\n</configuration>\n");
-        var install = Run("dotnet", w.Path, TimeSpan.FromMinutes(4), "tool", "install", "--tool-path", tools,
+        // A package cache of its own too: a partforge of the same version cached by an earlier install must not
+        // stand in for the one just packed.
+        var install = RunWithCache("dotnet", w.Path, TimeSpan.FromMinutes(4), w.File("nuget-cache"), "tool", "install", "--tool-path", tools,
             "--configfile", w.File(config), "--version", version, "partforge");
         Assert.True(install.ExitCode == 0, "dotnet tool install failed\n" + install);
+        var installed = Directory.GetFiles(Path.Combine(tools, ".store"), "partforge.dll", SearchOption.AllDirectories);
+        Assert.Single(installed);
+        Assert.Equal(File.ReadAllBytes(typeof(CliApp).Assembly.Location), File.ReadAllBytes(installed[0]));
 
         string shim = Path.Combine(tools, OperatingSystem.IsWindows() ? "partforge.exe" : "partforge");
         Assert.True(File.Exists(shim), "the install made no partforge command in " + tools);
@@ -61,7 +66,10 @@ public class ToolPackageTests
         throw new InvalidOperationException("PartForge.sln not found above " + AppContext.BaseDirectory);
     }
 
-    private static RunResult Run(string file, string workDir, TimeSpan timeout, params string[] args)
+    private static RunResult Run(string file, string workDir, TimeSpan timeout, params string[] args) => RunWithCache(file, workDir, timeout, null, args);
+
+    /// <summary>Runs a process; with <paramref name="packageCache"/>, NuGet's package folder is that one.</summary>
+    private static RunResult RunWithCache(string file, string workDir, TimeSpan timeout, string? packageCache, params string[] args)
     {
         var psi = new ProcessStartInfo(file)
         {
@@ -75,6 +83,7 @@ public class ToolPackageTests
         psi.Environment["NO_COLOR"] = "1";
         psi.Environment["DOTNET_NOLOGO"] = "1";
         psi.Environment["DOTNET_CLI_TELEMETRY_OPTOUT"] = "1";
+        if (packageCache != null) psi.Environment["NUGET_PACKAGES"] = packageCache;
         using var p = Process.Start(psi)!;
         p.StandardInput.Close();
         var stdout = p.StandardOutput.ReadToEndAsync();
