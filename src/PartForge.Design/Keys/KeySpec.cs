@@ -14,14 +14,13 @@ public sealed class KeySpec
 {
     private static readonly Regex UnitFromDoc = new(@",\s*(mm|rpm|V rms|V|ohm|C|degrees|electrical degrees)(\.|\s*\(|;)", RegexOptions.CultureInvariant);
 
-    internal KeySpec(PropertyInfo property, object defaults)
+    internal KeySpec(PropertyInfo property, bool isNullableReference, object defaults)
     {
         Property = property;
         Key = property.GetCustomAttribute<KeyAttribute>()?.Name ?? SnakeCase(property.Name);
         var type = property.PropertyType;
-        var nullInfo = new NullabilityInfoContext().Create(property);
         var under = Nullable.GetUnderlyingType(type);
-        IsOptional = under != null || (!type.IsValueType && nullInfo.WriteState == NullabilityState.Nullable);
+        IsOptional = under != null || (!type.IsValueType && isNullableReference);
         ClrType = under ?? type;
         Kind = ClrType == typeof(int) ? ValueKind.Integer
             : ClrType == typeof(double) ? ValueKind.Number

@@ -6,23 +6,25 @@ namespace PartForge.Design.Keys;
 
 /// <summary>
 /// The keys of one section of the design file: the public init properties of one model class, in declaration
-/// order. Built once per class by reflection and cached.
+/// order. Built once per class from the class's shape (<see cref="ModelShapes"/>, written at compile time) and
+/// the attributes on its properties, and cached.
 /// </summary>
 public sealed class SectionSpec
 {
     private static readonly ConcurrentDictionary<Type, SectionSpec> Cache = new();
     private readonly Dictionary<string, KeySpec> _byKey;
+    private readonly Func<object> _create;
 
     private SectionSpec(Type type)
     {
+        var shape = ModelShapes.Find(type)
+            ?? throw new InvalidOperationException($"{type.Name} is not a class of the design model (reachable from Design through its properties)");
         Type = type;
         Doc = type.GetCustomAttribute<DocAttribute>()?.Text;
-        var defaults = Activator.CreateInstance(type)
-            ?? throw new InvalidOperationException($"design model class {type.Name} needs a parameterless constructor");
-        Keys = type.GetProperties(BindingFlags.Public | BindingFlags.Instance)
-            .Where(p => p.CanWrite && p.GetIndexParameters().Length == 0)
-            .OrderBy(p => p.MetadataToken)
-            .Select(p => new KeySpec(p, defaults))
+        _create = shape.Create;
+        var defaults = shape.Create();
+        Keys = shape.Properties
+            .Select(p => new KeySpec(p.Property, p.IsNullableReference, defaults))
             .ToArray();
         _byKey = Keys.ToDictionary(k => k.Key, StringComparer.Ordinal);
         if (_byKey.Count != Keys.Count) throw new InvalidOperationException($"design model class {type.Name} has two properties with the same key");
@@ -38,6 +40,9 @@ public sealed class SectionSpec
     public IReadOnlyList<KeySpec> Keys { get; }
 
     public KeySpec? Find(string key) => _byKey.GetValueOrDefault(key);
+
+    /// <summary>A new instance of the section's class with every default.</summary>
+    internal object CreateDefault() => _create();
 
     /// <summary>
     /// Resolves a dotted key path such as "rotor.bolt_circle.hole" from this section. Returns the spec chain, or

@@ -13,7 +13,7 @@ internal static class NodeMapper
 {
     public static object MapSection(SectionSpec spec, YMapping map, string prefix, MapContext ctx)
     {
-        var instance = Activator.CreateInstance(spec.Type)!;
+        var instance = spec.CreateDefault();
         var seen = new Dictionary<string, YNode>(StringComparer.Ordinal);
         foreach (var entry in map.Entries)
         {

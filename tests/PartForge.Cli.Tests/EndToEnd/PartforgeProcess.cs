@@ -12,18 +12,24 @@ public sealed record RunResult(int ExitCode, string Stdout, string Stderr)
 /// <summary>
 /// Runs the built <c>partforge</c> (the Cli project is a reference of this test project, so it is built
 /// once per test run, next to the test assembly) as a child process, in a working folder, with stdout and
-/// stderr redirected (so the tool sees no terminal) and a timeout.
+/// stderr redirected (so the tool sees no terminal) and a timeout. With <c>PARTFORGE_EXE</c> set to an
+/// executable (the native one from scripts/publish.sh, see scripts/test-native.sh) that one is run instead.
 /// </summary>
 public static class PartforgeProcess
 {
     public static string DllPath { get; } = Path.Combine(AppContext.BaseDirectory, "partforge.dll");
 
+    /// <summary>The executable named by PARTFORGE_EXE, or null for the framework-dependent build.</summary>
+    public static string? ExePath { get; } =
+        Environment.GetEnvironmentVariable("PARTFORGE_EXE") is { Length: > 0 } exe ? Path.GetFullPath(exe) : null;
+
     public static RunResult Run(string workDir, params string[] args) => Run(workDir, TimeSpan.FromSeconds(120), args);
 
     public static RunResult Run(string workDir, TimeSpan timeout, params string[] args)
     {
-        Assert.True(File.Exists(DllPath), $"the partforge executable is not built at {DllPath}");
-        var psi = new ProcessStartInfo("dotnet")
+        if (ExePath != null) Assert.True(File.Exists(ExePath), $"PARTFORGE_EXE names {ExePath}, which does not exist");
+        else Assert.True(File.Exists(DllPath), $"the partforge executable is not built at {DllPath}");
+        var psi = new ProcessStartInfo(ExePath ?? "dotnet")
         {
             WorkingDirectory = workDir,
             RedirectStandardOutput = true,
@@ -31,7 +37,7 @@ public static class PartforgeProcess
             RedirectStandardInput = true,
             UseShellExecute = false,
         };
-        psi.ArgumentList.Add(DllPath);
+        if (ExePath == null) psi.ArgumentList.Add(DllPath);
         foreach (var a in args) psi.ArgumentList.Add(a);
         psi.Environment["NO_COLOR"] = "1";
         psi.Environment["DOTNET_NOLOGO"] = "1";

@@ -16,8 +16,11 @@ public static class Repo
     public static IReadOnlyList<string> PresetNames =>
         Directory.GetFiles(PresetsFolder, "*.yaml").Select(Path.GetFileNameWithoutExtension).OrderBy(n => n, StringComparer.Ordinal).ToArray()!;
 
+    /// <summary>PARTFORGE_EXE when set (the native executable, scripts/test-native.sh), else the one built beside the tests.</summary>
     public static ProcessCli Executable =>
-        ProcessCli.Find(AppContext.BaseDirectory) ?? throw new InvalidOperationException("the partforge executable is not next to the tests");
+        Environment.GetEnvironmentVariable("PARTFORGE_EXE") is { Length: > 0 } exe
+            ? (File.Exists(exe) ? new ProcessCli(Path.GetFullPath(exe)) : throw new InvalidOperationException("PARTFORGE_EXE names " + exe + ", which does not exist"))
+            : ProcessCli.Find(AppContext.BaseDirectory) ?? throw new InvalidOperationException("the partforge executable is not next to the tests");
 
     /// <summary>The preset text with one top-level scalar key replaced (or the line added when absent).</summary>
     public static string WithTopKey(string text, string key, string value)
