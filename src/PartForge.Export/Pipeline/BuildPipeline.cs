@@ -133,7 +133,13 @@ public static class BuildPipeline
     private static IReadOnlyDictionary<PreviewKey, byte[]> RenderPreviews(IReadOnlyList<PreviewKey> keys, PartSet parts)
     {
         var result = new System.Collections.Concurrent.ConcurrentDictionary<PreviewKey, byte[]>();
-        Parallel.ForEach(keys, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, k =>
+        // Longest first (the assembly draws every part; then parts by their triangles), handed out one at a
+        // time: a list is otherwise split into fixed ranges, and the assembly left to the end of one range
+        // keeps a core busy alone while the other idles.
+        var longestFirst = keys.OrderBy(k => k.Part is null ? 0 : 1).ThenByDescending(k => k.Part is { } id ? parts.Get(id).Mesh.TriangleCount : 0)
+            .ThenBy(k => k.SortKey, StringComparer.Ordinal).ToArray();
+        var queue = System.Collections.Concurrent.Partitioner.Create(longestFirst, loadBalance: true);
+        Parallel.ForEach(queue, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, k =>
             result[k] = k.Part is { } id ? Previews.Part(parts.Get(id)) : Previews.Assembly(parts));
         return result;
     }
