@@ -7,7 +7,7 @@ using PartForge.Electrical.Winding;
 namespace PartForge.Electrical;
 
 /// <summary>
-/// Everything the electrical engine found for a design: the CONTRACT `electrical` keys (pole_pairs,
+/// Everything the electrical engine found for a design: the pinned results `electrical` keys (pole_pairs,
 /// electrical_hz, magnetic_gap, winding_factor, magnet.br, coil{...}, coil_flux_linkage_peak_wb,
 /// phase{...}, line_emf_rms_v, ke_v_per_krpm) and more. Values at `machine.rated_rpm` unless named
 /// otherwise. When <see cref="Diagnostics"/> holds an error, the values it prevents are 0 (never NaN) and

@@ -1,7 +1,7 @@
 namespace PartForge.Export.Pipeline;
 
 /// <summary>
-/// File names of the outputs (CONTRACT.md "Part names and output files"), derived from the design name and
+/// File names of the outputs (the pinned part names and output files, README "Outputs"), derived from the design name and
 /// sanitised so that no name can leave the output folder or surprise a shell: lowercase letters, digits and
 /// '-' only, at most 64 characters, never empty, never "." or "..".
 /// </summary>

@@ -1,7 +1,7 @@
 namespace PartForge.Export.Results;
 
 /// <summary>
-/// The results document of CONTRACT.md ("Results document"): what <c>check --json</c> prints and
+/// The results document (its pinned keys: `partforge schema --results`): what <c>check --json</c> prints and
 /// <c>&lt;name&gt;-results.json</c> holds. Serialised by <see cref="ResultsJson"/> in a fixed key order.
 /// </summary>
 public sealed record ResultsDocument
@@ -15,10 +15,10 @@ public sealed record ResultsDocument
     public required IReadOnlyList<CheckEntry> Checks { get; init; }
     public required IReadOnlyList<PartEntry> Parts { get; init; }
 
-    /// <summary>The operating points (CONTRACT "Additions": <c>operating</c>).</summary>
+    /// <summary>The operating points (an addition to the pinned keys: <c>operating</c>).</summary>
     public OperatingSection Operating { get; init; } = new(0, null, null);
 
-    /// <summary>Masses and forces of the rotating assembly (CONTRACT "Additions": <c>mechanics</c>).</summary>
+    /// <summary>Masses and forces of the rotating assembly (an addition to the pinned keys: <c>mechanics</c>).</summary>
     public MechanicsSection Mechanics { get; init; } = new(0, 0, [], "");
 
     /// <summary>The bill of materials, line by line (empty when no parts could be made).</summary>
@@ -34,7 +34,7 @@ public sealed record ResultsSummary(string Status, int Fail, int Warn)
 
 public sealed record CheckEntry(string Id, string Part, string Status, double Value, double Limit, string Unit, double Margin, string Message)
 {
-    /// <summary>The other part of the pair the check is about, or null (CONTRACT "Additions": every check carries it).</summary>
+    /// <summary>The other part of the pair the check is about, or null (an addition to the pinned keys: every check carries it).</summary>
     public string? Counterpart { get; init; }
 
     /// <summary>Where the limiting value occurs (features; rotor angle for the rotation sweep), or null.</summary>
@@ -91,10 +91,10 @@ public sealed record ElectricalSection
     public double RatedRpm { get; init; }
     public IReadOnlyList<HarmonicEntry> Harmonics { get; init; } = [];
 
-    /// <summary>Which coil goes to which phase, and which way it is wound (CONTRACT "Additions": <c>electrical.winding_table</c>).</summary>
+    /// <summary>Which coil goes to which phase, and which way it is wound (an addition to the pinned keys: <c>electrical.winding_table</c>).</summary>
     public IReadOnlyList<WindingEntry> WindingTable { get; init; } = [];
 
-    /// <summary>The timing sensors (CONTRACT "Additions": <c>electrical.sensors</c>).</summary>
+    /// <summary>The timing sensors (an addition to the pinned keys: <c>electrical.sensors</c>).</summary>
     public IReadOnlyList<SensorEntry> Sensors { get; init; } = [];
 
     /// <summary>hall, reed or none.</summary>
