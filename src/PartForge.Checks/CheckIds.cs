@@ -44,6 +44,10 @@ public static class CheckIds
     public const string CurrentDensity = "current-density";
     /// <summary>Winding temperature against the softening point of the former and stator materials.</summary>
     public const string CoilTemperature = "coil-temperature";
+    /// <summary>A printed part fits the printer: its footprint in printing orientation on the bed (in a quarter turn), its height under bed_z.</summary>
+    public const string PrintBedFit = "print-bed-fit";
+    /// <summary>A cut part fits a sheet the user has (with the edge spacing), and so the cutter's bed.</summary>
+    public const string CutSheetFit = "cut-sheet-fit";
     /// <summary>A diagnostic of the electrical engine (impossible combination, extra-low-voltage warning).</summary>
     public const string Electrical = "electrical";
 }

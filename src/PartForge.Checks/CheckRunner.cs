@@ -18,6 +18,7 @@ public static partial class CheckRunner
         Collect(results, "stack-up", () => GapRules.Run(c));
         Collect(results, "rotation sweep", () => SweepRules.Run(c));
         Collect(results, "printability", () => PrintRules.Run(c));
+        Collect(results, "machine fit", () => MachineFitRules.Run(c));
         Collect(results, "winding", () => WindingRules.Run(c));
         Collect(results, "speed", () => SpeedRules.Run(c));
         Collect(results, "electrical", () => ElectricalRules.Run(c));

@@ -24,6 +24,7 @@ public static class OutputNames
 
     public static string PartFile(string design, string part, string extension) => $"{Sanitize(design)}-{Sanitize(part)}.{extension}";
     public static string ThreeMf(string design) => $"{Sanitize(design)}.3mf";
+    public static string PlateThreeMf(string design, int plate) => $"{Sanitize(design)}-plate-{plate.ToString(System.Globalization.CultureInfo.InvariantCulture)}.3mf";
     public static string AssemblyThreeMf(string design) => $"{Sanitize(design)}-assembly.3mf";
     public static string Results(string design) => $"{Sanitize(design)}-results.json";
     public static string Report(string design) => $"{Sanitize(design)}-report.html";

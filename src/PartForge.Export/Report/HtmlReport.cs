@@ -88,6 +88,13 @@ public static class HtmlReport
               .Append("</td><td class=\"num\">").Append(Bom.BomCsv.Number(l.Quantity)).Append("</td><td>").Append(Esc(l.Unit)).Append("</td><td>").Append(Esc(l.Notes)).Append("</td></tr>\n");
         sb.Append("</tbody></table></section>\n");
 
+        if (r.Fabrication.Count > 0)
+        {
+            sb.Append("<section id=\"fabrication\"><h2>Making the parts</h2>\n");
+            foreach (var t in r.Fabrication) Table(sb, t);
+            sb.Append("</section>\n");
+        }
+
         if (r.Notes.Count > 0)
         {
             sb.Append("<section id=\"notes\"><h2>Notes and approximations</h2><ul>\n");
