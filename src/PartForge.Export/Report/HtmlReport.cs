@@ -6,7 +6,7 @@ namespace PartForge.Export.Report;
 
 /// <summary>
 /// Renders the design report: one self-contained HTML file (inline CSS and SVG, PNG previews as data URIs,
-/// no scripts, nothing fetched). Deterministic: the same input gives the same bytes (no dates, no random ids).
+/// the meshes inline for the 3D view, nothing fetched). Deterministic: the same input gives the same bytes (no dates, no random ids). Its one script is the project's own 3D view (<see cref="Viewer3d"/>).
 /// </summary>
 public static class HtmlReport
 {
@@ -52,7 +52,9 @@ public static class HtmlReport
         sb.Append("<section id=\"checks\"><h2>Checks</h2>\n<table id=\"check-table\"><thead><tr><th>status</th><th>check</th><th>part</th><th>value</th><th>limit</th><th>margin</th><th>unit</th><th>finding and fix</th></tr></thead><tbody>\n");
         foreach (var c in r.Checks)
         {
-            sb.Append("<tr data-check=\"").Append(Esc(c.Id)).Append("\" data-part=\"").Append(Esc(c.Part)).Append("\" data-status=\"").Append(Esc(c.Status))
+            sb.Append("<tr data-check=\"").Append(Esc(c.Id)).Append("\" data-part=\"").Append(Esc(c.Part)).Append('"');
+            if (c.Counterpart.Length > 0) sb.Append(" data-counterpart=\"").Append(Esc(c.Counterpart)).Append('"');
+            sb.Append(" data-status=\"").Append(Esc(c.Status))
               .Append("\" data-value=\"").Append(SvgCanvas.Num(c.Value)).Append("\"><td>").Append(Pill(c.Status)).Append("</td><td>").Append(Esc(c.Id))
               .Append("</td><td>").Append(Esc(c.Part)).Append("</td><td class=\"num\">").Append(Fmt(c.Value)).Append("</td><td class=\"num\">").Append(Fmt(c.Limit))
               .Append("</td><td class=\"num\">").Append(Fmt(c.Margin)).Append("</td><td>").Append(Esc(c.Unit)).Append("</td><td>").Append(Esc(c.Message));
@@ -70,6 +72,8 @@ public static class HtmlReport
         // Half-section
         sb.Append("<section id=\"half-section\"><h2>Axial half-section</h2>\n<p class=\"note\">Through a magnet and a coil, to scale, nominal positions. The red dimensions are the running gaps: the drawn distance is the nominal gap; the value written is the worst case the checker found after tolerances, runout, play and deflection.</p>\n<figure>")
           .Append(HalfSection.Render("Axial half-section", r.SectionBodies, r.SectionDimensions)).Append("</figure></section>\n");
+
+        if (r.SceneJson.Length > 0) Viewer3d.Append(sb, r.SceneJson);
 
         // Previews
         if (r.Previews.Count > 0)

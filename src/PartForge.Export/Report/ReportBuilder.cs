@@ -39,7 +39,7 @@ public static class ReportBuilder
             CoilWaveform = e.CoilWaveform,
             PhaseWaveforms = e.PhaseWaveforms,
             WaveformRpm = e.WaveformRpm,
-            Checks = checks.Checks.Select(c => new ReportCheck(c.Id, c.PartName, c.StatusText, c.Value, c.Limit, c.Unit, c.Margin, c.Message, c.Basis ?? "")).ToArray(),
+            Checks = checks.Checks.Select(c => new ReportCheck(c.Id, c.PartName, c.StatusText, c.Value, c.Limit, c.Unit, c.Margin, c.Message, c.Basis ?? "", c.CounterpartName ?? "")).ToArray(),
             Status = checks.StatusText,
             Forced = forced,
             Drawings = parts.Parts.Select(p => PartSketches.For(d, p)).ToArray(),
@@ -50,6 +50,7 @@ public static class ReportBuilder
             Fabrication = FabricationTables(d, parts),
             Notes = e.Notes.Concat(parts.Parts.SelectMany(p => p.Notes.Select(n => n.StartsWith(p.Name, StringComparison.Ordinal) ? n : $"{p.Name}: {n}"))).ToArray(),
             Previews = previews ?? [],
+            SceneJson = ViewerScene.Json(parts, checks),
         };
     }
 

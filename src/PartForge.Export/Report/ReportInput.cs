@@ -49,6 +49,9 @@ public sealed record ReportInput
     /// <summary>Notes on approximations and assumptions.</summary>
     public IReadOnlyList<string> Notes { get; init; } = [];
 
+    /// <summary>The 3D view's scene (<see cref="ViewerScene.Json"/>); empty leaves the view out.</summary>
+    public string SceneJson { get; init; } = "";
+
     /// <summary>Inline PNG previews (name, PNG bytes); embedded as data URIs so the report stays one file.</summary>
     public IReadOnlyList<(string Name, byte[] Png)> Previews { get; init; } = [];
 }
