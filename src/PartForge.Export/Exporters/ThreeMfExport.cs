@@ -60,7 +60,7 @@ public sealed class ThreeMfExport : ExportFormat
         }
     }
 
-    /// <summary>One object per distinct part on the plates written, its build items the placed copies.</summary>
+    /// <summary>One object per distinct part on the plates written (in the parts' order), its build items the placed copies.</summary>
     public static IReadOnlyList<ThreeMfObject> Objects(PrintPlates plates, int? onlyPlate = null)
     {
         ArgumentNullException.ThrowIfNull(plates);
@@ -77,6 +77,8 @@ public sealed class ThreeMfExport : ExportFormat
             if (i < 0) { byPart.Add((pl.PartId, new List<ThreeMfTransform>())); i = byPart.Count - 1; }
             byPart[i].Items.Add(t);
         }
-        return byPart.Select(b => new ThreeMfObject(b.Name, plates.Part(b.Name).Mesh, b.Items)).ToArray();
+        // Objects in the parts' order (the machine's), build items in the order placed.
+        var order = plates.PartNames.Select((n, i) => (n, i)).ToDictionary(x => x.n, x => x.i);
+        return byPart.OrderBy(b => order[b.Name]).Select(b => new ThreeMfObject(b.Name, plates.Part(b.Name).Mesh, b.Items)).ToArray();
     }
 }

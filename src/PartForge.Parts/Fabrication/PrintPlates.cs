@@ -14,8 +14,9 @@ namespace PartForge.Parts.Fabrication;
 /// </summary>
 public sealed class PrintPlates
 {
-    private PrintPlates(LayoutResult layout, IReadOnlyDictionary<string, (PartModel Part, PrintFootprint Footprint)> parts, PrinterSpec printer)
+    private PrintPlates(LayoutResult layout, IReadOnlyDictionary<string, (PartModel Part, PrintFootprint Footprint)> parts, IReadOnlyList<string> names, PrinterSpec printer)
     {
+        PartNames = names;
         Layout = layout;
         _parts = parts;
         Printer = printer;
@@ -28,6 +29,9 @@ public sealed class PrintPlates
 
     public PrinterSpec Printer { get; }
 
+    /// <summary>The printed parts laid out, in the order given.</summary>
+    public IReadOnlyList<string> PartNames { get; }
+
     public int PlateCount => Layout.Bins.Count;
 
     /// <summary>Lays out the printed parts given (their every copy).</summary>
@@ -37,14 +41,16 @@ public sealed class PrintPlates
         ArgumentNullException.ThrowIfNull(printer);
         var parts = new Dictionary<string, (PartModel, PrintFootprint)>();
         var items = new List<LayoutItem>();
+        var names = new List<string>();
         foreach (var p in printed.Where(p => p.Process == PartProcess.Print))
         {
             var fp = PrintFootprint.Of(p.ExactLayers);
             parts[p.Name] = (p, fp);
+            names.Add(p.Name);
             items.Add(fp.Item(p.Name, p.Quantity));
         }
         var options = new PlateOptions(printer.BedXMm, printer.BedYMm) { SpacingMm = printer.SpacingMm };
-        return new PrintPlates(PlatePacker.Pack(items, options, precision), parts, printer);
+        return new PrintPlates(PlatePacker.Pack(items, options, precision), parts, names, printer);
     }
 
     /// <summary>The footprint (orientation) of a laid-out part.</summary>
