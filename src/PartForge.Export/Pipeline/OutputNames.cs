@@ -29,4 +29,7 @@ public static class OutputNames
     public static string Results(string design) => $"{Sanitize(design)}-results.json";
     public static string Report(string design) => $"{Sanitize(design)}-report.html";
     public static string Bom(string design) => $"{Sanitize(design)}-bom.csv";
+
+    /// <summary>The output set's manifest (<see cref="Formats.Io.OutputManifest"/>), written last.</summary>
+    public static string Manifest(string design) => Formats.Io.OutputManifest.FileNameFor(Sanitize(design));
 }

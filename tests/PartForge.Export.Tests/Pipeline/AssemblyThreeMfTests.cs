@@ -94,7 +94,7 @@ public sealed class AssemblyThreeMfTests : IDisposable
     {
         var r = Build(WindDuo(), "a");
         // The print plates (four on the default 220 mm bed: each rotor, the stator, the twelve formers) come first.
-        Assert.Equal(["wind-duo.3mf", .. Plates(4), "wind-duo-assembly.3mf"], r.Written);
+        Assert.Equal(["wind-duo.3mf", .. Plates(4), "wind-duo-assembly.3mf", "wind-duo-manifest.json"], r.Written);
         var set = r.Evaluation!.Parts!;
         var (objects, items) = ReadModel(Path.Combine(r.OutputFolder!, "wind-duo-assembly.3mf"));
 
@@ -252,11 +252,11 @@ public sealed class AssemblyThreeMfTests : IDisposable
     {
         // A subset of the parts gives no assembly; naming every part is the whole machine.
         var some = Build(WindDuo(), "some", "3mf,json", "rotor-front,former");
-        Assert.Equal(["wind-duo.3mf", .. Plates(2), "wind-duo-results.json"], some.Written);
+        Assert.Equal(["wind-duo.3mf", .. Plates(2), "wind-duo-results.json", "wind-duo-manifest.json"], some.Written);
 
         var names = string.Join(",", some.Evaluation!.Parts!.Parts.Select(p => p.Name));
         var all = Build(WindDuo(), "all", "3mf,json", names);
-        Assert.Equal(["wind-duo.3mf", .. Plates(4), "wind-duo-assembly.3mf", "wind-duo-results.json"], all.Written);
+        Assert.Equal(["wind-duo.3mf", .. Plates(4), "wind-duo-assembly.3mf", "wind-duo-results.json", "wind-duo-manifest.json"], all.Written);
         using var doc = JsonDocument.Parse(File.ReadAllText(Path.Combine(all.OutputFolder!, "wind-duo-results.json")));
         foreach (var p in doc.RootElement.GetProperty("parts").EnumerateArray())
             Assert.Contains("wind-duo-assembly.3mf", p.GetProperty("files").EnumerateArray().Select(f => f.GetString()));

@@ -26,7 +26,7 @@ public sealed class BuildPipelineTests : IDisposable
     {
         var r = Build("wind-duo", "stl", "rotor-front");
         Assert.Equal(PipelineStatus.Ok, r.Status);
-        Assert.Equal(["wind-duo-rotor-front.stl"], r.Written);
+        Assert.Equal(["wind-duo-rotor-front.stl", "wind-duo-manifest.json"], r.Written);
         foreach (var p in r.Evaluation!.Parts!.Parts) Assert.Equal(p.Name == "rotor-front", p.MeshMade);
         // The results document is not written, so it carries no measurements.
         Assert.All(r.Results!.Parts, e => Assert.Equal(0, e.Triangles));
