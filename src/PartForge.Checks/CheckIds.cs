@@ -50,4 +50,6 @@ public static class CheckIds
     public const string CutSheetFit = "cut-sheet-fit";
     /// <summary>A diagnostic of the electrical engine (impossible combination, extra-low-voltage warning).</summary>
     public const string Electrical = "electrical";
+    /// <summary>Flux density in the steel behind the magnets (back iron or a steel rotor) against steel's saturation.</summary>
+    public const string BackIronSaturation = "back-iron-saturation";
 }

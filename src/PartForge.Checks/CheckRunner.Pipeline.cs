@@ -57,6 +57,7 @@ public static partial class CheckRunner
             CurrentDensityAPerMm2 = double.IsFinite(j) ? j : 0,
             OperatingPoint = point,
             PullOnRotorN = pulls,
+            BackIron = e.BackIron,
             SensorAnglesDeg = e.Sensors?.Sensors.Select(s => s.AngleDeg).ToArray() ?? Array.Empty<double>(),
             Diagnostics = e.Diagnostics.Select(d => (d.Id, d.Severity == Electrical.DiagnosticSeverity.Error, d.Key, d.Message)).ToArray(),
         };

@@ -22,6 +22,7 @@ public static partial class CheckRunner
         Collect(results, "winding", () => WindingRules.Run(c));
         Collect(results, "speed", () => SpeedRules.Run(c));
         Collect(results, "electrical", () => ElectricalRules.Run(c));
+        Collect(results, "steel", () => IronRules.Run(c));
         return new CheckReport(results);
     }
 

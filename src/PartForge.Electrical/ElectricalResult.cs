@@ -74,6 +74,9 @@ public sealed record ElectricalResult
     /// <summary>Axial magnetic forces on the rotors (computed where a rotor feels a net pull: dual-rotor); null otherwise.</summary>
     public MagneticPullResult? Pull { get; init; }
 
+    /// <summary>Flux density in each steel face behind the magnets (back iron or a steel rotor) and its image strength; empty without steel.</summary>
+    public IReadOnlyList<Field.BackIronFluxResult> BackIron { get; init; } = Array.Empty<Field.BackIronFluxResult>();
+
     public required IReadOnlyList<Diagnostic> Diagnostics { get; init; }
 
     public bool HasErrors => Diagnostics.Any(d => d.Severity == DiagnosticSeverity.Error);

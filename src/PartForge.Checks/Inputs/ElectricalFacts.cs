@@ -35,4 +35,7 @@ public sealed record ElectricalFacts
 
     /// <summary>Errors and warnings of the electrical engine: (id, error?, key, message).</summary>
     public IReadOnlyList<(string Id, bool IsError, string Key, string Message)> Diagnostics { get; init; } = Array.Empty<(string, bool, string, string)>();
+
+    /// <summary>Flux in each steel face behind the magnets (the electrical engine's <c>BackIron</c>).</summary>
+    public IReadOnlyList<PartForge.Electrical.Field.BackIronFluxResult> BackIron { get; init; } = Array.Empty<PartForge.Electrical.Field.BackIronFluxResult>();
 }

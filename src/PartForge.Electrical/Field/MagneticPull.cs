@@ -46,7 +46,7 @@ public static class MagneticPull
     }
 
     /// <summary>The forces of a machine (see <see cref="MagneticPullResult"/>).</summary>
-    public static MagneticPullResult Compute(MachineModel machine)
+    public static MagneticPullResult Compute(MachineModel machine, IReadOnlyList<BackIronFluxResult>? ironFlux = null)
     {
         var g = machine.Magnets.Shape;
         double br = machine.Magnets.BrTesla;
@@ -54,18 +54,21 @@ public static class MagneticPull
         int poles = machine.Poles;
         double far = RotorField.DefaultFarFactor;
         var mags = stack.OfKind(SlabKind.Magnet).OrderByDescending(s => s.ZMax).ToList();
-        var irons = stack.OfKind(SlabKind.BackIron).OrderByDescending(s => s.ZMax).ToList();
-        bool iron = machine.Rotor.BackIronThicknessMm is not null && machine.Layout.AllowsBackIron && irons.Count > 0;
+        // Steel faces (back iron or a steel rotor), front first, with their image strengths (1 unless saturated).
+        var planes = (ironFlux?.Select(f => (f.Plane, f.ImageStrength)).ToList()
+                      ?? IronPlane.Of(machine).Select(p => (Plane: p, ImageStrength: 1.0)).ToList())
+            .OrderByDescending(p => p.Plane.FaceZMm).ToList();
+        bool iron = planes.Count > 0;
         List<MagnetSource> Ring(AxialSlab m) => Enumerable.Range(0, poles)
             .Select(k => new MagnetSource(g, k * 360.0 / poles, m.ZMin, m.ZMax, (k % 2 == 0 ? 1 : -1) * br, far)).ToList();
         var front = Ring(mags[0]);
         var target = front[0];
-        double frontIronPlane = iron ? irons[0].ZMin : 0;
+        double frontIronPlane = iron ? planes[0].Plane.FaceZMm : 0;
 
         double toIron = 0;
         if (iron)
         {
-            var imgs = front.Select(m => m.ImageIn(frontIronPlane, far)).ToList();
+            var imgs = front.Select(m => m.ImageIn(frontIronPlane, far, planes[0].ImageStrength)).ToList();
             double gap = 2 * (frontIronPlane - target.ZMaxMm);
             // Touching (through pockets on the iron): the coplanar faces contribute their principal value, 0, so
             // the nearest face that matters is a magnet thickness away.
@@ -81,13 +84,15 @@ public static class MagneticPull
             faceToFace = target.ZMinMm - back[0].ZMaxMm;
             if (iron)
             {
-                double? upperIron = irons.Count >= 1 ? irons[0].ZMin : null;
-                double? lowerIron = irons.Count >= 2 ? irons[^1].ZMax : null;
+                double? upperIron = planes.Count >= 1 ? planes[0].Plane.FaceZMm : null;
+                double? lowerIron = planes.Count >= 2 ? planes[^1].Plane.FaceZMm : null;
+                double ku = planes[0].ImageStrength, kl = planes.Count >= 2 ? planes[^1].ImageStrength : 1;
                 double lowerMax = back[0].ZMaxMm, s0 = faceToFace;
-                perMagnet = Math.Abs(new IronPullSeries(g, poles, br, far).PullN(lowerMax + s0, lowerMax, upperIron, lowerIron)) / poles;
+                var series = new IronPullSeries(g, poles, br, far);
+                perMagnet = Math.Abs(series.PullN(lowerMax + s0, lowerMax, upperIron, lowerIron)) / poles;
                 // The assembly curve: a Gauss order lower and the series to 1e-3 (a fraction of a percent; tested).
                 var coarse = new IronPullSeries(g, poles, br, far, CurveOrder, CurveTolerance);
-                curve = Curve(s0, perMagnet * poles, s => coarse.PullN(lowerMax + s, lowerMax, upperIron + (s - s0), lowerIron));
+                curve = Curve(s0, perMagnet * poles, s => coarse.PullN(lowerMax + s, lowerMax, upperIron + (s - s0), lowerIron, ku, kl));
             }
             else
             {
@@ -104,7 +109,7 @@ public static class MagneticPull
             FaceToFaceMm = faceToFace,
             AssemblyCurve = curve,
             Method = iron
-                ? "surface-charge force between uniformly magnetised magnets; back iron as ideal unsaturated iron by the full image series of both iron faces (magnet-magnet, magnet-iron and iron-iron attraction), summed to 1e-4."
+                ? "surface-charge force between uniformly magnetised magnets; steel faces by the full image series of both faces (magnet-magnet, magnet-iron and iron-iron attraction), summed to 1e-4; images weakened where the steel saturates (flux per pole limited to the steel section at 2.0 T)."
                 : "surface-charge force between uniformly magnetised magnets (mu_r = 1, no iron).",
         };
     }

@@ -67,7 +67,10 @@ public static class ResultsBuilder
         var pull = ev.Electrical.Pull;
         var perRotor = d.Layout.Rotors.Select(r => (r.Name, pull?.RotorToRotorN ?? 0)).ToArray();
         string method = pull?.Method ?? "no net axial pull on a rotor: a coreless stator holds no iron, and a rotor's pull on its own back iron is internal to it";
-        return new MechanicsSection(rotatingKg, magnetG, perRotor, method);
+        return new MechanicsSection(rotatingKg, magnetG, perRotor, method)
+        {
+            PullCurve = pull?.AssemblyCurve.Select(c => (c.FaceToFaceMm, c.PullN)).ToArray() ?? Array.Empty<(double, double)>(),
+        };
     }
 
     private static IReadOnlyList<BomEntry> BomOf(MachineModel d, ElectricalResult e, PartSet parts)

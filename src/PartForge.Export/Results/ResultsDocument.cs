@@ -127,7 +127,12 @@ public sealed record MotorEntry(string Drive, double SupplyVoltageV, double Swit
 /// The rotating assembly: its mass (rotating parts and magnets), one magnet's mass, and the axial pull on each
 /// rotor at the running gap (<c>pull_n</c>, by rotor part name), with the model used.
 /// </summary>
-public sealed record MechanicsSection(double RotatingMassKg, double MagnetMassG, IReadOnlyList<(string Part, double N)> PullN, string PullMethod);
+public sealed record MechanicsSection(double RotatingMassKg, double MagnetMassG, IReadOnlyList<(string Part, double N)> PullN, string PullMethod)
+{
+    /// <summary>The pull between the rotors against the face-to-face gap of their magnets while they are brought
+    /// together (<c>pull_curve</c>; empty unless dual-rotor), first point at the running gap.</summary>
+    public IReadOnlyList<(double FaceToFaceMm, double PullN)> PullCurve { get; init; } = Array.Empty<(double, double)>();
+}
 
 /// <summary>One line of the bill of materials.</summary>
 public sealed record BomEntry(string Category, string Item, string Specification, double Quantity, string Unit, string Notes);

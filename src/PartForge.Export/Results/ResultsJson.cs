@@ -250,6 +250,15 @@ public static class ResultsJson
         foreach (var (part, n) in m.PullN) Num(w, part, n, "mechanics.pull_n." + part);
         w.WriteEndObject();
         w.WriteString("pull_method", m.PullMethod);
+        w.WriteStartArray("pull_curve");
+        foreach (var (gap, n) in m.PullCurve)
+        {
+            w.WriteStartObject();
+            Num(w, "face_to_face_mm", gap, "mechanics.pull_curve.face_to_face_mm");
+            Num(w, "pull_n", n, "mechanics.pull_curve.pull_n");
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
         w.WriteEndObject();
     }
 
