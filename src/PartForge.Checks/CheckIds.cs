@@ -46,4 +46,8 @@ public static class CheckIds
     public const string CoilTemperature = "coil-temperature";
     /// <summary>A diagnostic of the electrical engine (impossible combination, extra-low-voltage warning).</summary>
     public const string Electrical = "electrical";
+    /// <summary>Tensile stress in each stud or bolt of a joint (ISO 898-1 tensile stress area, class 8.8) under the clamp the torque and pull need.</summary>
+    public const string FastenerTension = "fastener-tension";
+    /// <summary>Bearing stress a fastener puts on a clamped part: under its washer, and on the hole wall if the joint slips.</summary>
+    public const string FastenerBearing = "fastener-bearing";
 }

@@ -21,7 +21,9 @@ public static partial class CheckRunner
         Collect(results, "winding", () => WindingRules.Run(c));
         Collect(results, "speed", () => SpeedRules.Run(c));
         Collect(results, "electrical", () => ElectricalRules.Run(c));
-        return new CheckReport(results);
+        Collect(results, "hardware", () => HardwareRules.Run(c));
+        var joints = Hardware.FastenerPlanner.Plan(design, electrical, parts);
+        return new CheckReport(results) { Joints = joints, Assembly = Hardware.AssemblyPlanner.Plan(design, electrical, parts, joints) };
     }
 
     private static void Collect(List<CheckResult> into, string group, Func<IEnumerable<CheckResult>> rule)

@@ -37,7 +37,7 @@ public static class ResultsBuilder
             }).ToArray() ?? [],
             Operating = OperatingOf(ev.Machine, ev.Electrical),
             Mechanics = MechanicsOf(ev, countTriangles),
-            Bom = ev.Parts is { } ps && countTriangles ? BomOf(ev.Machine, ev.Electrical, ps) : [],
+            Bom = ev.Parts is { } ps && countTriangles ? BomOf(ev.Machine, ev.Electrical, ps, ev.Checks.Joints) : [],
         };
     }
 
@@ -70,10 +70,10 @@ public static class ResultsBuilder
         return new MechanicsSection(rotatingKg, magnetG, perRotor, method);
     }
 
-    private static IReadOnlyList<BomEntry> BomOf(MachineModel d, ElectricalResult e, PartSet parts)
+    private static IReadOnlyList<BomEntry> BomOf(MachineModel d, ElectricalResult e, PartSet parts, IReadOnlyList<PartForge.Checks.Hardware.FastenerJoint> joints)
     {
         var view = ElectricalView.From(d, e);
-        return BomBuilder.Build(d, view.TotalWireM, view.WireGramsPerMetre, ReportBuilder.BomParts(parts)).Lines
+        return BomBuilder.Build(d, view.TotalWireM, view.WireGramsPerMetre, ReportBuilder.BomParts(parts), joints).Lines
             .Select(l => new BomEntry(l.Category, l.Item, l.Specification, l.Quantity, l.Unit, l.Notes)).ToArray();
     }
 
