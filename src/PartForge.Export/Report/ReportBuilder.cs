@@ -45,6 +45,7 @@ public static class ReportBuilder
             SectionBodies = bodies,
             SectionDimensions = dims,
             Bom = BomBuilder.Build(d, e.TotalWireM, e.WireGramsPerMetre, BomParts(parts), checks.Joints),
+            Assembly = checks.Assembly,
             Tables = e.Tables,
             Notes = e.Notes.Concat(parts.Parts.SelectMany(p => p.Notes.Select(n => n.StartsWith(p.Name, StringComparison.Ordinal) ? n : $"{p.Name}: {n}"))).ToArray(),
             Previews = previews ?? [],

@@ -37,6 +37,7 @@ public static class ResultsBuilder
             }).ToArray() ?? [],
             Operating = OperatingOf(ev.Machine, ev.Electrical),
             Mechanics = MechanicsOf(ev, countTriangles),
+            Assembly = checks.Assembly,
             Bom = ev.Parts is { } ps && countTriangles ? BomOf(ev.Machine, ev.Electrical, ps, ev.Checks.Joints) : [],
         };
     }
