@@ -50,4 +50,6 @@ public static class CheckIds
     public const string FastenerTension = "fastener-tension";
     /// <summary>Bearing stress a fastener puts on a clamped part: under its washer, and on the hole wall if the joint slips.</summary>
     public const string FastenerBearing = "fastener-bearing";
+    /// <summary>Jacking screws of the last rotor against the full pull: screw stress and nut bearing on the printed trap, as a utilisation.</summary>
+    public const string JackingScrew = "jacking-screw";
 }

@@ -9,6 +9,9 @@ public sealed record CheckReport(IReadOnlyList<CheckResult> Checks)
     /// <summary>The ordered assembly steps with the pull at each (empty when no parts were made).</summary>
     public IReadOnlyList<Hardware.AssemblyStep> Assembly { get; init; } = [];
 
+    /// <summary>The last rotor's jacking screws, or null when it has none.</summary>
+    public Hardware.JackingSet? Jacks { get; init; }
+
     public int FailCount => Checks.Count(c => c.Status == CheckStatus.Fail);
     public int WarnCount => Checks.Count(c => c.Status == CheckStatus.Warn);
 

@@ -16,7 +16,7 @@ public static class AssemblyPlanner
     public const string Flying = "a loose magnet jumps to steel (back iron, tools, the bench) and shatters or pinches: keep steel tools away and place magnets one at a time";
     public const string Spacer = "the non-magnetic spacer must stay in place while the parts close: without it the magnets pull the rotor onto the stator";
 
-    public static IReadOnlyList<AssemblyStep> Plan(MachineModel d, ElectricalFacts e, IReadOnlyList<PartView> parts, IReadOnlyList<FastenerJoint> joints)
+    public static IReadOnlyList<AssemblyStep> Plan(MachineModel d, ElectricalFacts e, IReadOnlyList<PartView> parts, IReadOnlyList<FastenerJoint> joints, JackingSet? jacks = null)
     {
         var steps = new List<(string Action, double Pull, string Note, string? Caution)>();
         bool iron = parts.Any(p => p.Id.Role == PartRole.BackIron);
@@ -42,8 +42,16 @@ public static class AssemblyPlanner
                 : ($"fix {back} to the shaft and fit the hub spacer on its inner face", 0, "one rotor only: no pull", null));
             steps.Add(("fix the stator to its frame around the hub spacer, centred on the shaft, its face parallel to the rotor", 0,
                 "the coreless stator holds no iron: no pull on it", Fingers));
-            steps.Add(($"lower {front} (magnets facing the stator, rim notches in line with {back}'s) slowly over the studs onto the hub spacer, holding it against the pull; never let go of it on the way down", pull,
-                $"the rotors pull together with up to {F(pull)} N at the running gap (electrical result; less while they are further apart)", Fingers + "; " + Spacer));
+            if (jacks is { } jk)
+            {
+                steps.Add(($"press a {jk.Thread.Size} hex nut into each of {front}'s {jk.Count} nut traps; run the {jk.Count} jacking screws ({jk.Thread.Size} x {F(jk.ScrewLengthMm)}) in from the back until they stand {F(JackingSet.LiftMm)} mm proud of the stator-side face", 0,
+                    "away from the stack: no pull", null));
+                steps.Add(($"set {front} (magnets facing the stator, rim notches in line with {back}'s) over the studs with the jacking screws' tips on the hub spacer, then back the screws off a half turn each in turn until it seats on the spacer", pull,
+                    $"the screws hold the rotors' pull, rising to {F(pull)} N at the running gap (electrical result; less while they are further apart)", Fingers + "; " + Spacer));
+            }
+            else
+                steps.Add(($"lower {front} (magnets facing the stator, rim notches in line with {back}'s) slowly over the studs onto the hub spacer, holding it against the pull; never let go of it on the way down", pull,
+                    $"the rotors pull together with up to {F(pull)} N at the running gap (electrical result; less while they are further apart)", Fingers + "; " + Spacer));
             steps.Add((stud is { } s2 ? $"fit washers and nuts on the studs above {front}{(iron ? "'s back iron" : "")} and tighten them evenly in a star pattern to the clamp the report gives" : $"fix {front} to the shaft",
                 pull, "the hub spacer carries the pull in compression", null));
         }

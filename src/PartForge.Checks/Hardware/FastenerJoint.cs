@@ -1,6 +1,8 @@
 using PartForge.Design.Materials;
 using PartForge.Design.Parts;
 
+using PartForge.Design.Hardware;
+
 namespace PartForge.Checks.Hardware;
 
 /// <summary>How a joint's fasteners are made.</summary>

@@ -3,6 +3,8 @@ using PartForge.Design.Machines;
 using PartForge.Design.Parts;
 using PartForge.Parts;
 
+using PartForge.Design.Hardware;
+
 namespace PartForge.Checks.Hardware;
 
 /// <summary>

@@ -1,5 +1,7 @@
 using PartForge.Checks.Hardware;
+using PartForge.Design.Hardware;
 using PartForge.Design.Parts;
+using PartForge.Parts;
 using static PartForge.Checks.Judge;
 
 namespace PartForge.Checks.Rules;
@@ -19,6 +21,47 @@ internal static class HardwareRules
             yield return Tension(j, t);
             yield return Bearing(j, t);
         }
+        if (Jacks(c) is { } jr) yield return jr;
+    }
+
+    /// <summary>
+    /// The jacking screws of the last rotor (its <see cref="FeatureKind.JackHole"/> features) carry the whole pull
+    /// at the smallest separation the electrical result gives (the running gap, where the hub spacer stops the
+    /// rotor), shared equally: the screw's stress over its tensile stress area against half of class 8.8's proof
+    /// stress, and the nut's hex face on the trap floor against the rotor material's allowable stress. The value
+    /// is the larger utilisation (1 = at the limit).
+    /// </summary>
+    private static CheckResult? Jacks(CheckContext c)
+    {
+        var rotor = c.Parts.FirstOrDefault(p => p.Id.Role == PartRole.Rotor && p.OfKind(FeatureKind.JackHole).Any());
+        if (rotor is null) return null;
+        var holes = rotor.OfKind(FeatureKind.JackHole).ToList();
+        double hole = 2 * (holes[0].Contour.Circle?.Radius ?? 0);
+        if (MetricThreads.ForHole(hole) is not { } pick) return null;
+        var t = pick.Thread;
+        double pull = c.Pull(rotor.Id);
+        double each = pull / holes.Count;
+        double screw = each / t.StressAreaMm2 / FastenerSteel.AllowableStressMpa;
+        double bearingMpa = each / t.NutBearingAreaMm2(hole);
+        double bearing = bearingMpa / rotor.Material.AllowableStressMpa;
+        double u = Math.Max(screw, bearing);
+        var (status, margin) = AtMost(u, 1, MaxRelativeBand);
+        string msg = $"{rotor.Name}: {holes.Count} x {t.Size} jacking screws share the {F(pull)} N pull at the running gap ({F(each)} N each): screw {F(each / t.StressAreaMm2)} MPa of {F(FastenerSteel.AllowableStressMpa)}, nut on the {rotor.Material.Name} trap floor {F(bearingMpa)} MPa of {F(rotor.Material.AllowableStressMpa)}";
+        if (status != CheckStatus.Pass)
+        {
+            var bigger = MetricThreads.All.FirstOrDefault(m => m.NominalMm > t.NominalMm
+                && each / m.StressAreaMm2 <= FastenerSteel.AllowableStressMpa * (1 - MaxRelativeBand)
+                && each / m.NutBearingAreaMm2(m.MediumHoleMm) <= rotor.Material.AllowableStressMpa * (1 - MaxRelativeBand));
+            int n = (int)Math.Ceiling(holes.Count * u / (1 - MaxRelativeBand));
+            msg += "; " + (n <= 64 ? $"raise rotor.bolt_circle.count to {Math.Max(n, holes.Count + 1)} (one jack between each pair of studs)" : "")
+                + (bigger is null ? "" : $"{(n <= 64 ? ", or " : "raise ")}rotor.bolt_circle.hole to {F(bigger.MediumHoleMm)} ({bigger.Size})");
+        }
+        return new CheckResult
+        {
+            Id = CheckIds.JackingScrew, Part = rotor.Id, Status = status, Value = u, Limit = 1, Unit = "1", Margin = margin, Message = msg,
+            Where = new CheckLocation($"{rotor.Name} nut traps"),
+            Basis = "pull at the running gap (electrical engine) shared by the jacking screws; A_s = pi/4 (d - 0.9382 P)^2 (ISO 898-1), class 8.8 proof stress 580 MPa halved; ISO 4032 nut hex face (from memory) on the printed trap floor against the material table's strength / safety factor",
+        };
     }
 
     private static CheckResult Tension(FastenerJoint j, MetricThread t)

@@ -1,5 +1,6 @@
 using System.Globalization;
 using PartForge.Checks.Hardware;
+using PartForge.Design.Hardware;
 using PartForge.Design.Machines;
 using PartForge.Design.Parts;
 
@@ -14,7 +15,7 @@ public static class BomBuilder
     /// <summary>Margin added on every side of a cut part's bounding box for the sheet size, mm (our choice).</summary>
     public const double SheetMarginMm = 10;
 
-    public static BillOfMaterials Build(MachineModel d, double electricalWireTotalM, double wireGramsPerMetre, IReadOnlyList<BomPart> parts, IReadOnlyList<FastenerJoint> joints)
+    public static BillOfMaterials Build(MachineModel d, double electricalWireTotalM, double wireGramsPerMetre, IReadOnlyList<BomPart> parts, IReadOnlyList<FastenerJoint> joints, JackingSet? jacks = null)
     {
         var lines = new List<BomLine>();
         int rotors = RotorCount(d), stators = StatorCount(d);
@@ -45,6 +46,9 @@ public static class BomBuilder
         }
 
         foreach (var j in joints) lines.Add(Fastener(j));
+        if (jacks is { } jk)
+            lines.Add(new BomLine("fasteners", $"{jk.Thread.Size} jacking screw with hex nut", $"fully threaded, property class {FastenerSteel.PropertyClass} (ISO 898-1), length at least {F(Round(jk.ScrewLengthMm, 3))} mm; ISO 4032 nut in the nut trap", jk.Count, "sets",
+                $"{jk.Rotor.Name}: lowers it onto the hub spacer against {F(Round(jk.PullN, 1))} N; length = {F(Round(jk.PassMm, 3))} mm through the rotor and its back iron + {F(JackingSet.LiftMm)} mm lift"));
 
         if (d.Sensor.Kind != SensorKind.None)
         {

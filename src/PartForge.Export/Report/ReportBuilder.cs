@@ -44,7 +44,7 @@ public static class ReportBuilder
             Drawings = parts.Parts.Select(p => PartSketches.For(d, p)).ToArray(),
             SectionBodies = bodies,
             SectionDimensions = dims,
-            Bom = BomBuilder.Build(d, e.TotalWireM, e.WireGramsPerMetre, BomParts(parts), checks.Joints),
+            Bom = BomBuilder.Build(d, e.TotalWireM, e.WireGramsPerMetre, BomParts(parts), checks.Joints, checks.Jacks),
             Assembly = checks.Assembly,
             Tables = e.Tables,
             Notes = e.Notes.Concat(parts.Parts.SelectMany(p => p.Notes.Select(n => n.StartsWith(p.Name, StringComparison.Ordinal) ? n : $"{p.Name}: {n}"))).ToArray(),

@@ -38,7 +38,7 @@ public static class ResultsBuilder
             Operating = OperatingOf(ev.Machine, ev.Electrical),
             Mechanics = MechanicsOf(ev, countTriangles),
             Assembly = checks.Assembly,
-            Bom = ev.Parts is { } ps && countTriangles ? BomOf(ev.Machine, ev.Electrical, ps, ev.Checks.Joints) : [],
+            Bom = ev.Parts is { } ps && countTriangles ? BomOf(ev.Machine, ev.Electrical, ps, ev.Checks.Joints, ev.Checks.Jacks) : [],
         };
     }
 
@@ -71,10 +71,10 @@ public static class ResultsBuilder
         return new MechanicsSection(rotatingKg, magnetG, perRotor, method);
     }
 
-    private static IReadOnlyList<BomEntry> BomOf(MachineModel d, ElectricalResult e, PartSet parts, IReadOnlyList<PartForge.Checks.Hardware.FastenerJoint> joints)
+    private static IReadOnlyList<BomEntry> BomOf(MachineModel d, ElectricalResult e, PartSet parts, IReadOnlyList<PartForge.Checks.Hardware.FastenerJoint> joints, PartForge.Checks.Hardware.JackingSet? jacks)
     {
         var view = ElectricalView.From(d, e);
-        return BomBuilder.Build(d, view.TotalWireM, view.WireGramsPerMetre, ReportBuilder.BomParts(parts), joints).Lines
+        return BomBuilder.Build(d, view.TotalWireM, view.WireGramsPerMetre, ReportBuilder.BomParts(parts), joints, jacks).Lines
             .Select(l => new BomEntry(l.Category, l.Item, l.Specification, l.Quantity, l.Unit, l.Notes)).ToArray();
     }
 

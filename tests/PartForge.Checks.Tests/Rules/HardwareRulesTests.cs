@@ -1,4 +1,5 @@
 using PartForge.Checks.Hardware;
+using PartForge.Design.Hardware;
 using PartForge.Checks.Tests.Pipeline;
 using PartForge.Design.Machines;
 using PartForge.Design.Parts;

@@ -52,7 +52,7 @@ public class BomCsvTests
     [InlineData(4.2, "M3", "coarse or looser")]
     public void Picks_the_largest_bolt_that_passes_the_hole(double hole, string size, string series)
     {
-        var r = PartForge.Checks.Hardware.MetricThreads.ForHole(hole);
+        var r = PartForge.Design.Hardware.MetricThreads.ForHole(hole);
         Assert.NotNull(r);
         Assert.Equal(size, r.Value.Thread.Size);
         Assert.Equal(series, r.Value.Series);
@@ -61,6 +61,6 @@ public class BomCsvTests
     [Fact]
     public void A_hole_smaller_than_the_smallest_clearance_takes_no_bolt()
     {
-        Assert.Null(PartForge.Checks.Hardware.MetricThreads.ForHole(1.5));
+        Assert.Null(PartForge.Design.Hardware.MetricThreads.ForHole(1.5));
     }
 }
