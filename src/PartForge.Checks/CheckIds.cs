@@ -52,4 +52,10 @@ public static class CheckIds
     public const string Electrical = "electrical";
     /// <summary>Flux density in the steel behind the magnets (back iron or a steel rotor) against steel's saturation.</summary>
     public const string BackIronSaturation = "back-iron-saturation";
+    /// <summary>Tensile stress in each stud or bolt of a joint (ISO 898-1 tensile stress area, class 8.8) under the clamp the torque and pull need.</summary>
+    public const string FastenerTension = "fastener-tension";
+    /// <summary>Bearing stress a fastener puts on a clamped part: under its washer, and on the hole wall if the joint slips.</summary>
+    public const string FastenerBearing = "fastener-bearing";
+    /// <summary>Jacking screws of the last rotor against the full pull: screw stress and nut bearing on the printed trap, as a utilisation.</summary>
+    public const string JackingScrew = "jacking-screw";
 }

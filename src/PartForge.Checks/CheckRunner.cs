@@ -23,7 +23,10 @@ public static partial class CheckRunner
         Collect(results, "speed", () => SpeedRules.Run(c));
         Collect(results, "electrical", () => ElectricalRules.Run(c));
         Collect(results, "steel", () => IronRules.Run(c));
-        return new CheckReport(results);
+        Collect(results, "hardware", () => HardwareRules.Run(c));
+        var joints = Hardware.FastenerPlanner.Plan(design, electrical, parts);
+        var jacks = Hardware.JackingSet.From(electrical, parts);
+        return new CheckReport(results) { Joints = joints, Jacks = jacks, Assembly = Hardware.AssemblyPlanner.Plan(design, electrical, parts, joints, jacks) };
     }
 
     private static void Collect(List<CheckResult> into, string group, Func<IEnumerable<CheckResult>> rule)

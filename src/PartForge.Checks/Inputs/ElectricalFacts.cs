@@ -30,6 +30,12 @@ public sealed record ElectricalFacts
     /// <summary>Axial magnetic pull on each rotor toward the stator side, N, by rotor.</summary>
     public IReadOnlyDictionary<PartId, double> PullOnRotorN { get; init; } = new Dictionary<PartId, double>();
 
+    /// <summary>Shaft torque at the operating point the fasteners must carry, N m (motor: the stall torque; 0 when not computed).</summary>
+    public double ShaftTorqueNm { get; init; }
+
+    /// <summary>Attraction between one magnet and its rotor's back iron, N (0 without back iron).</summary>
+    public double MagnetToBackIronN { get; init; }
+
     /// <summary>Mechanical sensor angles (machine frame), degrees.</summary>
     public IReadOnlyList<double> SensorAnglesDeg { get; init; } = Array.Empty<double>();
 

@@ -40,6 +40,9 @@ public sealed record ReportInput
 
     public required BillOfMaterials Bom { get; init; }
 
+    /// <summary>The ordered assembly steps with the pull at each.</summary>
+    public IReadOnlyList<PartForge.Checks.Hardware.AssemblyStep> Assembly { get; init; } = [];
+
     /// <summary>Further tables (winding layout, parts list).</summary>
     public IReadOnlyList<ReportTable> Tables { get; init; } = [];
 

@@ -23,6 +23,9 @@ public sealed record ResultsDocument
 
     /// <summary>The bill of materials, line by line (empty when no parts could be made).</summary>
     public IReadOnlyList<BomEntry> Bom { get; init; } = [];
+
+    /// <summary>The ordered assembly steps with the pull at each (empty when no parts were made).</summary>
+    public IReadOnlyList<PartForge.Checks.Hardware.AssemblyStep> Assembly { get; init; } = [];
 }
 
 /// <summary>pass / warn / fail and the counts; <see cref="Forced"/> when --force wrote a failing design.</summary>

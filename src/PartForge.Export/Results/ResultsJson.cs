@@ -82,6 +82,20 @@ public static class ResultsJson
                 w.WriteEndObject();
             }
             w.WriteEndArray();
+            w.WriteStartObject("assembly");
+            w.WriteStartArray("steps");
+            foreach (var s in doc.Assembly)
+            {
+                w.WriteStartObject();
+                w.WriteNumber("order", s.Order);
+                w.WriteString("action", s.Action);
+                Num(w, "pull_n", s.PullN, "assembly.steps.pull_n");
+                w.WriteString("pull_note", s.PullNote);
+                if (s.Caution is { } c) w.WriteString("caution", c); else w.WriteNull("caution");
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
             w.WriteEndObject();
         }
         ms.WriteByte((byte)'\n');
