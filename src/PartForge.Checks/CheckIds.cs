@@ -44,6 +44,10 @@ public static class CheckIds
     public const string CurrentDensity = "current-density";
     /// <summary>Winding temperature against the softening point of the former and stator materials.</summary>
     public const string CoilTemperature = "coil-temperature";
+    /// <summary>The coil seats (former footprint plus the seat clearance) lie radially inside the stator ring.</summary>
+    public const string CoilSeatInRing = "coil-seat-in-ring";
+    /// <summary>The windings face the magnet track: radial overlap of the winding with the magnets.</summary>
+    public const string CoilFacesMagnets = "coil-faces-magnets";
     /// <summary>A diagnostic of the electrical engine (impossible combination, extra-low-voltage warning).</summary>
     public const string Electrical = "electrical";
 }

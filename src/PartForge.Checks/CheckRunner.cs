@@ -19,6 +19,7 @@ public static partial class CheckRunner
         Collect(results, "rotation sweep", () => SweepRules.Run(c));
         Collect(results, "printability", () => PrintRules.Run(c));
         Collect(results, "winding", () => WindingRules.Run(c));
+        Collect(results, "coil placement", () => CoilPlacementRules.Run(c));
         Collect(results, "speed", () => SpeedRules.Run(c));
         Collect(results, "electrical", () => ElectricalRules.Run(c));
         return new CheckReport(results);
