@@ -48,6 +48,10 @@ public static class CheckIds
     public const string PrintBedFit = "print-bed-fit";
     /// <summary>A cut part fits a sheet the user has (with the edge spacing), and so the cutter's bed.</summary>
     public const string CutSheetFit = "cut-sheet-fit";
+    /// <summary>The coil seats (former footprint plus the seat clearance) lie radially inside the stator ring.</summary>
+    public const string CoilSeatInRing = "coil-seat-in-ring";
+    /// <summary>The windings face the magnet track: radial overlap of the winding with the magnets.</summary>
+    public const string CoilFacesMagnets = "coil-faces-magnets";
     /// <summary>A diagnostic of the electrical engine (impossible combination, extra-low-voltage warning).</summary>
     public const string Electrical = "electrical";
     /// <summary>Flux density in the steel behind the magnets (back iron or a steel rotor) against steel's saturation.</summary>
