@@ -33,7 +33,7 @@ public sealed class ThreeMfExport : ExportFormat
         if (printed.Length > 0)
         {
             yield return new PlannedFile(OutputNames.ThreeMf(scope.Machine.Name), this, printed, printed, "parts");
-            var plates = PrintPlates.Of(printed, scope.Machine.Printer, scope.Machine.Precision);
+            var plates = scope.All.PlatesOf(printed, scope.Machine.Printer, scope.Machine.Precision);
             for (int k = 0; k < plates.PlateCount && plates.PlateCount > 1; k++)
             {
                 var on = plates.Layout.Placements.Where(p => p.BinIndex == k).Select(p => p.PartId).ToHashSet();
@@ -54,7 +54,7 @@ public sealed class ThreeMfExport : ExportFormat
             var machine = context.Evaluation.Machine;
             int? only = file.Variant.StartsWith(PlateVariant, StringComparison.Ordinal) ? int.Parse(file.Variant[PlateVariant.Length..], System.Globalization.CultureInfo.InvariantCulture) : null;
             // A plate file's meshed parts are all the scope's printed parts: its plate is that plate of their layout.
-            var plates = PrintPlates.Of(file.MeshedParts, machine.Printer, machine.Precision);
+            var plates = context.Evaluation.Parts!.PlatesOf(file.MeshedParts, machine.Printer, machine.Precision);
             string title = only is { } k ? $"{name} plate {k + 1} of {plates.PlateCount}" : name;
             ThreeMfWriter.Write(stream, title, Objects(plates, only));
         }

@@ -60,7 +60,7 @@ public static class ReportBuilder
     {
         var printed = parts.Parts.Where(p => p.Process == PartProcess.Print).ToArray();
         if (printed.Length == 0) return [];
-        var plates = Parts.Fabrication.PrintPlates.Of(printed, d.Printer, d.Precision);
+        var plates = parts.PlatesOf(printed, d.Printer, d.Precision);
         static string F(double v) => v.ToString("0.#", System.Globalization.CultureInfo.InvariantCulture);
         var rows = new List<IReadOnlyList<string>>();
         for (int k = 0; k < plates.PlateCount; k++)
