@@ -82,7 +82,11 @@ public sealed class HardwareRulesTests
         double pull = f.PullOnRotorN[PartId.RotorFront];
         Assert.True(pull > 0);
         Assert.Equal(Enumerable.Range(1, report.Assembly.Count), report.Assembly.Select(s => s.Order));
-        var closing = report.Assembly.Single(s => s.Action.Contains("lower rotor-front", StringComparison.Ordinal));
+        // wind-duo's last rotor has jacking screws: the step that backs them off is where the rotors close.
+        var closing = report.Assembly.Single(s => s.Action.Contains("back the screws off", StringComparison.Ordinal));
+        Assert.Contains("set rotor-front", closing.Action);
+        Assert.NotNull(report.Jacks);
+        Assert.Equal(6, report.Jacks!.Count);
         Assert.Equal(pull, closing.PullN);
         Assert.Contains(AssemblyPlanner.Fingers, closing.Caution);
         Assert.Contains(AssemblyPlanner.Spacer, closing.Caution);
