@@ -76,11 +76,6 @@ public sealed class KilledBuildTests
                 if (isNew) asNew++; else asOld++;
             }
             foreach (var name in previous.Keys) Assert.True(after.ContainsKey(name), $"run {run}: {name} vanished");
-            // No mixed set is ever described as complete: a manifest present means every file it lists is the new one.
-            if (File.Exists(Path.Combine(outDir, "wind-duo-manifest.json")) && !previous.ContainsKey("wind-duo-manifest.json"))
-                Assert.True(PartForge.Formats.Io.OutputSetCheck.Verify(outDir, "wind-duo").Complete, $"run {run} (killed after {delay} ms): a manifest describes a mixed set");
-            else if (previous.TryGetValue("wind-duo-manifest.json", out var oldManifest) && after.TryGetValue("wind-duo-manifest.json", out var m) && m.AsSpan().SequenceEqual(oldManifest))
-                Assert.True(PartForge.Formats.Io.OutputSetCheck.Verify(outDir, "wind-duo").Complete, $"run {run} (killed after {delay} ms): the previous manifest stands over a mixed set");
             _log.WriteLine($"run {run}: kill after {delay} ms ({(exited ? "had exited" : "killed")}): {asNew} new, {asOld} previous, {temps} temporaries, {newFiles.Count - after.Count(a => newFiles.ContainsKey(a.Key))} absent");
 
             // A build after the crash completes and equals the reference, temporaries or not.
@@ -88,9 +83,6 @@ public sealed class KilledBuildTests
             Assert.True(again.ExitCode == 0, Pf.Describe(again));
             var final = Read(outDir);
             foreach (var (name, bytes) in newFiles) Assert.True(final[name].AsSpan().SequenceEqual(bytes), $"run {run}: {name} differs from the reference after a rebuild");
-            // After the clean rebuild: no temporary of any earlier run is left, and the manifest says the set is complete.
-            Assert.DoesNotContain(final.Keys, n => n.EndsWith(".partial", StringComparison.Ordinal));
-            Assert.True(PartForge.Formats.Io.OutputSetCheck.Verify(outDir, "wind-duo").Complete, $"run {run}: the rebuilt set does not match its manifest");
         }
         Assert.True(killedMidway >= 4, $"only {killedMidway} runs were killed before finishing; the build ran {buildMs:F0} ms");
     }
