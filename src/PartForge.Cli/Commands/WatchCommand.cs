@@ -33,6 +33,7 @@ public static class WatchCommand
                 Console.CancelKeyPress += onCancel;
                 using var term = System.Runtime.InteropServices.PosixSignalRegistration.Create(System.Runtime.InteropServices.PosixSignal.SIGTERM, c => { c.Cancel = true; stop.Cancel(); });
                 session.Built += server.Publish;
+                session.Figures += server.PublishFigures;
                 var log = (string line) => { lock (s.Out) { s.Out.WriteLine(line); s.Out.Flush(); } };
                 log($"watching {Path.GetFullPath(file)}; serving {session.OutputFolder} at http://127.0.0.1:{server.Port}/ (Ctrl+C stops)");
                 session.Run(stop.Token, log);

@@ -34,9 +34,13 @@ public sealed class WatchServer : IDisposable
     }
 
     /// <summary>Tells every open page the new state.</summary>
-    public void Publish(WatchState s)
+    public void Publish(WatchState s) => Send("event: build\ndata: " + s.Json() + "\n\n");
+
+    /// <summary>Tells every open page the new electrical figures (ahead of the build).</summary>
+    public void PublishFigures(string json) => Send("event: figures\ndata: " + json + "\n\n");
+
+    private void Send(string msg)
     {
-        string msg = "event: build\ndata: " + s.Json() + "\n\n";
         lock (_clients)
         {
             for (int i = _clients.Count - 1; i >= 0; i--)
@@ -175,9 +179,18 @@ public sealed class WatchServer : IDisposable
   var build = BUILD_NUMBER, box = document.getElementById('pf-live');
   try { var s = sessionStorage.getItem('pf-view'); if (s && window.pfView) window.pfView.restore(JSON.parse(s)); } catch (e) { }
   var es = new EventSource('/events');
+  es.addEventListener('figures', function (ev) {
+    var d = JSON.parse(ev.data);
+    Object.keys(d.rows).forEach(function (k) {
+      var td = document.querySelector('tr[data-key="' + k + '"] td.num');
+      if (td) td.textContent = d.rows[k];
+    });
+    document.body.setAttribute('data-live', 'figures-' + d.build);
+  });
   es.addEventListener('build', function (ev) {
     var d = JSON.parse(ev.data);
     if (d.ok) {
+      document.body.setAttribute('data-live', 'build-' + d.build);
       if (d.build !== build) { try { if (window.pfView) sessionStorage.setItem('pf-view', JSON.stringify(window.pfView.state())); } catch (e) { } es.close(); location.reload(); }
       else box.textContent = '';
       return;

@@ -30,6 +30,10 @@ public sealed class WatchSession : IDisposable
 
     public event Action<WatchState>? Built;
 
+    /// <summary>Told the JSON of the new electrical figures (report row key and shown value) as soon as the
+    /// electrical stage of a save is done, before the parts are meshed and written.</summary>
+    public event Action<string>? Figures;
+
     public WatchState State { get; private set; } = new(0, false, ["not built yet"], 0);
 
     public string OutputFolder => _output;
@@ -92,6 +96,7 @@ public sealed class WatchSession : IDisposable
         if (_lastHash is not null && hash.AsSpan().SequenceEqual(_lastHash)) return;
         _lastHash = hash;
         var clock = Stopwatch.StartNew();
+        if (Figures is not null) EarlyFigures();
         var r = BuildPipeline.Build(new BuildRequest { DesignPath = _design, OutputDir = _output, Force = true, Cache = _cache });
         double ms = clock.Elapsed.TotalMilliseconds;
         if (r.Status == PipelineStatus.BadInput || r.Written.Count == 0)
@@ -100,8 +105,31 @@ public sealed class WatchSession : IDisposable
             return;
         }
         _builds++;
-        log(FormattableString.Invariant($"build {_builds}: {r.Written.Count} files in {ms:0} ms ({(r.Status == PipelineStatus.ChecksFailed ? "checks failed, written marked failed" : "checks pass")}; meshes reused: {(_cache.LastReusedParts.Count == 0 ? "none" : string.Join(", ", _cache.LastReusedParts))})"));
+        log(FormattableString.Invariant($"build {_builds}: {r.Written.Count} files in {ms:0} ms ({(r.Status == PipelineStatus.ChecksFailed ? "checks failed, written marked failed" : "checks pass")}; meshes reused: {(_cache.LastReusedParts.Count == 0 ? "none" : string.Join(", ", _cache.LastReusedParts))}, previews reused {_cache.LastReusedPreviews}; {string.Join(", ", r.Timings.Select(t => FormattableString.Invariant($"{t.Stage} {t.Ms:0}")))} ms)"));
         Publish(new WatchState(_builds, true, [], ms), log);
+    }
+
+    /// <summary>
+    /// The electrical figures of the save, sent ahead of the full build so the page's numbers change at once
+    /// (the same rows, keys and formatting as the report's electrical table, from the same stage code). A save that
+    /// does not load or resolve sends nothing here; the full build then reports it.
+    /// </summary>
+    private void EarlyFigures()
+    {
+        var loaded = DesignLoader.Load(_design);
+        if (!loaded.Success) return;
+        var e = PartForge.Electrical.ElectricalEngine.Evaluate(loaded.Machine!);
+        if (e.Coil?.Outline is null) return;
+        var rows = PartForge.Export.Report.ElectricalView.From(loaded.Machine!, e).Rows.Where(r => r.Key.Length > 0);
+        var sb = new System.Text.StringBuilder("{\"build\":").Append(_builds + 1).Append(",\"rows\":{");
+        bool first = true;
+        foreach (var r in rows)
+        {
+            if (!first) sb.Append(',');
+            first = false;
+            sb.Append('"').Append(r.Key).Append("\":\"").Append(r.Value.Replace("\\", "\\\\", StringComparison.Ordinal).Replace("\"", "\\\"", StringComparison.Ordinal)).Append('"');
+        }
+        Figures?.Invoke(sb.Append("}}").ToString());
     }
 
     /// <summary>The problems of a save that did not build, design errors as "line L, column C: ...".</summary>
