@@ -92,6 +92,23 @@ public static class HtmlReport
               .Append("</td><td class=\"num\">").Append(Bom.BomCsv.Number(l.Quantity)).Append("</td><td>").Append(Esc(l.Unit)).Append("</td><td>").Append(Esc(l.Notes)).Append("</td></tr>\n");
         sb.Append("</tbody></table></section>\n");
 
+        if (r.Fabrication.Count > 0)
+        {
+            sb.Append("<section id=\"fabrication\"><h2>Making the parts</h2>\n");
+            foreach (var t in r.Fabrication) Table(sb, t);
+            sb.Append("</section>\n");
+        }
+
+        if (r.Assembly.Count > 0)
+        {
+            sb.Append("<section id=\"assembly\"><h2>Assembly steps</h2>\n<table id=\"assembly-table\"><thead><tr><th>step</th><th>action</th><th>pull (N)</th><th>caution</th></tr></thead><tbody>\n");
+            foreach (var s in r.Assembly)
+                sb.Append("<tr><td class=\"num\">").Append(s.Order.ToString(System.Globalization.CultureInfo.InvariantCulture)).Append("</td><td>").Append(Esc(s.Action))
+                  .Append("</td><td class=\"num\">").Append(Bom.BomCsv.Number(Math.Round(s.PullN, 1))).Append(s.PullNote.Length > 0 ? " (" + Esc(s.PullNote) + ")" : "")
+                  .Append("</td><td>").Append(Esc(s.Caution ?? "")).Append("</td></tr>\n");
+            sb.Append("</tbody></table></section>\n");
+        }
+
         if (r.Notes.Count > 0)
         {
             sb.Append("<section id=\"notes\"><h2>Notes and approximations</h2><ul>\n");

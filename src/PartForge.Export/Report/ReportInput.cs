@@ -40,8 +40,14 @@ public sealed record ReportInput
 
     public required BillOfMaterials Bom { get; init; }
 
+    /// <summary>The ordered assembly steps with the pull at each.</summary>
+    public IReadOnlyList<PartForge.Checks.Hardware.AssemblyStep> Assembly { get; init; } = [];
+
     /// <summary>Further tables (winding layout, parts list).</summary>
     public IReadOnlyList<ReportTable> Tables { get; init; } = [];
+
+    /// <summary>How the parts are laid out for the machines that make them (print plates, ...), one table each.</summary>
+    public IReadOnlyList<ReportTable> Fabrication { get; init; } = [];
 
     /// <summary>Notes on approximations and assumptions.</summary>
     public IReadOnlyList<string> Notes { get; init; } = [];
