@@ -20,9 +20,10 @@ public static class CliApp
         root.Subcommands.Add(PresetsCommand.Create());
         root.Subcommands.Add(SchemaCommand.Create());
         root.Subcommands.Add(SweepCommand.Create());
+        root.Subcommands.Add(WatchCommand.Create());
         root.SetAction(pr =>
         {
-            CommandAction.Err.WriteLine("partforge: give a command: check, build, init, presets, schema (see partforge --help)");
+            CommandAction.Err.WriteLine("partforge: give a command: check, build, init, presets, schema, sweep, watch (see partforge --help)");
             return ExitCodes.BadInput;
         });
         return root;

@@ -64,6 +64,30 @@ public sealed record PartModel
     /// <summary>How the mesh is made (set by <see cref="PartsBuilder"/>).</summary>
     internal Lazy<Mesh> MeshSource { init => _mesh = value; }
 
+    /// <summary>
+    /// A text that is equal for two parts exactly when their meshes are equal: the part, its height, the polygon
+    /// precision, the symmetry and every exact layer (contour by contour, numbers round-tripped). The mesher is a
+    /// pure function of these, so a later build with the same key can take this part's mesh
+    /// (<see cref="ReusingMeshOf"/>).
+    /// </summary>
+    public string GeometryKey => _geometryKey ??= Parts.GeometryKey.Of(this, _meshInputs);
+
+    private string? _geometryKey;
+
+    private string _meshInputs = "";
+
+    /// <summary>Precision and symmetry the mesh is made with (set by <see cref="PartsBuilder"/>).</summary>
+    internal string MeshInputs { init => _meshInputs = value; }
+
+    /// <summary>This part with <paramref name="earlier"/>'s solid and mesh (made or not) when both have the same
+    /// <see cref="GeometryKey"/>; else this part unchanged.</summary>
+    public PartModel ReusingMeshOf(PartModel earlier)
+    {
+        ArgumentNullException.ThrowIfNull(earlier);
+        if (earlier.Id != Id || earlier.GeometryKey != GeometryKey || earlier._mesh is null || earlier._solid is null) return this;
+        return this with { MeshSource = earlier._mesh, SolidSource = earlier._solid };
+    }
+
     /// <summary>For cut parts: the exact profile to cut (outer boundary and through holes); null for printed parts.</summary>
     public Profile? CutProfile { get; init; }
 

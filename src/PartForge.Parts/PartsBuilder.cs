@@ -135,6 +135,7 @@ public static partial class PartsBuilder
             ExactLayers = s.Layers,
             SolidSource = solid,
             MeshSource = mesh,
+            MeshInputs = FormattableString.Invariant($"{precision.GridMm:R}/{precision.ChordalToleranceMm:R}/{symmetry}"),
             CutProfile = s.CutProfile,
             Marks = s.Marks,
             Features = s.Features,

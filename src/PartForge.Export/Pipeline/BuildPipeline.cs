@@ -89,6 +89,7 @@ public static class BuildPipeline
         var problems = new List<string>();
         var (ev, problem) = TryEvaluate(machine, request.DesignPath, clock);
         if (ev == null) return Bad([problem!]);
+        if (request.Cache is { } cache && ev.Parts is { } fresh) ev = ev with { Parts = cache.Reuse(fresh) };
         HashSet<PartId>? partFilter = null;
         if (partWords != null && ev.Parts != null)
         {
@@ -129,7 +130,7 @@ public static class BuildPipeline
         if (MeshProblem(ev, plan.MeshedParts(ev.Parts), request.DesignPath) is { } meshProblem) return Bad([meshProblem]);
         clock.Lap("mesh");
         var doc = ResultsBuilder.Build(ev, plan.FilesByPart, forced: failed, countTriangles: plan.WritesResults);
-        var context = new ExportContext(ev, doc, failed, RenderPreviews(plan.Previews(), ev.Parts));
+        var context = new ExportContext(ev, doc, failed, RenderPreviews(plan.Previews(), ev.Parts, request.Cache));
         clock.Lap("previews");
         ManifestInfo info;
         try
@@ -190,7 +191,7 @@ public static class BuildPipeline
     /// Every preview the planned files show, each rendered once and all of them side by side on the machine's
     /// cores. Each picture is a pure function of its meshes, so the bytes do not depend on the order or the thread.
     /// </summary>
-    private static IReadOnlyDictionary<PreviewKey, byte[]> RenderPreviews(IReadOnlyList<PreviewKey> keys, PartSet parts)
+    private static IReadOnlyDictionary<PreviewKey, byte[]> RenderPreviews(IReadOnlyList<PreviewKey> keys, PartSet parts, BuildCache? cache)
     {
         var result = new System.Collections.Concurrent.ConcurrentDictionary<PreviewKey, byte[]>();
         // Longest first (the assembly draws every part; then parts by their triangles), handed out one at a
@@ -200,8 +201,11 @@ public static class BuildPipeline
             .ThenBy(k => k.SortKey, StringComparer.Ordinal).ToArray();
         var queue = System.Collections.Concurrent.Partitioner.Create(longestFirst, loadBalance: true);
         Parallel.ForEach(queue, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, k =>
-            result[k] = k.Part is { } id ? Previews.Part(parts.Get(id)) : Previews.Assembly(parts));
+            result[k] = cache is null ? Render(k)
+                : cache.Preview(k.Part is { } id ? BuildCache.PartPreviewKey(parts.Get(id)) : BuildCache.AssemblyPreviewKey(parts), () => Render(k)));
         return result;
+
+        byte[] Render(PreviewKey k) => k.Part is { } id ? Previews.Part(parts.Get(id)) : Previews.Assembly(parts);
     }
 
     private static (Evaluation? Ev, string? Problem) TryEvaluate(MachineModel d, string file, StageClock? clock = null)

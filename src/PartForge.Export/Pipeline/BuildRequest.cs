@@ -20,6 +20,10 @@ public sealed record BuildRequest
     /// <summary>Write even if a check fails, stamping the results and report as failed.</summary>
     public bool Force { get; init; }
 
+    /// <summary>Meshes and previews of the previous build of a long-running session, reused where a part did not
+    /// change (<see cref="BuildCache"/>); null for a one-off build.</summary>
+    public BuildCache? Cache { get; init; }
+
     /// <summary>
     /// The command line's interrupt guard: the build's output transaction is begun through it, so SIGINT or
     /// SIGTERM rolls the set back (and the guard's line names the folder). Null: no signal handling.
