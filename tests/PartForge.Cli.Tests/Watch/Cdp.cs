@@ -64,7 +64,11 @@ public sealed class Cdp : IDisposable
     }
 
     /// <summary>Sends one command and returns its result object.</summary>
-    public JsonElement Send(string method, object? parameters = null)
+    public JsonElement Send(string method, object? parameters = null) => Send(method, parameters, false)!.Value;
+
+    /// <summary>Sends one command; with <paramref name="duringNavigation"/>, an answer that the page navigated away
+    /// (the live page reloads itself after a good build) is null instead of a failure.</summary>
+    private JsonElement? Send(string method, object? parameters, bool duringNavigation)
     {
         int id = ++_id;
         var msg = JsonSerializer.Serialize(new Dictionary<string, object?> { ["id"] = id, ["method"] = method, ["params"] = parameters ?? new Dictionary<string, object>() });
@@ -83,7 +87,13 @@ public sealed class Cdp : IDisposable
             } while (!r.EndOfMessage);
             var doc = JsonDocument.Parse(ms.ToArray());
             if (!doc.RootElement.TryGetProperty("id", out var got) || got.GetInt32() != id) continue; // an event
-            if (doc.RootElement.TryGetProperty("error", out var err)) Assert.Fail($"{method}: {err}");
+            if (doc.RootElement.TryGetProperty("error", out var err))
+            {
+                string text = err.ToString();
+                if (duringNavigation && (text.Contains("navigated or closed", StringComparison.Ordinal) || text.Contains("Cannot find context", StringComparison.Ordinal)))
+                    return null;
+                Assert.Fail($"{method}: {err}");
+            }
             return doc.RootElement.GetProperty("result").Clone();
         }
     }
@@ -91,7 +101,8 @@ public sealed class Cdp : IDisposable
     /// <summary>The value of a script expression (returned by value; null when it throws or is undefined).</summary>
     public JsonElement? Eval(string expression)
     {
-        var r = Send("Runtime.evaluate", new Dictionary<string, object> { ["expression"] = expression, ["returnByValue"] = true });
+        // Null while the page reloads: callers poll.
+        if (Send("Runtime.evaluate", new Dictionary<string, object> { ["expression"] = expression, ["returnByValue"] = true }, true) is not { } r) return null;
         if (r.TryGetProperty("exceptionDetails", out _)) return null;
         return r.GetProperty("result").TryGetProperty("value", out var v) ? v : null;
     }
