@@ -42,8 +42,11 @@ public static class CheckIds
     public const string MagnetPullOut = "magnet-pull-out";
     /// <summary>Current density in the coil wire at the operating point.</summary>
     public const string CurrentDensity = "current-density";
-    /// <summary>Winding temperature against the softening point of the former and stator materials.</summary>
+    /// <summary>Computed steady winding temperature against coils.max_temperature and the softening points of the former and stator materials.</summary>
     public const string CoilTemperature = "coil-temperature";
+
+    /// <summary>The magnets' estimated operating temperature against their grade suffix's maximum working temperature.</summary>
+    public const string MagnetTemperature = "magnet-temperature";
     /// <summary>A printed part fits the printer: its footprint in printing orientation on the bed (in a quarter turn), its height under bed_z.</summary>
     public const string PrintBedFit = "print-bed-fit";
     /// <summary>A cut part fits a sheet the user has (with the edge spacing), and so the cutter's bed.</summary>

@@ -39,9 +39,8 @@ public static partial class CheckRunner
     public static ElectricalFacts? FactsFrom(MachineModel design, ElectricalResult e)
     {
         if (e.Coil is not { Outline: { } outline } coil) return null;
-        // Which operating point: a machine with a timing sensor is driven as a motor (the sensor switches
-        // the coils), one without is a generator into operation.load_resistance. Both at rated rpm.
-        bool motor = design.Sensor.Kind != SensorKind.None && e.Motor is not null;
+        // Which operating point governs: decided in one place (Electrical.Operation.OperatingChoice).
+        bool motor = Electrical.Operation.OperatingChoice.For(design) == Electrical.Operation.OperatingMode.Motor && e.Motor is not null;
         double j = motor ? e.Motor!.CurrentDensityAtRatedAPerMm2 : e.Generator?.CurrentDensityAPerMm2 ?? 0;
         string point = motor
             ? $"motor operating point (rated {Judge.F(design.RatedRpm)} rpm, operation.supply_voltage {Judge.F(design.Operation.SupplyVoltageV)} V)"
@@ -60,6 +59,12 @@ public static partial class CheckRunner
             BackIron = e.BackIron,
             ShaftTorqueNm = Finite(motor ? e.Motor!.StallTorqueNm : e.Generator?.ShaftTorqueNm ?? 0),
             MagnetToBackIronN = Finite(e.Pull?.MagnetToBackIronN ?? 0),
+            CoilTemperatureC = e.Thermal?.CoilTemperatureC ?? design.Operation.AmbientC,
+            AmbientC = design.Operation.AmbientC,
+            CopperLossPerCoilW = e.Thermal?.CopperLossPerCoilW ?? 0,
+            CoilThermalResistanceKPerW = e.Thermal?.Cooling.ResistanceKPerW ?? 0,
+            MotorGoverns = motor,
+            MagnetTemperatureC = e.Thermal?.MagnetTemperatureC ?? design.Operation.AmbientC,
             SensorAnglesDeg = e.Sensors?.Sensors.Select(s => s.AngleDeg).ToArray() ?? Array.Empty<double>(),
             Diagnostics = e.Diagnostics.Select(d => (d.Id, d.Severity == Electrical.DiagnosticSeverity.Error, d.Key, d.Message)).ToArray(),
         };

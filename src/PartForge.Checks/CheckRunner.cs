@@ -20,6 +20,7 @@ public static partial class CheckRunner
         Collect(results, "printability", () => PrintRules.Run(c));
         Collect(results, "machine fit", () => MachineFitRules.Run(c));
         Collect(results, "winding", () => WindingRules.Run(c));
+        Collect(results, "heat", () => HeatRules.Run(c));
         Collect(results, "coil placement", () => CoilPlacementRules.Run(c));
         Collect(results, "speed", () => SpeedRules.Run(c));
         Collect(results, "electrical", () => ElectricalRules.Run(c));

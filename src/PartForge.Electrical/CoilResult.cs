@@ -35,8 +35,14 @@ public sealed record CoilResult
     public required double LeadAllowanceMm { get; init; }
     public required double WireLengthM { get; init; }
     public required double Resistance20COhm { get; init; }
+    /// <summary>Resistance at the winding's steady temperature <see cref="TemperatureC"/>, ohm.</summary>
     public required double ResistanceHotOhm { get; init; }
+
+    /// <summary>The highest winding temperature the user accepts (<c>coils.max_temperature</c>), C.</summary>
     public required double MaxTemperatureC { get; init; }
+
+    /// <summary>The winding's steady temperature at the operating point (the heat balance), C.</summary>
+    public double TemperatureC { get; init; }
     public required double InductanceUh { get; init; }
     public required bool InductanceIsApproximate { get; init; }
     public required double CopperMassG { get; init; }

@@ -1,11 +1,13 @@
 using System.Globalization;
 using System.Numerics;
 using PartForge.Design.Machines;
+using PartForge.Design.Materials;
 using PartForge.Electrical.Coils;
 using PartForge.Electrical.Field;
 using PartForge.Electrical.Flux;
 using PartForge.Electrical.Operation;
 using PartForge.Electrical.Sensors;
+using PartForge.Electrical.Thermal;
 using PartForge.Electrical.Wire;
 using PartForge.Electrical.Winding;
 
@@ -21,7 +23,7 @@ namespace PartForge.Electrical;
 /// C_n S_X,n with S_X,n = Sum_k d_k exp(-i n p psi_k); e = d lambda / dt at the speed (rotor counter-clockwise).
 /// The winding factor is not applied again: the coil's own pitch effect is inside the integrated flux.
 /// </summary>
-public static class ElectricalEngine
+public static partial class ElectricalEngine
 {
     /// <summary>Evaluates a machine with the default quadrature.</summary>
     public static ElectricalResult Evaluate(MachineModel machine) => Evaluate(machine, FluxQuadrature.Default);
@@ -65,8 +67,12 @@ public static class ElectricalEngine
         var spec = CoilSpec.From(d, wire, diags);
 
         bool fieldOk = gap > 0 && layout.IsValid && poles >= 2 && poles % 2 == 0;
-        var ironFlux = fieldOk ? BackIronFlux.Compute(d, q.FarFactor) : Array.Empty<BackIronFluxResult>();
-        RotorField? field = fieldOk ? RotorField.From(d, q.FarFactor, ironFlux) : null;
+        // The magnets at the still air's temperature (the machine at rest): the steel's flux, the pull and the turns
+        // solved for a target EMF use this Br; the EMF at the operating point uses the magnets' operating temperature.
+        double ambient = d.Operation.AmbientC;
+        double brAmbient = MagnetGrades.BrAt(d.Magnets.BrTesla, ambient);
+        var ironFlux = fieldOk ? BackIronFlux.Compute(d, q.FarFactor, brAmbient) : Array.Empty<BackIronFluxResult>();
+        RotorField? field = fieldOk ? RotorField.From(d, q.FarFactor, ironFlux, brAmbient) : null;
 
         if (spec is null) return Empty(d, diags, layout, gap, field);
 
@@ -100,29 +106,34 @@ public static class ElectricalEngine
 
         var coil = spec.Wind(turns);
         CheckCoil(coil, spec, diags);
-        var coilResult = MakeCoilResult(coil, spec, solved);
-
         double ohmPh20 = parallel ? coil.Resistance20COhm / coils * statorFactor : coil.Resistance20COhm * inSeries;
-        double ohmPhHot = parallel ? coil.ResistanceHotOhm / coils * statorFactor : coil.ResistanceHotOhm * inSeries;
         double lPh = parallel ? coil.InductanceUh / coils * statorFactor : coil.InductanceUh * inSeries;
+        double OhmPhAt(double tempC) => Copper.AtTemperature(ohmPh20, tempC);
 
         if (field is null || !layout.IsValid)
         {
+            // No field: no EMF, no current, no heat; the winding at the air's temperature.
             var e = Empty(d, diags, layout, gap, field);
             return e with
             {
-                Coil = coilResult,
+                Coil = MakeCoilResult(coil, spec, solved, ambient),
                 Phase = new PhaseResult
                 {
                     Connection = conn, CoilsInSeries = inSeries, ParallelPaths = paths, EmfPeakV = 0, EmfRmsV = 0, EmfFundamentalRmsV = 0,
-                    Resistance20COhm = ohmPh20, ResistanceHotOhm = ohmPhHot, InductanceUh = lPh, ThdPercent = 0,
+                    Resistance20COhm = ohmPh20, ResistanceHotOhm = OhmPhAt(ambient), InductanceUh = lPh, ThdPercent = 0,
                 },
             };
         }
 
-        var series = CoilFlux.Compute(field, coil.Outline, turns, q);
-        double w = 2 * Math.PI * d.RatedRpm / 60;
+        var seriesAmbient = CoilFlux.Compute(field, coil.Outline, turns, q);
         var phaseNames = phases == 3 ? new[] { 'A', 'B', 'C' } : new[] { 'A' };
+        var heat = Heat(d, q, coil, seriesAmbient, brAmbient, ironFlux, layout, phaseNames, mult, parallel, OhmPhAt, lPh, wire, p);
+        var series = heat.Series;
+        double tCoil = heat.Thermal.CoilTemperatureC;
+        double ohmPhHot = OhmPhAt(tCoil);
+        var coilResult = MakeCoilResult(coil, spec, solved, tCoil);
+
+        double w = 2 * Math.PI * d.RatedRpm / 60;
         var k = phaseNames.Select(x => PhaseHarmonics(series, layout, x, mult)).ToArray(); // per rad/s
         Complex[] line = LineHarmonics(k, series.Orders, phases, conn);
         Complex[] coilK = series.Orders.Select((n, i) => Complex.ImaginaryOne * n * p * series.CoefficientsWb[i]).ToArray();
@@ -143,7 +154,9 @@ public static class ElectricalEngine
         double ke = lineRmsPerW * 2 * Math.PI * 1000 / 60;
         double kt = phases == 3 ? Math.Sqrt(3) * line[0].Magnitude / Math.Sqrt(2) : k[0][0].Magnitude / Math.Sqrt(2);
         double wMax = 2 * Math.PI * d.MaxRpm / 60;
-        double lineRmsMax = lineRmsPerW * wMax, linePeakMax = linePeakPerW * wMax;
+        // The highest EMF is the one with the coldest magnets: at machine.max_rpm the magnets are taken at the air's temperature.
+        double coldFactor = series.CoefficientsWb.Count > 0 && heat.BrOperatingTesla > 0 ? brAmbient / heat.BrOperatingTesla : 1;
+        double lineRmsMax = lineRmsPerW * wMax * coldFactor, linePeakMax = linePeakPerW * wMax * coldFactor;
         if (lineRmsMax > 50)
             diags.Add(new Diagnostic("emf-above-elv-ac", DiagnosticSeverity.Warning, "machine.max_rpm",
                 string.Format(Inv, "at machine.max_rpm the line EMF reaches {0:0.#} V rms, above the 50 V AC extra-low-voltage limit (IEC 61140): treat the output as hazardous, insulate and enclose it, and follow local electrical codes; or lower machine.max_rpm or coils.turns.", lineRmsMax)));
@@ -170,36 +183,8 @@ public static class ElectricalEngine
         var zeroCross = k.Select(kk => Norm(-90 - kk[0].Phase * 180 / Math.PI)).ToArray();
         var sensors = SensorPlanner.Plan(d.Sensor, poles, phases, coil.Outline, coils, zeroCross, diags);
 
-        // Operating points (hot winding).
-        var op = d.Operation;
-        GeneratorPoint gen;
-        MotorPoint mot;
-        int fine = 720;
-        if (phases == 3)
-        {
-            bool star = conn == Connection.Star;
-            double ry = star ? ohmPhHot : ohmPhHot / 3, ly = star ? lPh : lPh / 3;
-            gen = OperatingPoints.Generator(3, lineRms / Math.Sqrt(3), ry, ly, op.LoadResistanceOhm, d.RatedRpm, p,
-                star ? 1 : 1 / Math.Sqrt(3), wire.CopperAreaMm2);
-            Complex[][] pairs = star
-                ? new[] { Sub(k[0], k[1]), Sub(k[1], k[2]), Sub(k[2], k[0]) }
-                : new[] { NoTriplen(k[0], series.Orders), NoTriplen(k[1], series.Orders), NoTriplen(k[2], series.Orders) };
-            var pw = pairs.Select(pp => HarmonicSynth.Sample(pp, series.Orders, fine)).ToArray();
-            var kc = new double[fine];
-            for (int i = 0; i < fine; i++) kc[i] = Math.Max(Math.Abs(pw[0][i]), Math.Max(Math.Abs(pw[1][i]), Math.Abs(pw[2][i])));
-            mot = OperatingPoints.Motor("six-step", op.SupplyVoltageV, 2 * op.SwitchDropV, star ? 2 * ohmPhHot : 2 * ohmPhHot / 3,
-                kc, Enumerable.Repeat(true, fine).ToArray(), d.RatedRpm, star ? 1 : 2.0 / 3, wire.CopperAreaMm2);
-        }
-        else
-        {
-            double ratio = parallel ? 1.0 / coils : 1;
-            gen = OperatingPoints.Generator(1, phaseRms, ohmPhHot, lPh, op.LoadResistanceOhm, d.RatedRpm, p, ratio, wire.CopperAreaMm2);
-            double on = zeroCross[0] - d.Sensor.AdvanceElecDeg;
-            var kc = HarmonicSynth.Sample(k[0], series.Orders, fine);
-            var cond = new bool[fine];
-            for (int i = 0; i < fine; i++) cond[i] = Norm(360.0 * i / fine - on) < 180;
-            mot = OperatingPoints.Motor("pulse", op.SupplyVoltageV, op.SwitchDropV, ohmPhHot, kc, cond, d.RatedRpm, ratio, wire.CopperAreaMm2);
-        }
+        // Operating points (the winding at its steady temperature).
+        var (gen, mot) = OperatingModel.Of(d, k, series.Orders, parallel, lPh, wire, p).At(1, ohmPhHot);
 
         double peakLink = series.PeakWb();
         return new ElectricalResult
@@ -209,7 +194,12 @@ public static class ElectricalEngine
             ElectricalHz = p * d.RatedRpm / 60,
             MagneticGapMm = gap,
             WindingFactor = layout.WindingFactor,
-            Magnet = new MagnetResult { BrTesla = d.Magnets.BrTesla, BrSource = d.Magnets.BrSource, BackIronImageModel = field.HasBackIron },
+            Magnet = new MagnetResult
+            {
+                BrTesla = d.Magnets.BrTesla, BrSource = d.Magnets.BrSource, BackIronImageModel = field.HasBackIron,
+                BrAmbientTesla = brAmbient, BrOperatingTesla = heat.BrOperatingTesla, TemperatureC = heat.Thermal.MagnetTemperatureC,
+                MaxWorkingTemperatureC = d.Magnets.MaxWorkingTemperatureC,
+            },
             Coil = coilResult,
             CoilFluxLinkagePeakWb = peakLink,
             FluxPerTurnPeakWb = peakLink / turns,
@@ -232,18 +222,19 @@ public static class ElectricalEngine
             Generator = gen,
             Motor = mot,
             Waveforms = waves,
-            Pull = PullOf(d, ironFlux),
+            Pull = PullOf(d, ironFlux, brAmbient),
             BackIron = ironFlux,
+            Thermal = heat.Thermal,
             Diagnostics = diags,
         };
     }
 
     /// <summary>The axial pull between the rotors of a dual-rotor machine (the only layout where a rotor feels a net
     /// axial pull: a coreless stator holds no iron, and a magnet's pull on its own back iron is internal to its rotor).</summary>
-    private static MagneticPullResult? PullOf(MachineModel d, IReadOnlyList<BackIronFluxResult> ironFlux)
+    private static MagneticPullResult? PullOf(MachineModel d, IReadOnlyList<BackIronFluxResult> ironFlux, double brTesla)
     {
         if (!d.Layout.StatorBetweenRotors) return null;
-        return MagneticPull.Compute(d, ironFlux);
+        return MagneticPull.Compute(d, ironFlux, brTesla);
     }
 
     private static int SolveTurns(CoilSpec spec, RotorField field, WindingLayout layout, FluxQuadrature q, double mult,
@@ -301,7 +292,7 @@ public static class ElectricalEngine
         return (int)Math.Floor(Math.Max(0, b) * spec.FillFactor * spec.HeightMm / spec.Wire.CopperAreaMm2);
     }
 
-    private static CoilResult MakeCoilResult(CoilWinding c, CoilSpec spec, bool solved)
+    private static CoilResult MakeCoilResult(CoilWinding c, CoilSpec spec, bool solved, double temperatureC)
     {
         int? awg = null;
         if (solved && spec.MaxBuildMm() is { } b && b > 0)
@@ -316,7 +307,8 @@ public static class ElectricalEngine
             WireOverallMm = c.Wire.OverallDiameterMm, WireOverallIsApproximate = c.Wire.OverallIsApproximate, WireOhmPerM20C = c.Wire.OhmPerMetre20,
             FillFactor = c.FillFactor, InnerDiameterMm = o.InnerDiameterMm, OuterDiameterMm = o.OuterDiameterMm, HeightMm = o.HeightMm,
             PitchRadiusMm = o.PitchRadiusMm, RadialBuildMm = o.RadialBuildMm, MeanTurnMm = c.MeanTurnMm, LeadAllowanceMm = c.LeadAllowanceMm,
-            WireLengthM = c.WireLengthM, Resistance20COhm = c.Resistance20COhm, ResistanceHotOhm = c.ResistanceHotOhm, MaxTemperatureC = c.MaxTemperatureC,
+            WireLengthM = c.WireLengthM, Resistance20COhm = c.Resistance20COhm, ResistanceHotOhm = Copper.AtTemperature(c.Resistance20COhm, temperatureC),
+            MaxTemperatureC = c.MaxTemperatureC, TemperatureC = temperatureC,
             InductanceUh = c.InductanceUh, InductanceIsApproximate = c.InductanceIsApproximate, CopperMassG = c.CopperMassG,
             NeighbourGapMm = c.NeighbourGapMm, MaxTurnsForNeighbourGap = MaxTurns(spec), ThickestFittingAwg = awg, Outline = o,
         };
@@ -329,7 +321,12 @@ public static class ElectricalEngine
         {
             PolePairs = p, RatedRpm = d.RatedRpm, ElectricalHz = p * d.RatedRpm / 60,
             MagneticGapMm = double.IsFinite(gap) ? gap : 0, WindingFactor = layout.IsValid ? layout.WindingFactor : 0,
-            Magnet = new MagnetResult { BrTesla = d.Magnets.BrTesla, BrSource = d.Magnets.BrSource, BackIronImageModel = field?.HasBackIron ?? false },
+            Magnet = new MagnetResult
+            {
+                BrTesla = d.Magnets.BrTesla, BrSource = d.Magnets.BrSource, BackIronImageModel = field?.HasBackIron ?? false,
+                BrAmbientTesla = MagnetGrades.BrAt(d.Magnets.BrTesla, d.Operation.AmbientC), BrOperatingTesla = MagnetGrades.BrAt(d.Magnets.BrTesla, d.Operation.AmbientC),
+                TemperatureC = d.Operation.AmbientC, MaxWorkingTemperatureC = d.Magnets.MaxWorkingTemperatureC,
+            },
             CoilFluxLinkagePeakWb = 0, FluxPerTurnPeakWb = 0, CoilEmfRmsV = 0, LineEmfRmsV = 0, LineEmfPeakV = 0, KeVPerKrpm = 0, KtNmPerA = 0,
             LineEmfRmsAtMaxRpmV = 0, LineEmfPeakAtMaxRpmV = 0, Harmonics = Array.Empty<Harmonic>(), Winding = layout, Diagnostics = diags,
         };

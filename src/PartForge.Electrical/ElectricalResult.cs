@@ -77,6 +77,9 @@ public sealed record ElectricalResult
     /// <summary>Flux density in each steel face behind the magnets (back iron or a steel rotor) and its image strength; empty without steel.</summary>
     public IReadOnlyList<Field.BackIronFluxResult> BackIron { get; init; } = Array.Empty<Field.BackIronFluxResult>();
 
+    /// <summary>The coils' and magnets' steady temperatures at the operating point (null when no EMF was computed).</summary>
+    public Thermal.ThermalResult? Thermal { get; init; }
+
     public required IReadOnlyList<Diagnostic> Diagnostics { get; init; }
 
     public bool HasErrors => Diagnostics.Any(d => d.Severity == DiagnosticSeverity.Error);

@@ -22,7 +22,8 @@ public sealed class TestMachine
     public double BoltCircleD = 24, BoltHole = 3.4; public int BoltCount = 4;
     public string RotorMaterial = "PLA", StatorMaterial = "PLA", FormerMaterial = "PLA";
     public int Turns = 120;
-    public double WireBare = 0.321, WireOverall = 0.357, Fill = 0.45, CoilHeight = 5, Core = 8, MaxTemp = 40;
+    public double WireBare = 0.321, WireOverall = 0.357, Fill = 0.45, CoilHeight = 5, Core = 8, MaxTemp = 60;
+    public double CoilTemp = 35, MagnetTemp = 35, CoilLossW = 0.05, CoilRthKPerW = 200; public bool Motor = false; public string Grade = "N42"; public double LoadOhm = 10;
     public double Flange = 0.8, Margin = 1.0;
     public double StatorId = 30, StatorOd = 130, StatorT = 6.6;
     public double AirGap = 1.0, MinGap = 0.3;
@@ -39,7 +40,8 @@ public sealed class TestMachine
     {
         Name = "test-machine",
         Machine = new Machine { Layout = Layout, Poles = Poles, Coils = Coils, Phases = 3, MaxRpm = MaxRpm, RatedRpm = Math.Min(400, MaxRpm) },
-        Magnets = new Magnets { Shape = "disc", Diameter = MagnetD, Thickness = MagnetT, PitchRadius = MagnetPitch },
+        Magnets = new Magnets { Shape = "disc", Diameter = MagnetD, Thickness = MagnetT, PitchRadius = MagnetPitch, Grade = Grade },
+        Operation = new Operation { LoadResistance = LoadOhm },
         Rotor = new Rotor
         {
             OuterDiameter = RotorOd, Thickness = RotorT, Bore = Bore, PocketClearance = PocketClearance, PocketFloor = PocketFloor,
@@ -73,6 +75,8 @@ public sealed class TestMachine
             Turns = Turns, WireBareMm = WireBare, WireOverallMm = WireOverall,
             Outline = CoilOutline.Round(MagnetPitch, CoilHeight, Core, BuildMm),
             CurrentDensityAPerMm2 = CurrentDensity, OperatingPoint = "test operating point",
+            CoilTemperatureC = CoilTemp, MagnetTemperatureC = MagnetTemp, AmbientC = 25, CopperLossPerCoilW = CoilLossW,
+            CoilThermalResistanceKPerW = CoilRthKPerW, MotorGoverns = Motor,
             PullOnRotorN = rotors.ToDictionary(r => r, _ => PullN),
         };
     }

@@ -43,7 +43,7 @@ public class ElectricalEngineTests
         AssertAllFinite(r);
         var c = r.Coil!;
         Assert.Equal(c.WireLengthM * c.WireOhmPerM20C, c.Resistance20COhm, 12);
-        Assert.Equal(Copper.AtTemperature(c.Resistance20COhm, c.MaxTemperatureC), c.ResistanceHotOhm, 12);
+        Assert.Equal(Copper.AtTemperature(c.Resistance20COhm, c.TemperatureC), c.ResistanceHotOhm, 12); // at the heat balance's temperature
         Assert.Equal(c.Resistance20COhm * r.Phase!.CoilsInSeries / r.Phase.ParallelPaths / (r.Phase.ParallelPaths > 1 ? 1 : 1), r.Phase.Resistance20COhm, 9);
         Assert.Equal(d.Machine.Poles / 2, r.PolePairs);
         Assert.True(r.MagneticGapMm > 0);
@@ -96,8 +96,12 @@ public class ElectricalEngineTests
         var r = ElectricalEngine.Evaluate(PartForge.Design.Machines.MachineModel.From(d));
         Assert.False(r.HasErrors, string.Join("; ", r.Diagnostics));
         Assert.True(r.Coil!.TurnsSolved);
-        double perTurn = r.Phase!.EmfRmsV / r.Coil.Turns;
-        Assert.Equal(3.0, r.Phase.EmfRmsV, 1.5 * perTurn);
+        // The target holds with the magnets at the air's temperature; at the operating point they are warmer and the EMF
+        // is lower by their Br ratio (reversible NdFeB coefficient, docs/physics.md §13).
+        double cold = r.Phase!.EmfRmsV * r.Magnet.BrAmbientTesla / r.Magnet.BrOperatingTesla;
+        double perTurn = cold / r.Coil.Turns;
+        Assert.Equal(3.0, cold, 1.5 * perTurn);
+        Assert.True(r.Phase.EmfRmsV < cold);
         Assert.NotNull(r.Coil.ThickestFittingAwg);
         // The thickest fitting wire really fits: its build at the solved turns stays within the neighbour gap.
         var w = WireSpec.OfAwg(r.Coil.ThickestFittingAwg!.Value, 2);

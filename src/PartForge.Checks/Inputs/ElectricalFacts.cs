@@ -27,6 +27,24 @@ public sealed record ElectricalFacts
     /// <summary>Which operating point the current density belongs to ("generator into 10 ohm", ...).</summary>
     public string OperatingPoint { get; init; } = "operating point";
 
+    /// <summary>The winding's steady temperature at the operating point, C (the electrical engine's heat balance).</summary>
+    public double CoilTemperatureC { get; init; } = 25;
+
+    /// <summary>Still air around the machine, C.</summary>
+    public double AmbientC { get; init; } = 25;
+
+    /// <summary>Copper loss in one coil at its steady temperature, W.</summary>
+    public double CopperLossPerCoilW { get; init; }
+
+    /// <summary>Thermal resistance from one coil's winding to the air, K/W (0 when not computed).</summary>
+    public double CoilThermalResistanceKPerW { get; init; }
+
+    /// <summary>True when the motor point governs (its current heats the coils), false for the generator point.</summary>
+    public bool MotorGoverns { get; init; }
+
+    /// <summary>The magnets' estimated operating temperature, C.</summary>
+    public double MagnetTemperatureC { get; init; } = 25;
+
     /// <summary>Axial magnetic pull on each rotor toward the stator side, N, by rotor.</summary>
     public IReadOnlyDictionary<PartId, double> PullOnRotorN { get; init; } = new Dictionary<PartId, double>();
 

@@ -6,7 +6,7 @@ using static PartForge.Checks.Judge;
 
 namespace PartForge.Checks.Rules;
 
-/// <summary>winding-fill, current-density, coil-temperature.</summary>
+/// <summary>winding-fill, current-density (coil-temperature is in HeatRules).</summary>
 internal static class WindingRules
 {
     /// <summary>Hexagonal packing of equal circles, pi / (2 sqrt 3) to 4 figures (geometry).</summary>
@@ -22,7 +22,6 @@ internal static class WindingRules
     {
         yield return Fill(c);
         if (c.E.CurrentDensityAPerMm2 > 0) yield return CurrentDensity(c);
-        yield return Temperature(c);
     }
 
     private static CheckResult Fill(CheckContext c)
@@ -79,30 +78,5 @@ internal static class WindingRules
         // Source: ASTM B258 (AWG formula).
         double n = 36 - 39 * Math.Log(diameterMm / 0.127) / Math.Log(92);
         return (int)Math.Floor(n + 1e-9);
-    }
-
-    private static CheckResult Temperature(CheckContext c)
-    {
-        double t = c.D.Coils.MaxTemperatureC;
-        var former = c.MaterialOf(PartId.Former);
-        var stator = c.MaterialOf(c.FirstStator);
-        var weak = former.SofteningC <= stator.SofteningC ? former : stator;
-        var weakPart = weak == former ? PartId.Former : c.FirstStator;
-        string which = weak == former ? "former" : "stator";
-        double limit = weak.SofteningC;
-        var (status, margin) = AtMost(t, limit, TemperatureBandC);
-        string msg = $"coils.max_temperature {F(t)} C against the {which} material {weak.Name}, which softens at about {F(limit)} C";
-        if (status != CheckStatus.Pass)
-        {
-            var better = MaterialTable.All.Where(m => m.IsFilament && m.SofteningC >= t + TemperatureBandC).OrderBy(m => m.SofteningC).FirstOrDefault();
-            msg += $"; lower coils.max_temperature to {F(limit - TemperatureBandC)} (less current)"
-                   + (better is not null ? $" or make the {which} from {better.Name} ({(weak == former ? "parts.former.material" : "stator.material")}: {better.Name}; softens at about {F(better.SofteningC)} C)" : "");
-        }
-        return new CheckResult
-        {
-            Id = CheckIds.CoilTemperature, Part = weakPart,
-            Status = status, Value = t, Limit = limit, Unit = "C", Margin = margin, Message = msg, Where = new CheckLocation("coil former and seat"),
-            Basis = "softening point (glass transition) of the former/stator plastic; PLA 55-60 C (resin makers' datasheets)",
-        };
     }
 }

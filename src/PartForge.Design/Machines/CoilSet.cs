@@ -11,7 +11,8 @@ namespace PartForge.Design.Machines;
 /// <param name="PitchRadiusMm">Radius of the coil centres.</param>
 /// <param name="CoreDiameterMm">Round coils: the diameter of the hole in the coil.</param>
 /// <param name="CoreWidthMm">Keystone coils: the inner window's width at the pitch radius.</param>
-/// <param name="MaxTemperatureC">Winding temperature for the hot resistance and the checks.</param>
+/// <param name="MaxTemperatureC">Highest steady winding temperature the user accepts (the coil-temperature check's limit, bounded by the
+/// former's and stator's softening points).</param>
 public sealed record CoilSet(
     CoilShape Shape, WireSize Wire, int EnamelGrade, int? Turns, EmfTarget? Target, double FillFactor, double HeightMm,
     double PitchRadiusMm, double? CoreDiameterMm, double? CoreWidthMm, double MaxTemperatureC)

@@ -132,7 +132,7 @@ public sealed class MachineModel
         var process = new ProcessSpec(nozzle, p.Layer, p.MinWallLines, kerf,
             p.DxfContours switch { "polyline" => CutContourStyle.Polyline, "entities" => CutContourStyle.Entities, var o => throw Bad("process.dxf_contours", o) });
         var op = d.Operation;
-        var operation = new OperationSpec(op.LoadResistance, op.SupplyVoltage, op.SwitchDrop, op.LeadAllowance);
+        var operation = new OperationSpec(op.LoadResistance, op.SupplyVoltage, op.SwitchDrop, op.LeadAllowance) { AmbientC = op.AmbientTemperature };
 
         var plan = new Dictionary<PartRole, PartChoice>();
         foreach (var role in Enum.GetValues<PartRole>())

@@ -27,6 +27,9 @@ public sealed record Material(
     double SafetyFactor,
     string Source)
 {
+    /// <summary>Thermal conductivity, W/(m K) (the table's column; heat through a former's flange).</summary>
+    public required double ThermalConductivityWPerMK { get; init; }
+
     /// <summary>Strength divided by the safety factor: the stress a check allows, MPa.</summary>
     public double AllowableStressMpa => StrengthMpa / SafetyFactor;
 

@@ -14,7 +14,7 @@ public sealed class Coils
     [Range(1, 100000), Doc("Turns per coil; leave out and give target_emf to have them solved.")]
     public int? Turns { get; init; }
 
-    [Doc("Phase EMF the turns are solved for when turns is left out.")]
+    [Doc("Phase EMF the turns are solved for when turns is left out (with the magnets at operation.ambient_temperature).")]
     public TargetEmf? TargetEmf { get; init; }
 
     [Range(0, 0.9069, MinExclusive = true), Doc("Copper area / winding window area (hexagonal packing limit 0.9069).")]
@@ -29,7 +29,7 @@ public sealed class Coils
     [Doc("Round: { diameter } of the hole in the coil; keystone: { width } of the inner window.")]
     public Core Core { get; init; } = new();
 
-    [Range(-40, 250), Doc("Winding temperature for hot resistance and checks, C.")]
+    [Range(-40, 250), Doc("Highest steady winding temperature you accept, C; the check holds the computed temperature to this and to the former's and stator's softening points.")]
     public double MaxTemperature { get; init; } = 60;
 }
 

@@ -32,10 +32,10 @@ public sealed class Magnets
     [Range(0.0001, 100), Doc("Magnet thickness along the axis, mm (at least the 0.0001 mm mesh grid).")]
     public double Thickness { get; init; } = 4;
 
-    [Pattern("^N(3[5-9]|4[0-9]|5[0-2])(M|H|SH|UH|EH)?$"), Doc("Sintered NdFeB grade N35 ... N52 (ignored when br is given).")]
+    [Pattern("^N(3[5-9]|4[0-9]|5[0-2])(M|H|SH|UH|EH)?$"), Doc("Sintered NdFeB grade N35 ... N52 with an optional suffix M, H, SH, UH, EH; its Br is ignored when br is given, its suffix still sets the maximum working temperature.")]
     public string Grade { get; init; } = "N42";
 
-    [Range(0, 2, MinExclusive = true), Doc("Remanence in tesla; overrides the grade's mid-range value.")]
+    [Range(0, 2, MinExclusive = true), Doc("Remanence at 20 C in tesla; overrides the grade's mid-range value (it falls with the magnets' temperature).")]
     public double? Br { get; init; }
 
     [Range(0, 1000, MinExclusive = true), Doc("Radius of the magnet centres, mm (disc, block; sector: the midpoint of its radial centre line).")]

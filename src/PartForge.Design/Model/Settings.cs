@@ -61,6 +61,9 @@ public sealed class Operation
 
     [Range(0, 5000), Doc("Lead length added to each coil's wire, mm.")]
     public double LeadAllowance { get; init; } = 150;
+
+    [Range(-40, 60), Doc("Still air around the machine, C: the coils' steady temperature is this plus the rise from their copper loss.")]
+    public double AmbientTemperature { get; init; } = 25;
 }
 
 public sealed class AssemblyLayout

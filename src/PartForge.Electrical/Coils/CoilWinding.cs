@@ -10,8 +10,8 @@ namespace PartForge.Electrical.Coils;
 /// the copper is the fill factor, so build = N pi d_bare^2 / (4 fill height).
 /// Mean turn = the perimeter of the turn halfway through the build (window perimeter + pi build).
 /// Wire length = turns x mean turn + `operation.lead_allowance` (the total lead length of a coil, both ends,
-/// default 150 mm). Resistance = wire length x ohm per metre (IEC 60028 copper), hot resistance at
-/// `coils.max_temperature`. Copper mass = wire length x copper area x 8.89 g/cm^3.
+/// default 150 mm). Resistance = wire length x ohm per metre (IEC 60028 copper); ResistanceHotOhm here is at
+/// `coils.max_temperature` (the limit); the results' hot resistance is at the computed steady temperature (Thermal/). Copper mass = wire length x copper area x 8.89 g/cm^3.
 /// Inductance: Wheeler's multilayer formula with a = the mean turn radius (round coils); for keystones Maxwell's
 /// geometric-mean-distance method on the mean turn (CoilInductance.KeystoneMicrohenry), tested within 3 % of a
 /// filament-by-filament Neumann integral. Both ignore mutual inductance between coils and any iron nearby.

@@ -35,14 +35,15 @@ public static class BackIronFlux
     /// <summary>Steel thicknesses are offered in steps of this, mm (sheet stock).</summary>
     public const double ThicknessStepMm = 0.5;
 
-    /// <summary>The steel faces of the machine with their flux (ideal iron) and image strength.</summary>
-    public static IReadOnlyList<BackIronFluxResult> Compute(MachineModel machine, double farFactor = RotorField.DefaultFarFactor)
+    /// <summary>The steel faces of the machine with their flux (ideal iron) and image strength, with the magnets at
+    /// <paramref name="brTesla"/> (default: the design's Br at 20 C).</summary>
+    public static IReadOnlyList<BackIronFluxResult> Compute(MachineModel machine, double farFactor = RotorField.DefaultFarFactor, double? brTesla = null)
     {
         var planes = IronPlane.Of(machine);
         if (planes.Count == 0) return Array.Empty<BackIronFluxResult>();
         var g = machine.Magnets.Shape;
         int poles = machine.Poles;
-        double br = machine.Magnets.BrTesla;
+        double br = brTesla ?? machine.Magnets.BrTesla;
         var real = new List<MagnetSource>();
         foreach (var m in RotorField.MagnetSlabs(machine))
             for (int k = 0; k < poles; k++)

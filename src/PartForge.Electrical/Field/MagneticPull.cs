@@ -45,11 +45,12 @@ public static class MagneticPull
         return target.SignedBrTesla / Mu0 * (top - bottom) * 1e-6;
     }
 
-    /// <summary>The forces of a machine (see <see cref="MagneticPullResult"/>).</summary>
-    public static MagneticPullResult Compute(MachineModel machine, IReadOnlyList<BackIronFluxResult>? ironFlux = null)
+    /// <summary>The forces of a machine (see <see cref="MagneticPullResult"/>), with the magnets at <paramref name="brTesla"/>
+    /// (default: the design's Br at 20 C).</summary>
+    public static MagneticPullResult Compute(MachineModel machine, IReadOnlyList<BackIronFluxResult>? ironFlux = null, double? brTesla = null)
     {
         var g = machine.Magnets.Shape;
-        double br = machine.Magnets.BrTesla;
+        double br = brTesla ?? machine.Magnets.BrTesla;
         var stack = machine.Stack;
         int poles = machine.Poles;
         double far = RotorField.DefaultFarFactor;

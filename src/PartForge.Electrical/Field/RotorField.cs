@@ -68,12 +68,14 @@ public sealed class RotorField
     /// <summary>
     /// Builds the sources of a machine (its magnets, rings and steel faces from the machine model and its stack).
     /// <paramref name="ironFlux"/> gives each steel face's image strength (saturation); null: ideal iron.
+    /// <paramref name="brTesla"/>: the magnets' remanence (default: the design's Br at 20 C).
     /// </summary>
-    public static RotorField From(MachineModel machine, double farFactor = DefaultFarFactor, IReadOnlyList<BackIronFluxResult>? ironFlux = null)
+    public static RotorField From(MachineModel machine, double farFactor = DefaultFarFactor, IReadOnlyList<BackIronFluxResult>? ironFlux = null,
+        double? brTesla = null)
     {
         int poles = machine.Poles;
         var g = machine.Magnets.Shape;
-        double brTesla = machine.Magnets.BrTesla;
+        double br = brTesla ?? machine.Magnets.BrTesla;
         var stack = machine.Stack;
         var magnets = MagnetSlabs(machine);
         var copper = stack.OfKind(SlabKind.Copper).OrderByDescending(s => s.ZMax).First();
@@ -82,7 +84,7 @@ public sealed class RotorField
         bool iron = planes.Count > 0;
 
         List<MagnetSource> Ring(double z0, double z1) =>
-            Enumerable.Range(0, poles).Select(k => new MagnetSource(g, k * 360.0 / poles, z0, z1, (k % 2 == 0 ? 1 : -1) * brTesla, farFactor)).ToList();
+            Enumerable.Range(0, poles).Select(k => new MagnetSource(g, k * 360.0 / poles, z0, z1, (k % 2 == 0 ? 1 : -1) * br, farFactor)).ToList();
 
         var rings = magnets.Select(m => (m, ring: Ring(m.ZMin, m.ZMax))).ToList();
         var all = new List<MagnetSource>();

@@ -37,6 +37,9 @@ public sealed record FluxLinkageSeries
         return s;
     }
 
+    /// <summary>The series of sources <paramref name="factor"/> times as strong (the field is linear in the magnets' Br while no steel saturates).</summary>
+    public FluxLinkageSeries Scaled(double factor) => this with { CoefficientsWb = CoefficientsWb.Select(c => c * factor).ToArray() };
+
     /// <summary>Largest |lambda| over one electrical period, Wb-turns (sampled, then refined; see HarmonicSynth.Peak).</summary>
     public double PeakWb() => HarmonicSynth.Peak(CoefficientsWb.Select(c => new System.Numerics.Complex(c, 0)).ToArray(), Orders);
 }

@@ -5,7 +5,7 @@ namespace PartForge.Electrical.Operation;
 /// phase of a balanced star-connected load (a delta load of R is the star-equivalent R/3); the machine is
 /// reduced to its star equivalent (star: the phase; delta: line EMF / sqrt 3, R/3, L/3) driving
 /// I = E / sqrt((R + R_load)^2 + (omega_e L)^2). 1 phase: the load across the winding. Hot winding resistance
-/// (`coils.max_temperature`), coil self-inductance only; copper loss is the only loss counted (no eddy,
+/// (at the coils' steady temperature, Thermal/), coil self-inductance only; copper loss is the only loss counted (no eddy,
 /// bearing or windage loss), so efficiency is an upper bound.
 /// </summary>
 public sealed record GeneratorPoint

@@ -7,7 +7,7 @@ namespace PartForge.Electrical.Operation;
 /// positive (shifted by the advance), through one switch drop. Current i = max(0, (V - drops - e) / R)
 /// (a freewheel diode stops reverse current), torque i e / omega; inductance neglected, so currents are
 /// upper bounds at speed. Averages are over one electrical period. No-load speed: where the average
-/// conducting EMF equals the supply less the drops. Hot winding resistance.
+/// conducting EMF equals the supply less the drops. Hot winding resistance (at the coils' steady temperature, Thermal/).
 /// </summary>
 public sealed record MotorPoint
 {
@@ -34,6 +34,9 @@ public sealed record MotorPoint
     public required double TorqueAtRatedNm { get; init; }
     public required double OutputPowerAtRatedW { get; init; }
     public required double InputPowerAtRatedW { get; init; }
+
+    /// <summary>Copper loss of the whole winding at rated speed, W: the mean square of the path current times the path resistance.</summary>
+    public double CopperLossAtRatedW { get; init; }
 
     /// <summary>Mechanical output / electrical input at rated speed (switch and copper losses only), 0..1.</summary>
     public required double EfficiencyAtRated { get; init; }

@@ -89,6 +89,7 @@ public static class OperatingPoints
             NoLoadRpm = w0 * 60 / (2 * Math.PI), StallTorqueNm = stall.tAvg, StallCurrentA = stallCur,
             RatedRpm = ratedRpm, CurrentAtRatedA = rated.iAvg, TorqueAtRatedNm = rated.tAvg,
             OutputPowerAtRatedW = pout, InputPowerAtRatedW = pin, EfficiencyAtRated = pin > 0 ? pout / pin : 0,
+            CopperLossAtRatedW = rated.iRms * rated.iRms * pathOhm,
             CurrentDensityAtRatedAPerMm2 = rated.iRms * coilCurrentRatio / wireAreaMm2,
             CurrentDensityAtStallAPerMm2 = stallCur * coilCurrentRatio / wireAreaMm2,
         };

@@ -29,7 +29,11 @@ public static class ElectricalView
             new("electrical frequency at rated speed", F(r.ElectricalHz, 2), "Hz", "electrical.electrical_hz"),
             new("magnetic gap (magnet face to copper)", F(r.MagneticGapMm, 3), "mm", "electrical.magnetic_gap"),
             new("winding factor", F(r.WindingFactor, 4), "", "electrical.winding_factor"),
-            new("magnet remanence Br", F(r.Magnet.BrTesla, 3), "T", "electrical.magnet.br"),
+            new("magnet remanence Br at 20 C", F(r.Magnet.BrTesla, 3), "T", "electrical.magnet.br"),
+            new($"magnet remanence at the air's temperature (pull, steel flux)", F(r.Magnet.BrAmbientTesla, 4), "T", "electrical.magnet.br_ambient"),
+            new($"magnet remanence at the operating temperature (EMF)", F(r.Magnet.BrOperatingTesla, 4), "T", "electrical.magnet.br_operating"),
+            new("magnet operating temperature (upper estimate)", F(r.Magnet.TemperatureC, 1), "C", "electrical.magnet.temperature_c"),
+            new("magnet grade's maximum working temperature", F(r.Magnet.MaxWorkingTemperatureC, 0), "C", "electrical.magnet.max_working_temperature_c"),
             new("turns per coil" + (coil.TurnsSolved ? " (solved for the target EMF)" : ""), I(coil.Turns), "", "electrical.coil.turns"),
             new("wire bare diameter", F(coil.WireBareMm, 4), "mm", "electrical.coil.wire_bare"),
             new("wire overall (enamelled) diameter", F(coil.WireOverallMm, 4), "mm", "electrical.coil.wire_overall"),
@@ -39,7 +43,9 @@ public static class ElectricalView
             new("mean turn length", F(coil.MeanTurnMm, 2), "mm", "electrical.coil.mean_turn"),
             new("wire per coil (with leads)", F(coil.WireLengthM, 3), "m", "electrical.coil.wire_length_m"),
             new("coil resistance at 20 C", F(coil.Resistance20COhm, 4), "ohm", "electrical.coil.resistance_20c_ohm"),
-            new($"coil resistance at {F(coil.MaxTemperatureC, 1)} C", F(coil.ResistanceHotOhm, 4), "ohm", "electrical.coil.resistance_hot_ohm"),
+            new("coil steady temperature at the operating point", F(coil.TemperatureC, 1), "C", "electrical.coil.temperature_c"),
+            new($"coil resistance at {F(coil.TemperatureC, 1)} C", F(coil.ResistanceHotOhm, 4), "ohm", "electrical.coil.resistance_hot_ohm"),
+            new("coil temperature you accept (coils.max_temperature)", F(coil.MaxTemperatureC, 1), "C", "electrical.coil.max_temperature_c"),
             new("coil inductance" + (coil.InductanceIsApproximate ? " (approximate)" : ""), F(coil.InductanceUh, 1), "uH", "electrical.coil.inductance_uh"),
             new("copper per coil", F(coil.CopperMassG, 2), "g", "electrical.coil.copper_mass_g"),
             new("coil flux linkage, peak", F(r.CoilFluxLinkagePeakWb, 6), "Wb", "electrical.coil_flux_linkage_peak_wb"),
@@ -59,6 +65,15 @@ public static class ElectricalView
         rows.Add(new("EMF constant ke", F(r.KeVPerKrpm, 3), "V per 1000 rpm", "electrical.ke_v_per_krpm"));
         rows.Add(new("torque constant kt", F(r.KtNmPerA, 4), "N m/A", "electrical.kt_nm_per_a"));
         rows.Add(new("wire for the machine (all coils, leads)", F(TotalWireM(d, r), 2), "m", "electrical.wire_total_m"));
+        if (r.Thermal is { } t)
+        {
+            string heat = $"heat ({(t.Point == PartForge.Electrical.Operation.OperatingMode.Motor ? "motor" : "generator")} point, air {F(t.AmbientC, 1)} C)";
+            rows.Add(new($"{heat}: copper loss per coil", F(t.CopperLossPerCoilW, 4), "W", "thermal.copper_loss_per_coil_w"));
+            rows.Add(new($"{heat}: copper loss, all coils", F(t.CopperLossW, 3), "W", "thermal.copper_loss_w"));
+            rows.Add(new($"{heat}: coil to still air ({t.Cooling.Faces} faces of {F(t.Cooling.FaceAreaMm2, 0)} mm2, h {F(t.Cooling.ConvectionWPerM2K, 0)} W/(m2 K))",
+                F(t.Cooling.ResistanceKPerW, 1), "K/W", "thermal.thermal_resistance_k_per_w"));
+            rows.Add(new($"{heat}: coil steady temperature", F(t.CoilTemperatureC, 1), "C", "thermal.coil_temperature_c"));
+        }
         if (r.Generator is { } g)
         {
             string at = $"generator into {F(g.LoadResistanceOhm, 2)} ohm at {F(g.Rpm, 0)} rpm";

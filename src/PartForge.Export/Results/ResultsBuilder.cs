@@ -36,6 +36,7 @@ public static class ResultsBuilder
                 Material = p.Material.Name, Role = RoleWord(p.Role), MassG = countTriangles ? p.MassG : 0, Rotating = p.Rotating,
             }).ToArray() ?? [],
             Operating = OperatingOf(ev.Machine, ev.Electrical),
+            Thermal = ThermalOf(ev.Electrical),
             Mechanics = MechanicsOf(ev, countTriangles),
             Assembly = checks.Assembly,
             Bom = ev.Parts is { } ps && countTriangles ? BomOf(ev.Machine, ev.Electrical, ps, ev.Checks.Joints, ev.Checks.Jacks) : [],
@@ -55,6 +56,16 @@ public static class ResultsBuilder
             m is null ? null : new MotorEntry(m.Drive, m.SupplyVoltageV, m.SwitchDropV, m.PathResistanceOhm, m.NoLoadRpm, m.StallTorqueNm,
                 m.StallCurrentA, m.RatedRpm, m.CurrentAtRatedA, m.TorqueAtRatedNm, m.OutputPowerAtRatedW, m.InputPowerAtRatedW, m.EfficiencyAtRated,
                 m.CurrentDensityAtRatedAPerMm2, m.CurrentDensityAtStallAPerMm2));
+    }
+
+    /// <summary>The heat balance's figures (null when no EMF was computed).</summary>
+    public static ThermalSection? ThermalOf(ElectricalResult e)
+    {
+        if (e.Thermal is not { } t) return null;
+        var c = t.Cooling;
+        return new ThermalSection(t.Point == PartForge.Electrical.Operation.OperatingMode.Motor ? "motor" : "generator", t.AmbientC, t.CoilTemperatureC,
+            t.MagnetTemperatureC, t.CopperLossPerCoilW, t.CopperLossW, c.ResistanceKPerW, c.Faces, c.FaceAreaMm2, c.FlangeMm, c.FormerMaterial.Name,
+            c.FormerMaterial.ThermalConductivityWPerMK, c.ConvectionWPerM2K, t.FieldPasses);
     }
 
     /// <summary>Rotating mass: every copy of every part that turns, plus the magnets (0 when the parts were not measured).</summary>
@@ -102,6 +113,10 @@ public static class ResultsBuilder
             MagnetSource = e.Magnet.BrSource,
             MagnetShape = d.Magnets.Shape.Kind.Word,
             MagnetDescription = d.Magnets.Shape.Describe(),
+            MagnetBrAmbient = e.Magnet.BrAmbientTesla,
+            MagnetBrOperating = e.Magnet.BrOperatingTesla,
+            MagnetTemperatureC = e.Magnet.TemperatureC,
+            MagnetMaxWorkingTemperatureC = e.Magnet.MaxWorkingTemperatureC,
             Coil = new CoilSection
             {
                 Turns = c?.Turns ?? 0,
@@ -123,6 +138,7 @@ public static class ResultsBuilder
                 RadialBuild = c?.RadialBuildMm ?? 0,
                 LeadAllowance = c?.LeadAllowanceMm ?? 0,
                 MaxTemperatureC = c?.MaxTemperatureC ?? d.Coils.MaxTemperatureC,
+                TemperatureC = c?.TemperatureC ?? d.Operation.AmbientC,
                 WireOhmPerM20C = c?.WireOhmPerM20C ?? 0,
                 EmfRmsV = e.CoilEmfRmsV,
                 TurnsSolved = c?.TurnsSolved ?? false,

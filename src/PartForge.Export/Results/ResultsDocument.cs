@@ -18,6 +18,9 @@ public sealed record ResultsDocument
     /// <summary>The operating points (an addition to the pinned keys: <c>operating</c>).</summary>
     public OperatingSection Operating { get; init; } = new(0, null, null);
 
+    /// <summary>The coils' and magnets' steady temperatures (an addition: <c>thermal</c>; null when no EMF was computed).</summary>
+    public ThermalSection? Thermal { get; init; }
+
     /// <summary>Masses and forces of the rotating assembly (an addition to the pinned keys: <c>mechanics</c>).</summary>
     public MechanicsSection Mechanics { get; init; } = new(0, 0, [], "");
 
@@ -78,6 +81,13 @@ public sealed record ElectricalSection
     public string MagnetSource { get; init; } = "";
     public string MagnetShape { get; init; } = "";
     public string MagnetDescription { get; init; } = "";
+
+    /// <summary>Additions: Br with the magnets at the air's temperature and at their operating temperature (T), that temperature and
+    /// the grade's maximum working temperature (C): <c>magnet.br_ambient</c>, <c>br_operating</c>, <c>temperature_c</c>, <c>max_working_temperature_c</c>.</summary>
+    public double MagnetBrAmbient { get; init; }
+    public double MagnetBrOperating { get; init; }
+    public double MagnetTemperatureC { get; init; }
+    public double MagnetMaxWorkingTemperatureC { get; init; }
     public required CoilSection Coil { get; init; }
     public required double CoilFluxLinkagePeakWb { get; init; }
     public required PhaseSection Phase { get; init; }
@@ -115,6 +125,15 @@ public sealed record WindingEntry(int Coil, double AngleDeg, string Phase, int D
 
 /// <summary>One timing sensor: label, mechanical angle, radius (mm), electrical angle, inverted output, room between the coils (mm).</summary>
 public sealed record SensorEntry(string Label, double AngleDeg, double Radius, double ElectricalDeg, bool Inverted, double Clearance, bool Fits);
+
+/// <summary>
+/// The heat balance (an addition: <c>thermal</c>): which operating point heats the coils, the air, the coil's and magnets'
+/// steady temperatures, the copper loss per coil and in all, and the heat path of one coil (faces, face area, flange,
+/// former material and its conductivity, convection coefficient, thermal resistance).
+/// </summary>
+public sealed record ThermalSection(string Point, double AmbientC, double CoilTemperatureC, double MagnetTemperatureC, double CopperLossPerCoilW,
+    double CopperLossW, double ThermalResistanceKPerW, int Faces, double FaceAreaMm2, double FlangeMm, string FormerMaterial,
+    double FormerConductivityWPerMK, double ConvectionWPerM2K, int FieldPasses);
 
 /// <summary>The operating points at rated speed: as a generator into the load, and as a motor on the supply (null when not computed).</summary>
 public sealed record OperatingSection(double Rpm, GeneratorEntry? Generator, MotorEntry? Motor);
@@ -170,6 +189,9 @@ public sealed record CoilSection
     public double RadialBuild { get; init; }
     public double LeadAllowance { get; init; }
     public double MaxTemperatureC { get; init; }
+
+    /// <summary>The winding's steady temperature at the operating point, C (an addition: <c>coil.temperature_c</c>; the hot resistance is at it).</summary>
+    public double TemperatureC { get; init; }
     public double WireOhmPerM20C { get; init; }
     public double EmfRmsV { get; init; }
     public bool TurnsSolved { get; init; }

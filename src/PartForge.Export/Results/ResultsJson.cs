@@ -96,6 +96,7 @@ public static class ResultsJson
             }
             w.WriteEndArray();
             w.WriteEndObject();
+            WriteThermal(w, doc.Thermal);
             w.WriteEndObject();
         }
         ms.WriteByte((byte)'\n');
@@ -114,6 +115,10 @@ public static class ResultsJson
         w.WriteString("source", e.MagnetSource);
         w.WriteString("shape", e.MagnetShape);
         w.WriteString("description", e.MagnetDescription);
+        Num(w, "br_ambient", e.MagnetBrAmbient, "electrical.magnet.br_ambient");
+        Num(w, "br_operating", e.MagnetBrOperating, "electrical.magnet.br_operating");
+        Num(w, "temperature_c", e.MagnetTemperatureC, "electrical.magnet.temperature_c");
+        Num(w, "max_working_temperature_c", e.MagnetMaxWorkingTemperatureC, "electrical.magnet.max_working_temperature_c");
         w.WriteEndObject();
         var c = e.Coil;
         w.WriteStartObject("coil");
@@ -145,6 +150,7 @@ public static class ResultsJson
         Num(w, "radial_build", c.RadialBuild, "coil.radial_build");
         Num(w, "lead_allowance", c.LeadAllowance, "coil.lead_allowance");
         Num(w, "max_temperature_c", c.MaxTemperatureC, "coil.max_temperature_c");
+        Num(w, "temperature_c", c.TemperatureC, "coil.temperature_c");
         Num(w, "wire_ohm_per_m_20c", c.WireOhmPerM20C, "coil.wire_ohm_per_m_20c");
         Num(w, "emf_rms_v", c.EmfRmsV, "coil.emf_rms_v");
         w.WriteBoolean("turns_solved", c.TurnsSolved);
@@ -208,6 +214,27 @@ public static class ResultsJson
             w.WriteEndObject();
         }
         w.WriteEndArray();
+        w.WriteEndObject();
+    }
+
+    private static void WriteThermal(Utf8JsonWriter w, ThermalSection? t)
+    {
+        if (t is null) { w.WriteNull("thermal"); return; }
+        w.WriteStartObject("thermal");
+        w.WriteString("point", t.Point);
+        Num(w, "ambient_c", t.AmbientC, "thermal.ambient_c");
+        Num(w, "coil_temperature_c", t.CoilTemperatureC, "thermal.coil_temperature_c");
+        Num(w, "magnet_temperature_c", t.MagnetTemperatureC, "thermal.magnet_temperature_c");
+        Num(w, "copper_loss_per_coil_w", t.CopperLossPerCoilW, "thermal.copper_loss_per_coil_w");
+        Num(w, "copper_loss_w", t.CopperLossW, "thermal.copper_loss_w");
+        Num(w, "thermal_resistance_k_per_w", t.ThermalResistanceKPerW, "thermal.thermal_resistance_k_per_w");
+        w.WriteNumber("faces", t.Faces);
+        Num(w, "face_area_mm2", t.FaceAreaMm2, "thermal.face_area_mm2");
+        Num(w, "flange", t.FlangeMm, "thermal.flange");
+        w.WriteString("former_material", t.FormerMaterial);
+        Num(w, "former_conductivity_w_per_m_k", t.FormerConductivityWPerMK, "thermal.former_conductivity_w_per_m_k");
+        Num(w, "convection_w_per_m2_k", t.ConvectionWPerM2K, "thermal.convection_w_per_m2_k");
+        w.WriteNumber("field_passes", t.FieldPasses);
         w.WriteEndObject();
     }
 

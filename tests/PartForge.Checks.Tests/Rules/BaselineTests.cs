@@ -11,7 +11,7 @@ public class BaselineTests
         var ids = report.Checks.Select(c => c.Id).ToHashSet();
         foreach (var id in new[] { CheckIds.RunningGap, CheckIds.MagnetPullDeflection, CheckIds.MagnetPullStress, CheckIds.RotationClearance,
                      CheckIds.WindingFill, CheckIds.CurrentDensity, CheckIds.CoilTemperature, CheckIds.RotorHoopStress,
-                     CheckIds.MagnetRetention, CheckIds.MagnetPullOut, CheckIds.CoilCoilClearance })
+                     CheckIds.MagnetRetention, CheckIds.MagnetPullOut, CheckIds.CoilCoilClearance, CheckIds.MagnetTemperature })
             Assert.Contains(id, ids);
     }
 }

@@ -175,15 +175,76 @@ public class PlantedFaultTests
     [Fact]
     public void Coil_temperature()
     {
-        var r = Base.With(m => m.MaxTemp = 56).Check();
+        // The computed steady temperature against coils.max_temperature (60, the model's default) bounded by the PLA
+        // former's softening point: PLA glass transition 55-60 C (docs/physics.md §8), lower end.
+        var r = Base.With(m => m.CoilTemp = 56).Check();
         var c = One(r, CheckIds.CoilTemperature);
-        Assert.Equal(55, c.Limit, 12);   // PLA glass transition 55-60 C (docs/physics.md §8), lower end
+        Assert.Equal(55, c.Limit, 12);
+        Assert.Equal(56, c.Value, 12);
         AssertOnlyFailure(r, CheckIds.CoilTemperature);
-        AssertNoFailure(Base.With(m => m.MaxTemp = 44).Check());
-        // PETG former and stator (softening about 75 C, from memory): 64 C passes, 76 C fails.
-        var petg = Base.With(m => { m.StatorMaterial = "PETG"; m.FormerMaterial = "PETG"; });
-        AssertNoFailure(petg.With(m => m.MaxTemp = 64).Check());
-        Assert.Equal(CheckStatus.Fail, One(petg.With(m => m.MaxTemp = 76).Check(), CheckIds.CoilTemperature).Status);
+        Assert.Contains("parts.former.material", c.Message);   // the fix names the former's material
+        AssertNoFailure(Base.With(m => m.CoilTemp = 44).Check());
+        // PETG former and stator (softening about 75 C, from memory), a user limit above it: 64 C passes, 76 C fails.
+        var petg = Base.With(m => { m.StatorMaterial = "PETG"; m.FormerMaterial = "PETG"; m.MaxTemp = 90; });
+        AssertNoFailure(petg.With(m => m.CoilTemp = 64).Check());
+        Assert.Equal(CheckStatus.Fail, One(petg.With(m => m.CoilTemp = 76).Check(), CheckIds.CoilTemperature).Status);
+    }
+
+    [Fact]
+    public void Coil_temperature_limit_is_the_users_when_lower()
+    {
+        var c = One(Base.With(m => { m.MaxTemp = 45; m.CoilTemp = 46; }).Check(), CheckIds.CoilTemperature);
+        Assert.Equal(CheckStatus.Fail, c.Status);
+        Assert.Equal(45, c.Limit, 12);
+        Assert.Contains("coils.max_temperature 45", c.Message);
+        Assert.Equal(CheckStatus.Pass, One(Base.With(m => { m.MaxTemp = 45; m.CoilTemp = 34; }).Check(), CheckIds.CoilTemperature).Status);
+    }
+
+    // The fix names what lowers a generator's heat, with values inside the keys' ranges: the loss allowed is
+    // (limit - 10 - air) / R_th (the 10 C warning band), and with P ~ R ~ 1/d^2 the wire grows by sqrt(P / allowed)
+    // (AWG by ASTM B258), the turns fall by the cube root, the load rises by the square root.
+    [Fact]
+    public void Coil_temperature_fix_for_a_generator()
+    {
+        var m = Base.With(x => { x.CoilTemp = 60; x.CoilLossW = 0.175; x.CoilRthKPerW = 200; });
+        var c = One(m.Check(), CheckIds.CoilTemperature);
+        double allowed = (55 - 10 - 25) / 200.0;                  // 0.1 W
+        Assert.Contains($"one coil may shed {allowed.ToString(System.Globalization.CultureInfo.InvariantCulture)} W", c.Message);
+        double d = 0.321 * Math.Sqrt(0.175 / allowed);
+        int awg = (int)Math.Floor(36 - 39 * Math.Log(d / 0.127) / Math.Log(92) + 1e-9);
+        Assert.Contains($"coils.wire.awg {awg}", c.Message);
+        Assert.InRange(awg, 0, 50);
+        int n = (int)Math.Floor(120 / Math.Cbrt(0.175 / allowed));
+        Assert.Contains($"coils.turns {n}", c.Message);
+        Assert.True(n >= 1 && n < 120);
+        Assert.Contains("operation.load_resistance", c.Message);
+        Assert.Contains("parts.former.material: PETG", c.Message);
+        Assert.DoesNotContain("supply_voltage", c.Message);
+    }
+
+    // A motor at rated speed draws (V - e) / R: thicker wire would raise its current, so the fix names the supply and the turns.
+    [Fact]
+    public void Coil_temperature_fix_for_a_motor()
+    {
+        var c = One(Base.With(x => { x.CoilTemp = 60; x.CoilLossW = 0.175; x.Motor = true; }).Check(), CheckIds.CoilTemperature);
+        Assert.Contains("operation.supply_voltage", c.Message);
+        Assert.Contains("more coils.turns", c.Message);
+        Assert.DoesNotContain("coils.wire.awg", c.Message);
+    }
+
+    // Grade suffix working temperatures (makers' grade tables, common practice, from memory): N 80 C, H 120 C.
+    [Fact]
+    public void Magnet_temperature()
+    {
+        var r = Base.With(m => { m.MagnetTemp = 85; m.CoilTemp = 40; }).Check();
+        var c = One(r, CheckIds.MagnetTemperature);
+        Assert.Equal(80, c.Limit, 12);
+        Assert.Equal(CheckStatus.Fail, c.Status);
+        Assert.Contains("magnets.grade N42M", c.Message);   // the first suffix rated for 85 + 10 C (M, 100 C)
+        Assert.Equal(CheckStatus.Warn, One(Base.With(m => m.MagnetTemp = 75).Check(), CheckIds.MagnetTemperature).Status);
+        var h = Base.With(m => { m.MagnetTemp = 85; m.Grade = "N42H"; }).Check();
+        Assert.Equal(120, One(h, CheckIds.MagnetTemperature).Limit, 12);
+        Assert.Equal(CheckStatus.Pass, One(h, CheckIds.MagnetTemperature).Status);
     }
 
     [Fact]

@@ -22,7 +22,7 @@ public class WorseningTests
         "more turns" => Base.With(m => m.Turns = 300),
         "higher max_rpm" => Base.With(m => m.MaxRpm = 16000),
         "softer material" => Base.With(m => { m.RotorOd = 200; m.MagnetPitch = 80; m.StatorOd = 220; m.RotorT = 4; m.MagnetT = 2.5; m.AirGap = 2.5; m.PullN = 50; m.RotorMaterial = "PA"; }),
-        "hotter coil" => Base.With(m => m.MaxTemp = 60),
+        "hotter coil" => Base.With(m => m.CoilTemp = 60),
         _ => throw new ArgumentException(what),
     };
 

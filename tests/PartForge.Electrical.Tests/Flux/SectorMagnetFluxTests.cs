@@ -71,7 +71,8 @@ public class SectorMagnetFluxTests
         Assert.False(e.HasErrors, string.Join("; ", e.Diagnostics));
         var coil = e.Coil!;
 
-        // The field of the 8 alternating magnets (magnet k at k x 45 degrees, +z for even k) on the copper.
+        // The field of the 8 alternating magnets (magnet k at k x 45 degrees, +z for even k) on the copper, with the
+        // magnets at their operating temperature (the Br the engine reports using there).
         var magnet = m.Stack.OfKind(SlabKind.Magnet).Single();
         var copper = m.Stack.OfKind(SlabKind.Copper).Single();
         double xi = shape.PitchRadiusMm - shape.LengthMm / 2;
@@ -85,7 +86,7 @@ public class SectorMagnetFluxTests
                 double a = -k * 2 * Math.PI / m.Poles, ca = Math.Cos(a), sa = Math.Sin(a);
                 double u = x * ca - y * sa, v = x * sa + y * ca; // the point in magnet k's own frame
                 double sign = k % 2 == 0 ? 1 : -1;
-                b += sign * m.Magnets.BrTesla * (FaceBz(xi, shape.InnerWidthMm, shape.OuterWidthMm, shape.LengthMm, magnet.ZMax, u, v, z, s, t)
+                b += sign * e.Magnet.BrOperatingTesla * (FaceBz(xi, shape.InnerWidthMm, shape.OuterWidthMm, shape.LengthMm, magnet.ZMax, u, v, z, s, t)
                                                 - FaceBz(xi, shape.InnerWidthMm, shape.OuterWidthMm, shape.LengthMm, magnet.ZMin, u, v, z, s, t));
             }
             return b;

@@ -9,4 +9,7 @@ public sealed record MagnetSet(MagnetShape Shape, string Grade, double BrTesla, 
 {
     /// <summary>"br" when <c>magnets.br</c> was given, else the grade name.</summary>
     public string BrSource => BrGiven ? "br" : Grade;
+
+    /// <summary>Maximum working temperature of the grade's suffix, C (<see cref="Materials.MagnetGrades.MaxWorkingTemperatureC"/>; used even when <c>magnets.br</c> is given).</summary>
+    public double MaxWorkingTemperatureC => Materials.MagnetGrades.MaxWorkingTemperatureC(Grade);
 }

@@ -1,0 +1,127 @@
+using System.Globalization;
+using PartForge.Design.Materials;
+using PartForge.Design.Parts;
+using static PartForge.Checks.Judge;
+
+namespace PartForge.Checks.Rules;
+
+/// <summary>
+/// coil-temperature and magnet-temperature: the steady temperatures the electrical engine's heat balance computed
+/// (docs/physics.md §13) against what the coil's neighbours and the magnets stand.
+/// </summary>
+internal static class HeatRules
+{
+    public static IEnumerable<CheckResult> Run(CheckContext c)
+    {
+        yield return Coil(c);
+        yield return Magnets(c);
+    }
+
+    private static string I(int v) => v.ToString(CultureInfo.InvariantCulture);
+
+    /// <summary>
+    /// The winding's steady temperature against the lowest of coils.max_temperature (what the user accepts) and the
+    /// softening points of the former and the stator (the material table): the plastic the coil presses on must not
+    /// creep. Warn within 10 C.
+    /// </summary>
+    private static CheckResult Coil(CheckContext c)
+    {
+        double t = c.E.CoilTemperatureC, amb = c.E.AmbientC;
+        var former = c.MaterialOf(PartId.Former);
+        var stator = c.MaterialOf(c.FirstStator);
+        var weak = former.SofteningC <= stator.SofteningC ? former : stator;
+        bool formerWeak = weak == former;
+        string which = formerWeak ? "former" : "stator";
+        double user = c.D.Coils.MaxTemperatureC;
+        bool userGoverns = user < weak.SofteningC;
+        double limit = userGoverns ? user : weak.SofteningC;
+        var weakPart = userGoverns || formerWeak ? PartId.Former : c.FirstStator;
+        var (status, margin) = AtMost(t, limit, TemperatureBandC);
+        string point = c.E.MotorGoverns ? "motor" : "generator";
+        string msg = $"steady winding temperature {F(t)} C at the {point} operating point ({F(c.E.CopperLossPerCoilW)} W per coil, "
+                     + $"{F(c.E.CoilThermalResistanceKPerW)} K/W to still air at {F(amb)} C) against "
+                     + (userGoverns
+                         ? $"coils.max_temperature {F(user)} C (the {which} material {weak.Name} softens at about {F(weak.SofteningC)} C)"
+                         : $"the {which} material {weak.Name}, which softens at about {F(weak.SofteningC)} C"
+                           + (user > weak.SofteningC ? $" (below coils.max_temperature {F(user)} C, so it bounds it)" : ""));
+        if (status != CheckStatus.Pass) msg += "; " + CoilFix(c, t, limit, weak, formerWeak, userGoverns);
+        return new CheckResult
+        {
+            Id = CheckIds.CoilTemperature, Part = weakPart,
+            Status = status, Value = t, Limit = limit, Unit = "C", Margin = margin, Message = msg, Where = new CheckLocation("coil former and seat"),
+            Basis = "steady heat balance of one coil: copper loss with the resistance at its temperature (IEC 60028, 0.00393/K), two flange faces "
+                    + "to still air at h = 10 W/(m^2 K) (natural convection, common practice); limit coils.max_temperature, bounded by the "
+                    + "softening point of the former/stator plastic (PLA 55-60 C, resin makers' datasheets)",
+        };
+    }
+
+    /// <summary>What lowers the temperature, in the design's own keys and inside their ranges (docs/physics.md §13).</summary>
+    private static string CoilFix(CheckContext c, double t, double limit, Material weak, bool formerWeak, bool userGoverns)
+    {
+        var fixes = new List<string>();
+        double amb = c.E.AmbientC, rth = c.E.CoilThermalResistanceKPerW, p = c.E.CopperLossPerCoilW;
+        double target = limit - TemperatureBandC;                  // a pass without a warning
+        double allowed = rth > 0 ? (target - amb) / rth : 0;       // loss per coil that reaches it
+        if (allowed > 0 && p > allowed)
+        {
+            double ratio = p / allowed;
+            fixes.Add($"one coil may shed {F(allowed)} W to stay {F(TemperatureBandC)} C below the limit");
+            if (c.E.MotorGoverns)
+            {
+                // Motor at rated speed: i = (V - e) / R, so thicker wire would raise the current; less voltage or more
+                // back-EMF (more turns) lowers it.
+                fixes.Add($"less current: a lower operation.supply_voltage, or more coils.turns (more back-EMF at rated speed)");
+            }
+            else
+            {
+                // Generator, winding small against the load: P ~ I^2 R with I ~ E / R_load, so P ~ R / R_load^2 ~ N^3 / (d^2 R_load^2).
+                double d = c.E.WireBareMm * Math.Sqrt(ratio);
+                int awg = Math.Clamp(WindingRules.AwgAtLeast(d), 0, 50);
+                if (d <= 5) fixes.Add($"thicker wire: about {F(d)} mm bare (coils.wire.awg {I(awg)} or lower)");
+                int n = (int)Math.Floor(c.E.Turns / Math.Cbrt(ratio));
+                if (n >= 1 && n < c.E.Turns) fixes.Add($"fewer turns: about coils.turns {I(n)} (less EMF and resistance)");
+                double rl = c.D.Operation.LoadResistanceOhm * Math.Sqrt(ratio);
+                if (rl <= 1e9) fixes.Add($"less current: operation.load_resistance about {F(rl)} ohm or more");
+            }
+        }
+        else if (!(allowed > 0))
+            fixes.Add($"the air at {F(amb)} C is already within {F(TemperatureBandC)} C of the limit: lower operation.ambient_temperature if the machine runs cooler");
+        double need = t + TemperatureBandC;
+        var better = MaterialTable.All.Where(m => m.IsFilament && m.SofteningC >= need).OrderBy(m => m.SofteningC).FirstOrDefault();
+        if (!userGoverns && better is not null)
+            fixes.Add($"a former material that stands more heat: {(formerWeak ? "parts.former.material" : "stator.material")}: {better.Name} (softens at about {F(better.SofteningC)} C)");
+        if (userGoverns && need <= Math.Min(weak.SofteningC, 250))
+            fixes.Add($"or, if the coil may run hotter, coils.max_temperature {Up(need)} (at most the {(formerWeak ? "former" : "stator")}'s softening point, {F(weak.SofteningC)} C)");
+        return string.Join("; ", fixes);
+    }
+
+    /// <summary>
+    /// The magnets' estimated temperature (the coils' steady temperature bounds it) against the maximum working
+    /// temperature of the grade's suffix (N 80, M 100, H 120, SH 150, UH 180, EH 200 C; common practice). Warn within 10 C.
+    /// </summary>
+    private static CheckResult Magnets(CheckContext c)
+    {
+        double t = c.E.MagnetTemperatureC;
+        string grade = c.D.Magnets.Grade;
+        double limit = c.D.Magnets.MaxWorkingTemperatureC;
+        var (status, margin) = AtMost(t, limit, TemperatureBandC);
+        string msg = $"magnets at about {F(t)} C (taken as the coils' steady temperature, an upper estimate) against {F(limit)} C, the maximum working temperature of magnets.grade {grade}";
+        if (status != CheckStatus.Pass)
+        {
+            double need = t + TemperatureBandC;
+            var next = MagnetGrades.Suffixes.FirstOrDefault(s => s.MaxC >= need);
+            int? number = MagnetGrades.Number(grade);
+            var fixes = new List<string>();
+            if (next.Suffix is { Length: > 0 } sfx && number is { } nb)
+                fixes.Add($"a grade for higher temperatures: magnets.grade N{I(nb)}{sfx} (works to about {F(next.MaxC)} C)");
+            fixes.Add("or a cooler coil (see coil-temperature: thicker wire, fewer turns, less current)");
+            msg += "; " + string.Join(" ", fixes);
+        }
+        return new CheckResult
+        {
+            Id = CheckIds.MagnetTemperature, Part = c.D.Layout.Rotors[0],
+            Status = status, Value = t, Limit = limit, Unit = "C", Margin = margin, Message = msg, Where = new CheckLocation("rotor magnets"),
+            Basis = "maximum working temperature by grade suffix (makers' grade tables, common practice, from memory); magnet temperature bounded by the coils' steady temperature (no loss in the magnets)",
+        };
+    }
+}
