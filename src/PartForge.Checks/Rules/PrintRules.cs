@@ -218,8 +218,13 @@ internal static class PrintRules
             double build = Math.Max(1e-9, o.RadialBuildMm);
             int turns = (int)Math.Floor(c.E.Turns * Math.Max(0, build - s / 2) / build);
             double sinHalf = Math.Sin(Math.PI / n);
-            msg += $"; lower coils.turns to {turns} or raise coils.pitch_radius to {Up(o.PitchRadiusMm + s / (2 * sinHalf))}"
-                   + (c.D.Former.MarginMm > 0 ? $" or lower former.margin to {Down(Math.Max(0, c.D.Former.MarginMm - s / 2))}" : "");
+            // Only fixes that are whole on their own and inside their key's range (never 0 turns).
+            var fixes = new List<string>();
+            if (turns >= 1 && turns < c.E.Turns) fixes.Add($"lower coils.turns to {turns}");
+            double pitch = o.PitchRadiusMm + s / (2 * sinHalf);
+            if (InSchema("coils.pitch_radius", pitch)) fixes.Add($"raise coils.pitch_radius to {Up(pitch)}");
+            if (c.D.Former.MarginMm - s / 2 >= 0) fixes.Add($"lower former.margin to {Down(c.D.Former.MarginMm - s / 2)}");
+            msg += "; " + (fixes.Count > 0 ? string.Join(" or ", fixes) : "use thinner wire or fewer machine.coils");
         }
         return new CheckResult
         {
