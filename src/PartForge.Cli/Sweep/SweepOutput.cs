@@ -15,51 +15,82 @@ public static class SweepOutput
     public static string Value(SweepAxis a, double v) => a.WholeNumbers ? v.ToString("0", Inv) : v.ToString("0.####", Inv);
 
     /// <summary>Headings and cells of the key-results table (no colour), shared by the plain and the terminal table.</summary>
-    public static (string[] Headings, List<string[]> Cells) TableCells(SweepPlan plan, IReadOnlyList<SweepRow> rows, SweepTarget? target)
+    public static (string[] Headings, List<string[]> Cells) TableCells(SweepPlan plan, IReadOnlyList<SweepRow> rows, SweepTarget? target) =>
+        (Headings(plan, target), rows.Select(r => CellsOf(plan, r, target)).ToList());
+
+    private static bool TargetColumn(SweepTarget? target) => target != null && SweepMetrics.TableColumns.All(c => c.Key != target.Key);
+
+    private static string[] Headings(SweepPlan plan, SweepTarget? target)
     {
         var head = new List<string> { "#" };
         head.AddRange(plan.Axes.Select(a => a.Key));
         head.AddRange(SweepMetrics.TableColumns.Select(c => c.Heading));
-        if (target != null && SweepMetrics.TableColumns.All(c => c.Key != target.Key)) head.Add(target.Key);
+        if (TargetColumn(target)) head.Add(target!.Key);
         head.Add("status");
         head.Add("reason");
-        var cells = new List<string[]>();
-        foreach (var r in rows)
-        {
-            var c = new List<string> { (r.Index + 1).ToString(Inv) };
-            c.AddRange(plan.Axes.Select((a, k) => Value(a, r.Values[k])));
-            c.AddRange(SweepMetrics.TableColumns.Select(col => Cell(r, col.Key, col.Format)));
-            if (target != null && SweepMetrics.TableColumns.All(col => col.Key != target.Key)) c.Add(Cell(r, target.Key, "0.####"));
-            c.Add(r.Outcome.Status);
-            c.Add(r.Outcome.Reason);
-            cells.Add(c.ToArray());
-        }
-        return (head.ToArray(), cells);
+        return head.ToArray();
+    }
+
+    private static string[] CellsOf(SweepPlan plan, SweepRow r, SweepTarget? target)
+    {
+        var c = new List<string> { (r.Index + 1).ToString(Inv) };
+        c.AddRange(plan.Axes.Select((a, k) => Value(a, r.Values[k])));
+        c.AddRange(SweepMetrics.TableColumns.Select(col => Cell(r, col.Key, col.Format)));
+        if (TargetColumn(target)) c.Add(Cell(r, target!.Key, "0.####"));
+        c.Add(r.Outcome.Status);
+        c.Add(r.Outcome.Reason);
+        return c.ToArray();
     }
 
     public static string PlainTable(SweepPlan plan, IReadOnlyList<SweepRow> rows, SweepTarget? target)
     {
-        var (head, cells) = TableCells(plan, rows, target);
+        var w = new StringWriter { NewLine = "\n" };
+        PlainTable(w, plan, rows, target);
+        return w.ToString();
+    }
+
+    /// <summary>
+    /// The plain table written line by line: one pass for the column widths, one to write, so nothing the size of
+    /// the table is held (a 100,000-row sweep prints without a copy of its text in memory).
+    /// </summary>
+    public static void PlainTable(TextWriter output, SweepPlan plan, IReadOnlyList<SweepRow> rows, SweepTarget? target)
+    {
+        var head = Headings(plan, target);
         var width = head.Select(h => h.Length).ToArray();
-        foreach (var c in cells)
+        foreach (var r in rows)
+        {
+            var c = CellsOf(plan, r, target);
             for (int i = 0; i < c.Length - 1; i++) width[i] = Math.Max(width[i], c[i].Length);
+        }
         var sb = new StringBuilder();
         void Line(string[] c)
         {
+            sb.Clear();
             for (int i = 0; i < c.Length; i++)
             {
                 if (i > 0) sb.Append("  ");
-                bool last = i == c.Length - 1;
-                sb.Append(last ? c[i] : (i == 0 || i > plan.Axes.Count ? c[i].PadLeft(width[i]) : c[i].PadLeft(width[i])));
+                sb.Append(i == c.Length - 1 ? c[i] : c[i].PadLeft(width[i]));
             }
+            // No trailing blanks (an empty reason).
+            int end = sb.Length;
+            while (end > 0 && sb[end - 1] == ' ') end--;
+            sb.Length = end;
             sb.Append('\n');
+            output.Write(sb.ToString());
         }
         Line(head);
-        foreach (var c in cells) Line(c);
-        return sb.ToString().Replace(" \n", "\n");
+        foreach (var r in rows) Line(CellsOf(plan, r, target));
     }
 
     public static string Csv(SweepPlan plan, IReadOnlyList<SweepRow> rows)
+    {
+        var sb = new StringBuilder(CsvHeader(plan));
+        foreach (var r in rows) sb.Append(CsvLine(plan, r));
+        return sb.ToString();
+    }
+
+    /// <summary>The CSV's heading line (with its line end).</summary>
+    public static string CsvHeader(SweepPlan plan)
     {
         var sb = new StringBuilder();
         var head = new List<string> { "variant" };
@@ -68,17 +99,21 @@ public static class SweepOutput
         head.Add("status");
         head.Add("reason");
         CsvRow(sb, head);
-        foreach (var r in rows)
-        {
-            var c = new List<string> { (r.Index + 1).ToString(Inv) };
-            c.AddRange(plan.Axes.Select((a, k) => r.Values[k].ToString("R", Inv)));
-            // 12 significant digits, as the results document: far below any tolerance, free of binary noise (1.7999999999999998).
-            c.AddRange(SweepMetrics.All.Select(k => r.Outcome.Metrics.TryGetValue(k, out double v) && double.IsFinite(v)
-                ? double.Parse(v.ToString("G12", Inv), Inv).ToString("R", Inv) : ""));
-            c.Add(r.Outcome.Status);
-            c.Add(r.Outcome.Reason);
-            CsvRow(sb, c);
-        }
+        return sb.ToString();
+    }
+
+    /// <summary>One variant's CSV line (with its line end): written as the sweep runs.</summary>
+    public static string CsvLine(SweepPlan plan, SweepRow r)
+    {
+        var sb = new StringBuilder();
+        var c = new List<string> { (r.Index + 1).ToString(Inv) };
+        c.AddRange(plan.Axes.Select((a, k) => r.Values[k].ToString("R", Inv)));
+        // 12 significant digits, as the results document: far below any tolerance, free of binary noise (1.7999999999999998).
+        c.AddRange(SweepMetrics.All.Select(k => r.Outcome.Metrics.TryGetValue(k, out double v) && double.IsFinite(v)
+            ? double.Parse(v.ToString("G12", Inv), Inv).ToString("R", Inv) : ""));
+        c.Add(r.Outcome.Status);
+        c.Add(r.Outcome.Reason);
+        CsvRow(sb, c);
         return sb.ToString();
     }
 
@@ -86,7 +121,21 @@ public static class SweepOutput
 
     public static string Json(string designName, SweepPlan plan, IReadOnlyList<SweepRow> rows, SweepTarget? target)
     {
+        var sw = new StringWriter { NewLine = "\n" };
+        Json(sw, designName, plan, rows, target);
+        return sw.ToString();
+    }
+
+    /// <summary>The JSON document written to <paramref name="output"/> as it is made (flushed every few hundred rows).</summary>
+    public static void Json(TextWriter output, string designName, SweepPlan plan, IReadOnlyList<SweepRow> rows, SweepTarget? target)
+    {
         using var ms = new MemoryStream();
+        void Drain()
+        {
+            if (ms.Length == 0) return;
+            output.Write(Encoding.UTF8.GetString(ms.GetBuffer(), 0, (int)ms.Length));
+            ms.SetLength(0);
+        }
         using (var w = new Utf8JsonWriter(ms, new JsonWriterOptions { Indented = true }))
         {
             w.WriteStartObject();
@@ -130,10 +179,12 @@ public static class SweepOutput
                     if (r.Outcome.Metrics.TryGetValue(k, out double v) && double.IsFinite(v)) w.WriteNumber(k, double.Parse(v.ToString("G12", Inv), Inv));
                 w.WriteEndObject();
                 w.WriteEndObject();
+                if (ms.Length > 1 << 16) { w.Flush(); Drain(); }
             }
             w.WriteEndArray();
             w.WriteEndObject();
         }
-        return Encoding.UTF8.GetString(ms.ToArray()) + "\n";
+        Drain();
+        output.Write("\n");
     }
 }

@@ -10,18 +10,33 @@ namespace PartForge.Cli.Sweep;
 /// </summary>
 public static class SweepRunner
 {
+    /// <summary>Variants evaluated together before their rows are handed on in plan order.</summary>
+    public const int BlockSize = 1024;
+
     /// <param name="done">Incremented once per finished variant (read it from another thread for progress).</param>
+    /// <param name="inOrder">Called with every row in plan order as soon as it and all rows before it are done
+    /// (the CSV is written this way, while the sweep runs), on the calling thread.</param>
+    /// <param name="cancel">Stops the sweep between blocks (an interrupt).</param>
     public static SweepRow[] Run(DesignSource source, SweepPlan plan, ISweepEvaluator evaluator, StrongBox<long>? done = null,
-        int maxThreads = 0)
+        int maxThreads = 0, Action<SweepRow>? inOrder = null, CancellationToken cancel = default)
     {
         long n = plan.Count;
         var rows = new SweepRow[n];
         var opts = new ParallelOptions { MaxDegreeOfParallelism = maxThreads > 0 ? maxThreads : Environment.ProcessorCount };
-        Parallel.For(0L, n, opts, i =>
+        // Blocks keep the hand-on in order without holding finished rows back for long; within a block each
+        // variant writes only its own slot, so the rows are in plan order whatever the thread timing.
+        for (long start = 0; start < n; start += BlockSize)
         {
-            rows[i] = RunOne(source, plan, evaluator, i);
-            if (done != null) Interlocked.Increment(ref done.Value);
-        });
+            cancel.ThrowIfCancellationRequested();
+            long end = Math.Min(n, start + BlockSize);
+            Parallel.For(start, end, opts, i =>
+            {
+                rows[i] = RunOne(source, plan, evaluator, i);
+                if (done != null) Interlocked.Increment(ref done.Value);
+            });
+            if (inOrder != null)
+                for (long i = start; i < end; i++) inOrder(rows[i]);
+        }
         return rows;
     }
 
