@@ -88,28 +88,44 @@ public static class SweepCommand
         var done = new StrongBox<long>();
         var sw = Stopwatch.StartNew();
         var cancel = s.Guard?.Token ?? CancellationToken.None;
-        var work = Task.Run(() => SweepRunner.Run(source, plan, evaluator, done,
-            inOrder: csv == null ? null : row => csv.Write(SweepOutput.CsvLine(plan, row)), cancel: cancel));
         long total = plan.Count;
+        var counts = new Dictionary<string, long>(StringComparer.Ordinal);
+        string? firstReason = null;
+        // A plain table with no --target is written as the rows finish and no row is kept (memory flat in the
+        // row count); sorting (--target), the JSON document and the terminal's table need every row, kept compact.
+        bool streamTable = target == null && !json && !s.IsTerminal;
+        var table = streamTable ? new SweepOutput.StreamedTable(s.Out, plan) : null;
+        var kept = streamTable ? null : new List<SweepRow>((int)Math.Min(total, SweepPlan.MaxVariants));
+        void Take(SweepRow row)
+        {
+            counts[row.Outcome.Status] = counts.GetValueOrDefault(row.Outcome.Status) + 1;
+            firstReason ??= row.Outcome.Reason;
+            csv?.Write(SweepOutput.CsvLine(plan, row));
+            if (table != null) table.Row(row);
+            else kept!.Add(row);
+        }
+        var work = Task.Run(() => SweepRunner.Stream(source, plan, evaluator, Take, done, cancel: cancel));
         if (!s.Quiet) ShowProgress(s, work, done, total);
         // An exception in a variant is a bug: it propagates to CommandAction (one line, exit 3).
-        SweepRow[] rows = work.GetAwaiter().GetResult();
+        work.GetAwaiter().GetResult();
         csv?.Commit();
-        IReadOnlyList<SweepRow> shown = target != null ? target.Sort(rows) : rows;
 
-        if (json) SweepOutput.Json(s.Out, name, plan, shown, target);
-        else if (s.IsTerminal) TerminalTable(s, plan, shown, target);
-        else SweepOutput.PlainTable(s.Out, plan, shown, target);
+        if (kept != null)
+        {
+            IReadOnlyList<SweepRow> shown = target != null ? target.Sort(kept) : kept;
+            if (json) SweepOutput.Json(s.Out, name, plan, shown, target);
+            else if (s.IsTerminal) TerminalTable(s, plan, shown, target);
+            else SweepOutput.PlainTable(s.Out, plan, shown, target);
+        }
 
-        var by = shown.GroupBy(r => r.Outcome.Status).ToDictionary(g => g.Key, g => g.Count());
         if (!s.Quiet)
         {
             s.Err.WriteLine($"sweep: {total} variants in {sw.Elapsed.TotalSeconds.ToString("0.00", System.Globalization.CultureInfo.InvariantCulture)} s: " +
-                            string.Join(", ", new[] { "pass", "warn", "fail", "invalid" }.Select(k => $"{by.GetValueOrDefault(k)} {k}")));
+                            string.Join(", ", new[] { "pass", "warn", "fail", "invalid" }.Select(k => $"{counts.GetValueOrDefault(k)} {k}")));
         }
-        if (by.GetValueOrDefault("invalid") == rows.Length)
+        if (counts.GetValueOrDefault("invalid") == total)
         {
-            s.Problem($"partforge sweep: no variant is a valid design (the first: {rows[0].Outcome.Reason}); change the --vary ranges");
+            s.Problem($"partforge sweep: no variant is a valid design (the first: {firstReason}); change the --vary ranges");
             return ExitCodes.BadInput;
         }
         return ExitCodes.Ok;

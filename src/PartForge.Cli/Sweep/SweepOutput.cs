@@ -53,6 +53,59 @@ public static class SweepOutput
     /// The plain table written line by line: one pass for the column widths, one to write, so nothing the size of
     /// the table is held (a 100,000-row sweep prints without a copy of its text in memory).
     /// </summary>
+    /// <summary>
+    /// The plain table written while the sweep runs, for a sweep that keeps no rows: the column widths cannot wait
+    /// for the last row, so each column is as wide as its heading, its axis values and <see cref="StreamedCellWidth"/>
+    /// (a wider cell pushes its line out rather than being cut). Call <see cref="StreamedTable.Row"/> per row.
+    /// </summary>
+    public sealed class StreamedTable
+    {
+        private readonly TextWriter _out;
+        private readonly SweepPlan _plan;
+        private readonly int[] _width;
+        private readonly StringBuilder _sb = new();
+
+        public StreamedTable(TextWriter output, SweepPlan plan)
+        {
+            _out = output;
+            _plan = plan;
+            var head = Headings(plan, null);
+            _width = head.Select(h => h.Length).ToArray();
+            _width[0] = Math.Max(_width[0], plan.Count.ToString(Inv).Length);
+            for (int k = 0; k < plan.Axes.Count; k++)
+            {
+                var a = plan.Axes[k];
+                for (int i = 0; i < a.Count; i++) _width[1 + k] = Math.Max(_width[1 + k], Value(a, a.Value(i)).Length);
+            }
+            for (int i = 1 + plan.Axes.Count; i < head.Length - 2; i++) _width[i] = Math.Max(_width[i], StreamedCellWidth);
+            _width[head.Length - 2] = Math.Max(_width[head.Length - 2], "invalid".Length);
+            Line(head);
+        }
+
+        public void Row(SweepRow r) => Line(CellsOf(_plan, r, null));
+
+        private void Line(string[] c) => _out.Write(FormatLine(_sb, c, _width));
+    }
+
+    /// <summary>Width of a result column of the streamed table: room for 9999.999.</summary>
+    public const int StreamedCellWidth = 8;
+
+    private static string FormatLine(StringBuilder sb, string[] c, int[] width)
+    {
+        sb.Clear();
+        for (int i = 0; i < c.Length; i++)
+        {
+            if (i > 0) sb.Append("  ");
+            sb.Append(i == c.Length - 1 ? c[i] : c[i].PadLeft(width[i]));
+        }
+        // No trailing blanks (an empty reason).
+        int end = sb.Length;
+        while (end > 0 && sb[end - 1] == ' ') end--;
+        sb.Length = end;
+        sb.Append('\n');
+        return sb.ToString();
+    }
+
     public static void PlainTable(TextWriter output, SweepPlan plan, IReadOnlyList<SweepRow> rows, SweepTarget? target)
     {
         var head = Headings(plan, target);
@@ -63,21 +116,7 @@ public static class SweepOutput
             for (int i = 0; i < c.Length - 1; i++) width[i] = Math.Max(width[i], c[i].Length);
         }
         var sb = new StringBuilder();
-        void Line(string[] c)
-        {
-            sb.Clear();
-            for (int i = 0; i < c.Length; i++)
-            {
-                if (i > 0) sb.Append("  ");
-                sb.Append(i == c.Length - 1 ? c[i] : c[i].PadLeft(width[i]));
-            }
-            // No trailing blanks (an empty reason).
-            int end = sb.Length;
-            while (end > 0 && sb[end - 1] == ' ') end--;
-            sb.Length = end;
-            sb.Append('\n');
-            output.Write(sb.ToString());
-        }
+        void Line(string[] c) => output.Write(FormatLine(sb, c, width));
         Line(head);
         foreach (var r in rows) Line(CellsOf(plan, r, target));
     }

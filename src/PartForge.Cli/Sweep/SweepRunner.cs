@@ -17,27 +17,46 @@ public static class SweepRunner
     /// <param name="inOrder">Called with every row in plan order as soon as it and all rows before it are done
     /// (the CSV is written this way, while the sweep runs), on the calling thread.</param>
     /// <param name="cancel">Stops the sweep between blocks (an interrupt).</param>
+    /// <returns>Every row, in plan order.</returns>
     public static SweepRow[] Run(DesignSource source, SweepPlan plan, ISweepEvaluator evaluator, StrongBox<long>? done = null,
         int maxThreads = 0, Action<SweepRow>? inOrder = null, CancellationToken cancel = default)
     {
+        var rows = new SweepRow[plan.Count];
+        Stream(source, plan, evaluator, r =>
+        {
+            rows[r.Index] = r;
+            inOrder?.Invoke(r);
+        }, done, maxThreads, cancel);
+        return rows;
+    }
+
+    /// <summary>
+    /// Runs every variant and hands each row on in plan order, keeping only one block of rows: memory stays flat
+    /// in the number of variants (what the caller keeps is its own).
+    /// </summary>
+    public static void Stream(DesignSource source, SweepPlan plan, ISweepEvaluator evaluator, Action<SweepRow> inOrder,
+        StrongBox<long>? done = null, int maxThreads = 0, CancellationToken cancel = default)
+    {
         long n = plan.Count;
-        var rows = new SweepRow[n];
+        var block = new SweepRow[Math.Min(n, BlockSize)];
         var opts = new ParallelOptions { MaxDegreeOfParallelism = maxThreads > 0 ? maxThreads : Environment.ProcessorCount };
-        // Blocks keep the hand-on in order without holding finished rows back for long; within a block each
-        // variant writes only its own slot, so the rows are in plan order whatever the thread timing.
+        // Within a block each variant writes only its own slot, so the rows are in plan order whatever the
+        // thread timing; blocks hand their rows on before the next block starts.
         for (long start = 0; start < n; start += BlockSize)
         {
             cancel.ThrowIfCancellationRequested();
             long end = Math.Min(n, start + BlockSize);
             Parallel.For(start, end, opts, i =>
             {
-                rows[i] = RunOne(source, plan, evaluator, i);
+                block[i - start] = RunOne(source, plan, evaluator, i);
                 if (done != null) Interlocked.Increment(ref done.Value);
             });
-            if (inOrder != null)
-                for (long i = start; i < end; i++) inOrder(rows[i]);
+            for (long i = start; i < end; i++)
+            {
+                inOrder(block[i - start]);
+                block[i - start] = null!;
+            }
         }
-        return rows;
     }
 
     public static SweepRow RunOne(DesignSource source, SweepPlan plan, ISweepEvaluator evaluator, long i)
