@@ -108,8 +108,8 @@ public sealed record CoilSpec
                 new DiagnosticMeasure(wire.OverallDiameterMm, c.HeightMm, "mm", c.HeightMm - wire.OverallDiameterMm));
         if (c.FillFactor > wire.MaxHexagonalFill)
             Err("fill-unachievable", "coils.fill_factor", string.Format(inv,
-                "coils.fill_factor {0:0.###} cannot be reached with this wire: hexagonal packing of {1:0.###} mm bare / {2:0.###} mm enamelled wire gives at most {3:0.###}; lower coils.fill_factor.",
-                c.FillFactor, wire.BareDiameterMm, wire.OverallDiameterMm, wire.MaxHexagonalFill),
+                "coils.fill_factor {0:0.###} cannot be reached with this wire: hexagonal packing of {1:0.###} mm bare / {2:0.###} mm enamelled wire gives at most {3:0.###}; lower coils.fill_factor to {4:0.###} or less.",
+                c.FillFactor, wire.BareDiameterMm, wire.OverallDiameterMm, wire.MaxHexagonalFill, Math.Floor(wire.MaxHexagonalFill * 1000) / 1000),
                 new DiagnosticMeasure(c.FillFactor, wire.MaxHexagonalFill, "1", wire.MaxHexagonalFill - c.FillFactor));
         if (diagnostics.Count > n0 && diagnostics.Skip(n0).Any(x => x.Severity == DiagnosticSeverity.Error)) return null;
         return new CoilSpec

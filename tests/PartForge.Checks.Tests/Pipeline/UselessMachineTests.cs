@@ -105,4 +105,20 @@ public class UselessMachineTests
         var r2 = PresetPipeline.Check(PresetPipeline.Load("crank-bench", ("coils.turns", m.Groups[1].Value)));
         Assert.Null(Find(r2, CheckIds.Electrical + "-coil-overlap"));
     }
+
+    [Fact]
+    public void The_schema_maxima_of_br_and_fill_factor_are_judged_by_the_checks_not_refused()
+    {
+        // br 2 (the schema's maximum) loads and passes every check of crank-bench; fill_factor 0.9069 (the schema's
+        // maximum, hexagonal packing of bare wire) loads and fails only because enamel takes room, with a fix that
+        // names a value that then passes.
+        var br = PresetPipeline.Check(PresetPipeline.Load("crank-bench", ("magnets.br", "2")));
+        Assert.DoesNotContain(br.Checks, c => c.Status == CheckStatus.Fail);
+        var m = MachineModel.From(PresetPipeline.Load("crank-bench", ("coils.fill_factor", "0.9069")));
+        var fill = Find(CheckRunner.Run(m, ElectricalEngine.Evaluate(m), parts: null), CheckIds.Electrical + "-fill-unachievable")!;
+        var to = System.Text.RegularExpressions.Regex.Match(fill.Message, @"lower coils\.fill_factor to ([0-9.]+)");
+        Assert.True(to.Success, fill.Message);
+        var fixedR = PresetPipeline.Check(PresetPipeline.Load("crank-bench", ("coils.fill_factor", to.Groups[1].Value)));
+        Assert.Null(Find(fixedR, CheckIds.Electrical + "-fill-unachievable"));
+    }
 }
