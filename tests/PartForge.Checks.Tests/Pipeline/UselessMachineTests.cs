@@ -121,4 +121,21 @@ public class UselessMachineTests
         var fixedR = PresetPipeline.Check(PresetPipeline.Load("crank-bench", ("coils.fill_factor", to.Groups[1].Value)));
         Assert.Null(Find(fixedR, CheckIds.Electrical + "-fill-unachievable"));
     }
+
+    [Fact]
+    public void No_speed_fix_lowers_max_rpm_below_the_rated_speed()
+    {
+        // A PLA rotor at 40,000 rpm rated (invented): the hoop stress and the magnet retention fail; lowering
+        // machine.max_rpm below machine.rated_rpm would be refused by the loader, so no fix may say so.
+        var d = PresetPipeline.Load("crank-bench", ("machine.rated_rpm", "40000"), ("machine.max_rpm", "40000"));
+        var r = PresetPipeline.Check(d);
+        var failing = r.Checks.Where(c => c.Status == CheckStatus.Fail && c.Id is CheckIds.RotorHoopStress or CheckIds.MagnetRetention).ToList();
+        Assert.NotEmpty(failing);
+        foreach (var c in failing)
+        {
+            var m = System.Text.RegularExpressions.Regex.Match(c.Message, @"lower machine\.max_rpm to ([0-9]+)");
+            if (m.Success) Assert.True(double.Parse(m.Groups[1].Value, System.Globalization.CultureInfo.InvariantCulture) >= 40000, c.Message);
+            Assert.Contains("; ", c.Message); // a fix is still named
+        }
+    }
 }
