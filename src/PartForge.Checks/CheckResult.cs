@@ -37,6 +37,12 @@ public sealed record CheckResult
     public required string Unit { get; init; }
 
     public required double Margin { get; init; }
+
+    /// <summary>
+    /// False for a finding with no number (a diagnostic that states a fact, a part that could not be made): its
+    /// value, limit and margin are 0 and mean nothing, and the terminal, the report and the results say so.
+    /// </summary>
+    public bool Measured { get; init; } = true;
     public required string Message { get; init; }
 
     /// <summary>Where the limiting value occurs, when that is meaningful.</summary>

@@ -22,7 +22,7 @@ public static partial class CheckRunner
             var list = DiagnosticChecks(electrical).ToList();
             list.Add(new CheckResult
             {
-                Id = "coil-unresolved", Part = PartId.Former, Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0,
+                Id = "coil-unresolved", Part = PartId.Former, Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0, Measured = false,
                 Message = "the coil could not be resolved, so no part could be made and no clearance check could run; fix the electrical errors first",
             });
             return new CheckReport(list.Concat(parts is null ? [] : PartErrors(parts)).ToList());
@@ -33,7 +33,7 @@ public static partial class CheckRunner
 
     /// <summary>The electrical engine's diagnostics as checks: errors fail, warnings warn.</summary>
     public static IEnumerable<CheckResult> DiagnosticChecks(ElectricalResult e) =>
-        Rules.ElectricalRules.Checks(e.Diagnostics.Select(d => (d.Id, d.Severity == Electrical.DiagnosticSeverity.Error, d.Key, d.Message)));
+        Rules.ElectricalRules.Checks(e.Diagnostics.Select(d => (d.Id, d.Severity == Electrical.DiagnosticSeverity.Error, d.Key, d.Message, d.Measure)));
 
     /// <summary>The checker's view of the electrical results (null when the coil is unresolved).</summary>
     public static ElectricalFacts? FactsFrom(MachineModel design, ElectricalResult e)
@@ -66,7 +66,7 @@ public static partial class CheckRunner
             MotorGoverns = motor,
             MagnetTemperatureC = e.Thermal?.MagnetTemperatureC ?? design.Operation.AmbientC,
             SensorAnglesDeg = e.Sensors?.Sensors.Select(s => s.AngleDeg).ToArray() ?? Array.Empty<double>(),
-            Diagnostics = e.Diagnostics.Select(d => (d.Id, d.Severity == Electrical.DiagnosticSeverity.Error, d.Key, d.Message)).ToArray(),
+            Diagnostics = e.Diagnostics.Select(d => (d.Id, d.Severity == Electrical.DiagnosticSeverity.Error, d.Key, d.Message, d.Measure)).ToArray(),
         };
     }
 
@@ -79,7 +79,7 @@ public static partial class CheckRunner
     private static IEnumerable<CheckResult> PartErrors(PartSet parts) =>
         parts.Diagnostics.Where(d => d.Severity == Parts.DiagnosticSeverity.Error).Select(d => new CheckResult
         {
-            Id = $"parts-{d.Code}", Part = d.Part, Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0,
+            Id = $"parts-{d.Code}", Part = d.Part, Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0, Measured = false,
             Message = d.Message, Basis = "part builder diagnostic",
         });
 }

@@ -41,7 +41,7 @@ public static partial class CheckRunner
         {
             into.Add(new CheckResult
             {
-                Id = "check-error", Part = null, Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0,
+                Id = "check-error", Part = null, Status = CheckStatus.Fail, Value = 0, Limit = 0, Unit = "", Margin = 0, Measured = false,
                 Message = $"the {group} checks could not be evaluated for this design ({ex.Message}); treat it as failed",
             });
         }

@@ -41,6 +41,10 @@ public static class Judge
     public static string F(double v) => Math.Round(v, 3).ToString("0.###", CultureInfo.InvariantCulture);
 
     /// <summary>A number rounded up (for a value to raise to) at 0.01 resolution.</summary>
+    /// <summary>True when the design file's schema allows <paramref name="value"/> for the key (a fix never names a value the loader refuses).</summary>
+    public static bool InSchema(string keyPath, double value) =>
+        PartForge.Design.Keys.SectionSpec.Root.Resolve(keyPath, out _) is { } chain && (chain[^1].Range is not { } r || chain[^1].InRange(value));
+
     public static string Up(double v) => (Math.Ceiling(v * 100 - 1e-9) / 100).ToString("0.##", CultureInfo.InvariantCulture);
 
     /// <summary>A number rounded down (for a value to lower to) at 0.01 resolution.</summary>

@@ -8,4 +8,8 @@ namespace PartForge.Electrical;
 /// <param name="Severity">Error or warning.</param>
 /// <param name="Key">The design key concerned, dotted snake_case (e.g. "machine.coils").</param>
 /// <param name="Message">What is wrong and what to change.</param>
-public sealed record Diagnostic(string Id, DiagnosticSeverity Severity, string Key, string Message);
+/// <param name="Measure">The quantity found against its limit, when the problem has one (null: a fact with no number).</param>
+public sealed record Diagnostic(string Id, DiagnosticSeverity Severity, string Key, string Message, DiagnosticMeasure? Measure = null);
+
+/// <summary>A diagnostic's quantity: the value found, the limit it crosses, the unit, and the signed margin (positive on the good side).</summary>
+public sealed record DiagnosticMeasure(double Value, double Limit, string Unit, double Margin);

@@ -159,10 +159,15 @@ public static partial class ElectricalEngine
         double lineRmsMax = lineRmsPerW * wMax * coldFactor, linePeakMax = linePeakPerW * wMax * coldFactor;
         if (lineRmsMax > 50)
             diags.Add(new Diagnostic("emf-above-elv-ac", DiagnosticSeverity.Warning, "machine.max_rpm",
-                string.Format(Inv, "at machine.max_rpm the line EMF reaches {0:0.#} V rms, above the 50 V AC extra-low-voltage limit (IEC 61140): treat the output as hazardous, insulate and enclose it, and follow local electrical codes; or lower machine.max_rpm or coils.turns.", lineRmsMax)));
+                string.Format(Inv, "at machine.max_rpm the line EMF reaches {0:0.#} V rms, above the 50 V AC extra-low-voltage limit (IEC 61140): treat the output as hazardous, insulate and enclose it, and follow local electrical codes; or lower machine.max_rpm or coils.turns.", lineRmsMax),
+                new DiagnosticMeasure(lineRmsMax, 50, "V", 50 - lineRmsMax)));
         if (linePeakMax > 120)
             diags.Add(new Diagnostic("emf-above-elv-dc", DiagnosticSeverity.Warning, "machine.max_rpm",
-                string.Format(Inv, "at machine.max_rpm the rectified output can reach {0:0.#} V DC, above the 120 V ripple-free DC extra-low-voltage limit (IEC 61140): follow local electrical codes and licensed practice; or lower machine.max_rpm or coils.turns.", linePeakMax)));
+                string.Format(Inv, "at machine.max_rpm the rectified output can reach {0:0.#} V DC, above the 120 V ripple-free DC extra-low-voltage limit (IEC 61140): follow local electrical codes and licensed practice; or lower machine.max_rpm or coils.turns.", linePeakMax),
+                new DiagnosticMeasure(linePeakMax, 120, "V", 120 - linePeakMax)));
+
+        FieldReach(d, gap, diags);
+        NegligibleEmf(d, w * linePeakPerW, diags);
 
         // Waveforms.
         int M = q.SamplesPerPeriod;
@@ -272,14 +277,80 @@ public static partial class ElectricalEngine
         return best;
     }
 
+    /// <summary>
+    /// Below this share of its value at the magnet faces the working field has died away across the gap (our own band).
+    /// </summary>
+    public const double FieldReachWarnRatio = 0.1;
+
+    /// <summary>Forward drop of one silicon diode, V (common practice, about 0.6 to 0.7 V at small currents).</summary>
+    public const double DiodeDropV = 0.7;
+
+    /// <summary>
+    /// gap-weakens-field: the field of alternating magnets of pole pitch tau (arc length per magnet at the magnet
+    /// pitch radius) falls off across a gap g as exp(-pi g / tau) in its fundamental (the Laplace solution above a
+    /// periodic magnetisation, docs/physics.md §12). Below <see cref="FieldReachWarnRatio"/> the coils see little
+    /// of the magnets however many turns they have: a warning that names the air gap (or the pole count) that
+    /// brings the ratio back, within the keys' ranges.
+    /// </summary>
+    internal static void FieldReach(MachineModel d, double magneticGapMm, List<Diagnostic> diags)
+    {
+        double tau = 2 * Math.PI * d.Magnets.Shape.PitchRadiusMm / d.Poles;
+        if (!(tau > 0) || !(magneticGapMm > 0)) return;
+        double ratio = Math.Exp(-Math.PI * magneticGapMm / tau);
+        if (ratio >= FieldReachWarnRatio) return;
+        double gMax = tau * Math.Log(1 / FieldReachWarnRatio) / Math.PI; // magnetic gap at which the ratio is the limit
+        var fixes = new List<string>();
+        double air = d.Gap.AirGapMm - (magneticGapMm - gMax);
+        if (air >= d.Gap.MinRunningGapMm && air > 0)
+            fixes.Add(string.Format(Inv, "lower gap.air_gap to {0:0.###}", Math.Floor(air * 1000) / 1000));
+        // Fewer, longer poles reach further: tau >= g pi / ln(1/ratio) at the same pitch radius.
+        int polesMax = (int)Math.Floor(2 * Math.PI * d.Magnets.Shape.PitchRadiusMm * Math.Log(1 / FieldReachWarnRatio) / (Math.PI * magneticGapMm));
+        polesMax -= polesMax % 2;
+        if (polesMax >= 2 && polesMax < d.Poles && WindingLayout.For(d.CoilsPerStator, polesMax, d.Phases).IsValid) fixes.Add(string.Format(Inv, "lower machine.poles to {0}", polesMax));
+        string fix = fixes.Count > 0 ? string.Join(" or ", fixes) : "bring the coils closer to the magnets (smaller gap.air_gap or former.flange)";
+        diags.Add(new Diagnostic("gap-weakens-field", DiagnosticSeverity.Warning, "gap.air_gap",
+            string.Format(Inv, "the magnetic gap of {0:0.###} mm is {1:0.##} pole pitches ({2:0.###} mm at the magnets' pitch radius): the working field reaching the coils is {3:G3} of its value at the magnet faces, below {4}; {5}.",
+                magneticGapMm, magneticGapMm / tau, tau, ratio, FieldReachWarnRatio, fix),
+            new DiagnosticMeasure(ratio, FieldReachWarnRatio, "1", ratio - FieldReachWarnRatio)));
+    }
+
+    /// <summary>
+    /// emf-negligible: the line EMF's peak at rated speed below one silicon diode's forward drop cannot drive a
+    /// current through a rectifier or light an indicator (common practice): a warning naming the turns or speed
+    /// that reach it (turns within the schema, never 0).
+    /// </summary>
+    internal static void NegligibleEmf(MachineModel d, double linePeakV, List<Diagnostic> diags)
+    {
+        if (!double.IsFinite(linePeakV) || linePeakV >= DiodeDropV) return;
+        var fixes = new List<string>();
+        if (linePeakV > 0)
+        {
+            double scale = DiodeDropV / linePeakV;
+            if (d.Coils.Turns is { } n && Math.Ceiling(n * scale) <= SchemaMax("coils.turns"))
+                fixes.Add(string.Format(Inv, "raise coils.turns to {0} (if the winding fits)", (long)Math.Ceiling(n * scale)));
+            double rpm = Math.Ceiling(d.RatedRpm * scale);
+            if (rpm <= d.MaxRpm) fixes.Add(string.Format(Inv, "raise machine.rated_rpm to {0}", rpm));
+        }
+        fixes.Add("bring the coils closer to the magnets (gap.air_gap)");
+        diags.Add(new Diagnostic("emf-negligible", DiagnosticSeverity.Warning, "coils.turns",
+            string.Format(Inv, "at machine.rated_rpm the line EMF peaks at {0:0.####} V, below one silicon diode's forward drop ({1} V): the machine can drive almost nothing; {2}.",
+                linePeakV, DiodeDropV, string.Join(" or ", fixes)),
+            new DiagnosticMeasure(linePeakV, DiodeDropV, "V", linePeakV - DiodeDropV)));
+    }
+
+    /// <summary>The schema's maximum of a key (so a fix never names a value the loader refuses).</summary>
+    private static double SchemaMax(string keyPath) =>
+        PartForge.Design.Keys.SectionSpec.Root.Resolve(keyPath, out _)?[^1].Range?.Max ?? double.PositiveInfinity;
+
     private static void CheckCoil(CoilWinding coil, CoilSpec spec, List<Diagnostic> diags)
     {
         if (coil.NeighbourGapMm is { } g && g < 0)
         {
             int? nMax = MaxTurns(spec);
             diags.Add(new Diagnostic("coil-overlap", DiagnosticSeverity.Error, "coils.turns",
-                string.Format(Inv, "the coils overlap their neighbours by {0:0.###} mm: {1} turns need a {2:0.###} mm build; lower coils.turns to {3} or fewer, use thinner wire, or raise coils.pitch_radius.",
-                    -g, coil.Turns, coil.Outline.RadialBuildMm, nMax is { } nm ? nm.ToString(Inv) : "fewer")));
+                string.Format(Inv, "the coils overlap their neighbours by {0:0.###} mm: {1} turns need a {2:0.###} mm build; {3}use thinner wire, or raise coils.pitch_radius.",
+                    -g, coil.Turns, coil.Outline.RadialBuildMm, nMax is >= 1 and var nm && nm < coil.Turns ? string.Format(Inv, "lower coils.turns to {0} or fewer, ", nm) : ""),
+                new DiagnosticMeasure(g, 0, "mm", g)));
         }
         if (coil.Outline.OuterMinRadiusMm <= 0)
             diags.Add(new Diagnostic("coil-crosses-axis", DiagnosticSeverity.Error, "coils.turns",

@@ -58,7 +58,7 @@ public sealed record ElectricalFacts
     public IReadOnlyList<double> SensorAnglesDeg { get; init; } = Array.Empty<double>();
 
     /// <summary>Errors and warnings of the electrical engine: (id, error?, key, message).</summary>
-    public IReadOnlyList<(string Id, bool IsError, string Key, string Message)> Diagnostics { get; init; } = Array.Empty<(string, bool, string, string)>();
+    public IReadOnlyList<(string Id, bool IsError, string Key, string Message, PartForge.Electrical.DiagnosticMeasure? Measure)> Diagnostics { get; init; } = Array.Empty<(string, bool, string, string, PartForge.Electrical.DiagnosticMeasure?)>();
 
     /// <summary>Flux in each steel face behind the magnets (the electrical engine's <c>BackIron</c>).</summary>
     public IReadOnlyList<PartForge.Electrical.Field.BackIronFluxResult> BackIron { get; init; } = Array.Empty<PartForge.Electrical.Field.BackIronFluxResult>();

@@ -106,13 +106,15 @@ internal static class PrintRules
         {
             double s = Shortfall(bore.Mm, wall);
             yield return Wall(CheckIds.PocketBoreWall, pv.Id, bore, wall, "bore wall",
-                $"lower rotor.bore to {Down(Math.Max(0, c.D.Rotor.BoreMm - 2 * s))} or raise magnets.pitch_radius by {Up(s)}", basis);
+                (InSchema("rotor.bore", Math.Floor((c.D.Rotor.BoreMm - 2 * s) * 100 + 1e-9) / 100) ? $"lower rotor.bore to {Down(c.D.Rotor.BoreMm - 2 * s)} or " : "")
+                + $"raise magnets.pitch_radius by {Up(s)}", basis);
         }
         if (pv.OfKind(FeatureKind.BoltHole).ToList() is { Count: > 0 } bolts && MinPair(pockets, bolts, true) is { } bolt)
         {
             double s = Shortfall(bolt.Mm, wall);
             string fix = c.D.Rotor.BoltCircle is { } bc
-                ? $"lower rotor.bolt_circle.diameter to {Down(bc.CircleDiameterMm - 2 * s)} or rotor.bolt_circle.hole to {Down(Math.Max(0, bc.HoleMm - 2 * s))}"
+                ? $"lower rotor.bolt_circle.diameter to {Down(bc.CircleDiameterMm - 2 * s)}"
+                  + (InSchema("rotor.bolt_circle.hole", Math.Floor((bc.HoleMm - 2 * s) * 100 + 1e-9) / 100) ? $" or rotor.bolt_circle.hole to {Down(bc.HoleMm - 2 * s)}" : "")
                 : "move the bolt holes away from the pockets";
             yield return Wall(CheckIds.PocketBoltWall, pv.Id, bolt, wall, "wall to a bolt hole", fix, basis);
         }
@@ -173,7 +175,9 @@ internal static class PrintRules
             string fix = p.B.Kind switch
             {
                 FeatureKind.Rim => $"raise stator.outer_diameter to {Up(c.D.Stator.OuterDiameterMm + 2 * s)}",
-                FeatureKind.Bore => $"lower stator.inner_diameter to {Down(Math.Max(0, c.D.Stator.InnerDiameterMm - 2 * s))}",
+                FeatureKind.Bore => InSchema("stator.inner_diameter", Math.Floor((c.D.Stator.InnerDiameterMm - 2 * s) * 100 + 1e-9) / 100)
+                    ? $"lower stator.inner_diameter to {Down(c.D.Stator.InnerDiameterMm - 2 * s)}"
+                    : "move the coils outwards (coils.pitch_radius) or use smaller coils",
                 _ => $"move stator.mount.circle_diameter {Up(2 * s)} further from the seats",
             };
             yield return Wall(CheckIds.SeatWall, pv.Id, p, wall, "seat wall", fix, "exact seat-to-edge distance against min_wall_lines x nozzle");
@@ -218,8 +222,13 @@ internal static class PrintRules
             double build = Math.Max(1e-9, o.RadialBuildMm);
             int turns = (int)Math.Floor(c.E.Turns * Math.Max(0, build - s / 2) / build);
             double sinHalf = Math.Sin(Math.PI / n);
-            msg += $"; lower coils.turns to {turns} or raise coils.pitch_radius to {Up(o.PitchRadiusMm + s / (2 * sinHalf))}"
-                   + (c.D.Former.MarginMm > 0 ? $" or lower former.margin to {Down(Math.Max(0, c.D.Former.MarginMm - s / 2))}" : "");
+            // Only fixes that are whole on their own and inside their key's range (never 0 turns).
+            var fixes = new List<string>();
+            if (turns >= 1 && turns < c.E.Turns) fixes.Add($"lower coils.turns to {turns}");
+            double pitch = o.PitchRadiusMm + s / (2 * sinHalf);
+            if (InSchema("coils.pitch_radius", pitch)) fixes.Add($"raise coils.pitch_radius to {Up(pitch)}");
+            if (c.D.Former.MarginMm - s / 2 >= 0) fixes.Add($"lower former.margin to {Down(c.D.Former.MarginMm - s / 2)}");
+            msg += "; " + (fixes.Count > 0 ? string.Join(" or ", fixes) : "use thinner wire or fewer machine.coils");
         }
         return new CheckResult
         {

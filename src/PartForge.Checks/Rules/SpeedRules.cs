@@ -51,7 +51,11 @@ internal static class SpeedRules
         {
             double rpmOk = rpm * Math.Sqrt((limit - band) / sigma);   // every term scales with omega^2
             string better = MaterialTable.All.Where(x => x != m).FirstOrDefault(x => HoopStressMpa(c, x, rpm) <= x.AllowableStressMpa * (1 - MaxRelativeBand))?.Name ?? "";
-            msg += $"; lower machine.max_rpm to {Math.Floor(rpmOk)}" + (better.Length > 0 ? $" or use rotor.material {better}" : "");
+            // machine.max_rpm may not go below machine.rated_rpm (a loader rule): then only the material can change.
+            var fixes = new List<string>();
+            if (Math.Floor(rpmOk) >= c.D.RatedRpm) fixes.Add($"lower machine.max_rpm to {Math.Floor(rpmOk)}");
+            if (better.Length > 0) fixes.Add($"use rotor.material {better}");
+            msg += "; " + (fixes.Count > 0 ? string.Join(" or ", fixes) : "use a stronger rotor.material or a smaller rotor.outer_diameter");
         }
         return new CheckResult
         {
@@ -90,7 +94,7 @@ internal static class SpeedRules
         {
             double target = capacity - band;
             var fixes = new List<string>();
-            if (target > 0) fixes.Add($"lower machine.max_rpm to {Math.Floor(rpm * Math.Sqrt(target / force))}");
+            if (target > 0 && Math.Floor(rpm * Math.Sqrt(target / force)) >= c.D.RatedRpm) fixes.Add($"lower machine.max_rpm to {Math.Floor(rpm * Math.Sqrt(target / force))}");
             double wallNeeded = force / (2 * h * tau * (1 - MaxRelativeBand));
             fixes.Add($"raise rotor.outer_diameter to {Up(c.D.Rotor.OuterDiameterMm + 2 * (wallNeeded - wall))} (rim wall {Up(wallNeeded)} mm)");
             msg += "; " + string.Join(" or ", fixes);

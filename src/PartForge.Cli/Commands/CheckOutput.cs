@@ -38,7 +38,7 @@ public static class CheckOutput
                 .AddColumn(new TableColumn("value").RightAligned().NoWrap()).AddColumn(new TableColumn("limit").RightAligned().NoWrap())
                 .AddColumn(new TableColumn("margin").RightAligned().NoWrap());
             foreach (var k in doc.Checks)
-                t.AddRow(Status(s, k.Status), Markup.Escape(k.Id), Markup.Escape(k.Part), Markup.Escape(V(k.Value, k.Unit)), Markup.Escape(N(k.Limit)), Markup.Escape(N(k.Margin)));
+                t.AddRow(Status(s, k.Status), Markup.Escape(k.Id), Markup.Escape(k.Part), Markup.Escape(k.Measured ? V(k.Value, k.Unit) : "-"), Markup.Escape(k.Measured ? N(k.Limit) : "-"), Markup.Escape(k.Measured ? N(k.Margin) : "-"));
             c.Write(t);
             foreach (var k in doc.Checks.Where(k => k.Status != "pass"))
                 c.MarkupLine($"{Status(s, k.Status)} {Markup.Escape(k.Id)} ({Markup.Escape(k.Part)}): {Markup.Escape(k.Message)}");
@@ -48,7 +48,7 @@ public static class CheckOutput
             int w = figures.Max(f => f.Name.Length);
             foreach (var (n, v) in figures) s.Out.WriteLine(n.PadRight(w) + "  " + v);
             s.Out.WriteLine();
-            var rows = doc.Checks.Select(k => new[] { k.Status, k.Id, k.Part, V(k.Value, k.Unit), N(k.Limit), N(k.Margin), k.Message }).ToList();
+            var rows = doc.Checks.Select(k => new[] { k.Status, k.Id, k.Part, k.Measured ? V(k.Value, k.Unit) : "-", k.Measured ? N(k.Limit) : "-", k.Measured ? N(k.Margin) : "-", k.Message }).ToList();
             rows.Insert(0, ["status", "check", "part", "value", "limit", "margin", "message"]);
             var widths = Enumerable.Range(0, 6).Select(i => rows.Max(r => r[i].Length)).ToArray();
             foreach (var r in rows)

@@ -12,7 +12,8 @@ namespace PartForge.Cli.Commands;
 /// <c>partforge sweep DESIGN --vary KEY=FROM..TO:STEP [--vary ...] [--csv FILE] [--target KEY=VALUE] [--json]</c>:
 /// evaluates every combination of the varied keys (electrical results and checks, nothing exported) on all
 /// cores and prints the key results of each variant. Exit 0 when the sweep ran (whatever the variants'
-/// status), 2 for bad input, 3 for an internal error.
+/// status), 2 for bad input (checked before any variant runs: the axes against the schema, the base design apart
+/// from the varied keys, the CSV path) and when no variant is a valid design, 3 for an internal error.
 /// </summary>
 public static class SweepCommand
 {
@@ -60,28 +61,72 @@ public static class SweepCommand
             foreach (var e in source.ParseErrors) s.Problem(e.ToString());
             return ExitCodes.BadInput;
         }
+        // The base design must be valid apart from what the sweep varies: otherwise every row would be
+        // "invalid" for the same reason. An error that names a varied key may be cured by the sweep's values.
         var baseDesign = source.Load();
+        if (!baseDesign.Success)
+        {
+            var varied = plan.Axes.Select(a => a.Key).ToArray();
+            bool AboutVaried(DesignError e) => varied.Any(k => e.KeyPath == k ||
+                string.Join(" ", e.Message, e.Allowed, e.Suggestion).Contains(k, StringComparison.Ordinal));
+            var fatal = baseDesign.Errors.Where(e => !AboutVaried(e)).ToList();
+            if (fatal.Count > 0)
+            {
+                foreach (var e in baseDesign.Errors) s.Problem(e.ToString());
+                s.Problem($"partforge sweep: the base design {designPath} is invalid ({fatal.Count} error{(fatal.Count == 1 ? "" : "s")} not on a varied key); fix it first");
+                return ExitCodes.BadInput;
+            }
+        }
         string name = baseDesign.Design?.Name ?? Path.GetFileNameWithoutExtension(designPath);
+
+        // The CSV's folder and permissions are checked, and its temporary file made, before any variant runs;
+        // its rows are written as they finish (in plan order), so memory does not grow with them for the file.
+        using var csv = csvPath != null ? StreamedTextFile.Open(csvPath) : null;
+        using var onInterrupt = s.Guard is { } guard && csv != null ? guard.Token.Register(csv.Abort) : default;
+        csv?.Write(SweepOutput.CsvHeader(plan));
 
         var done = new StrongBox<long>();
         var sw = Stopwatch.StartNew();
-        var work = Task.Run(() => SweepRunner.Run(source, plan, evaluator, done));
+        var cancel = s.Guard?.Token ?? CancellationToken.None;
         long total = plan.Count;
+        var counts = new Dictionary<string, long>(StringComparer.Ordinal);
+        string? firstReason = null;
+        // A plain table with no --target is written as the rows finish and no row is kept (memory flat in the
+        // row count); sorting (--target), the JSON document and the terminal's table need every row, kept compact.
+        bool streamTable = target == null && !json && !s.IsTerminal;
+        var table = streamTable ? new SweepOutput.StreamedTable(s.Out, plan) : null;
+        var kept = streamTable ? null : new List<SweepRow>((int)Math.Min(total, SweepPlan.MaxVariants));
+        void Take(SweepRow row)
+        {
+            counts[row.Outcome.Status] = counts.GetValueOrDefault(row.Outcome.Status) + 1;
+            firstReason ??= row.Outcome.Reason;
+            csv?.Write(SweepOutput.CsvLine(plan, row));
+            if (table != null) table.Row(row);
+            else kept!.Add(row);
+        }
+        var work = Task.Run(() => SweepRunner.Stream(source, plan, evaluator, Take, done, cancel: cancel));
         if (!s.Quiet) ShowProgress(s, work, done, total);
         // An exception in a variant is a bug: it propagates to CommandAction (one line, exit 3).
-        SweepRow[] rows = work.GetAwaiter().GetResult();
-        IReadOnlyList<SweepRow> shown = target != null ? target.Sort(rows) : rows;
+        work.GetAwaiter().GetResult();
+        csv?.Commit();
 
-        if (csvPath != null) TextFiles.WriteAtomic(csvPath, SweepOutput.Csv(plan, shown));
-        if (json) s.Out.Write(SweepOutput.Json(name, plan, shown, target));
-        else if (s.IsTerminal) TerminalTable(s, plan, shown, target);
-        else s.Out.Write(SweepOutput.PlainTable(plan, shown, target));
+        if (kept != null)
+        {
+            IReadOnlyList<SweepRow> shown = target != null ? target.Sort(kept) : kept;
+            if (json) SweepOutput.Json(s.Out, name, plan, shown, target);
+            else if (s.IsTerminal) TerminalTable(s, plan, shown, target);
+            else SweepOutput.PlainTable(s.Out, plan, shown, target);
+        }
 
         if (!s.Quiet)
         {
-            var by = shown.GroupBy(r => r.Outcome.Status).ToDictionary(g => g.Key, g => g.Count());
             s.Err.WriteLine($"sweep: {total} variants in {sw.Elapsed.TotalSeconds.ToString("0.00", System.Globalization.CultureInfo.InvariantCulture)} s: " +
-                            string.Join(", ", new[] { "pass", "warn", "fail", "invalid" }.Select(k => $"{by.GetValueOrDefault(k)} {k}")));
+                            string.Join(", ", new[] { "pass", "warn", "fail", "invalid" }.Select(k => $"{counts.GetValueOrDefault(k)} {k}")));
+        }
+        if (counts.GetValueOrDefault("invalid") == total)
+        {
+            s.Problem($"partforge sweep: no variant is a valid design (the first: {firstReason}); change the --vary ranges");
+            return ExitCodes.BadInput;
         }
         return ExitCodes.Ok;
     }

@@ -63,7 +63,15 @@ public sealed record SweepAxis(string Key, double From, double To, double Step, 
             error = $"--vary {key}: {Fmt(Math.Floor((to - from) / step) + 1)} values is more than the limit of {SweepPlan.MaxVariants} variants";
             return null;
         }
-        return new SweepAxis(key, from, to, step, whole);
+        var axis = new SweepAxis(key, from, to, step, whole);
+        // Every value must be one the design file accepts, else the sweep would compute rows that cannot load.
+        double last = axis.Value(axis.Count - 1);
+        if (spec.Range != null && (!spec.InRange(axis.Value(0)) || !spec.InRange(last)))
+        {
+            error = $"--vary {key}: {Fmt(axis.Value(0))}..{Fmt(last)} goes outside what {key} allows ({spec.AllowedText()})";
+            return null;
+        }
+        return axis;
     }
 
     private static bool TryNumber(string s, out double v) =>

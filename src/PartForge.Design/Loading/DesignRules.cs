@@ -15,19 +15,47 @@ internal static class DesignRules
 {
     private static string F(double v) => KeySpec.Format(Math.Round(v, 3));
 
+    /// <summary>What the magnet-pocket rules read besides the keys their messages name.</summary>
+    private static readonly string[] PocketReads = ["magnets", "machine.poles", "rotor.pocket_clearance", "rotor.outer_diameter", "rotor.bore"];
+
+    /// <summary>What the bolt-circle rules read besides the keys their messages name.</summary>
+    private static readonly string[] BoltReads = ["rotor.bolt_circle", "rotor.outer_diameter", "rotor.bore", "rotor.pocket_clearance", "magnets"];
+
+    /// <summary>A dotted key path in a message ("machine.max_rpm").</summary>
+    private static readonly System.Text.RegularExpressions.Regex KeyPathText = new(@"\b[a-z][a-z0-9_]*(?:\.[a-z][a-z0-9_]*)+\b", System.Text.RegularExpressions.RegexOptions.CultureInvariant);
+
+    /// <summary>
+    /// Runs every rule. A rule's error is added unless the rule reads a key that failed to map (its own key, the
+    /// keys its message names and <paramref name="ctx"/>'s extra reads): there the image holds a default, not what
+    /// the user wrote, so that rule waits for the key to be fixed while every other rule reports in the same run.
+    /// </summary>
     public static void Apply(Model.Design d, MapContext ctx)
     {
+        void Add(DesignError e, params string[] reads)
+        {
+            if (ctx.Failed.Count > 0)
+            {
+                var paths = reads.Append(e.KeyPath).Concat(new[] { e.Message, e.Allowed, e.Suggestion }
+                    .Where(t => t != null).SelectMany(t => KeyPathText.Matches(t!).Select(mt => mt.Value)));
+                if (ctx.TouchesFailed(paths)) return;
+                // A section the file does not have at all (a fragment, or a file still being written) is judged
+                // once the keys that are there map: its "is missing" lines would bury the mistakes on the page.
+                string top = e.KeyPath.Contains('.') ? e.KeyPath[..e.KeyPath.IndexOf('.')] : e.KeyPath;
+                if (!ctx.Keys.ContainsKey(top)) return;
+            }
+            ctx.Add(e);
+        }
         var m = d.Machine;
         // Machine
         if (m.Poles % 2 != 0)
-            ctx.Add(ctx.AtKey("machine.poles", "is not allowed", m.Poles.ToString(), "an even number (magnets alternate north and south)"));
+            Add(ctx.AtKey("machine.poles", "is not allowed", m.Poles.ToString(), "an even number (magnets alternate north and south)"));
         if (m.Phases == 3 && m.Coils % 3 != 0)
-            ctx.Add(ctx.AtKey("machine.coils", "is not allowed", m.Coils.ToString(), "a multiple of 3 for 3 phases"));
+            Add(ctx.AtKey("machine.coils", "is not allowed", m.Coils.ToString(), "a multiple of 3 for 3 phases"), "machine.phases");
         string[] conns = m.Phases == 3 ? ["star", "delta"] : ["series", "parallel"];
         if (m.Connection != null && !conns.Contains(m.Connection))
-            ctx.Add(ctx.AtKey("machine.connection", $"does not fit {m.Phases} phase{(m.Phases == 1 ? "" : "s")}", m.Connection, string.Join(" or ", conns)));
+            Add(ctx.AtKey("machine.connection", $"does not fit {m.Phases} phase{(m.Phases == 1 ? "" : "s")}", m.Connection, string.Join(" or ", conns)), "machine.phases");
         if (m.RatedRpm > m.MaxRpm)
-            ctx.Add(ctx.AtKey("machine.rated_rpm", $"is more than machine.max_rpm ({F(m.MaxRpm)})", F(m.RatedRpm), "at most machine.max_rpm", "raise machine.max_rpm or lower machine.rated_rpm"));
+            Add(ctx.AtKey("machine.rated_rpm", $"is more than machine.max_rpm ({F(m.MaxRpm)})", F(m.RatedRpm), "at most machine.max_rpm", "raise machine.max_rpm or lower machine.rated_rpm"));
 
         // Magnets: the size keys of the chosen shape, and none of another shape's.
         var mg = d.Magnets;
@@ -40,7 +68,7 @@ internal static class DesignRules
                 if (!ctx.Has("magnets." + key))
                 {
                     shapeOk = false;
-                    ctx.Add(ctx.AtKey("magnets." + key, $"is missing; {Article(mg.Shape)} {mg.Shape} magnet needs {string.Join(", ", kind.Keys)}", fallbacks: "magnets.shape"));
+                    Add(ctx.AtKey("magnets." + key, $"is missing; {Article(mg.Shape)} {mg.Shape} magnet needs {string.Join(", ", kind.Keys)}", fallbacks: "magnets.shape"), "magnets.shape");
                 }
             }
             foreach (var key in MagnetShapes.AllKeys)
@@ -49,15 +77,17 @@ internal static class DesignRules
                 {
                     shapeOk = false;
                     string hint = key == "pitch_radius" && !kind.Keys.Contains("pitch_radius") ? $"; {mg.Shape} magnets are placed by {string.Join(" and ", kind.Keys.Where(k => k.Contains("radius")))}" : "";
-                    ctx.Add(ctx.AtKey("magnets." + key, $"does not apply to {mg.Shape} magnets{hint}", suggestion: "remove it (or change magnets.shape)"));
+                    Add(ctx.AtKey("magnets." + key, $"does not apply to {mg.Shape} magnets{hint}", suggestion: "remove it (or change magnets.shape)"), "magnets.shape");
                 }
             }
+            // A size key that failed to map holds no value: the shape is judged once it is fixed.
+            if (ctx.TouchesFailed(kind.Keys.Select(k => "magnets." + k).Append("magnets.shape"))) shapeOk = false;
             if (shapeOk)
             {
                 foreach (var pr in kind.Validate(mg))
                 {
                     shapeOk = false;
-                    ctx.Add(ctx.AtKey("magnets." + pr.Key, pr.Message, pr.Value, pr.Allowed));
+                    Add(ctx.AtKey("magnets." + pr.Key, pr.Message, pr.Value, pr.Allowed), "magnets");
                 }
             }
         }
@@ -67,98 +97,98 @@ internal static class DesignRules
         var r = d.Rotor;
         double rim = r.OuterDiameter / 2, boreR = r.Bore / 2;
         if (r.Bore >= r.OuterDiameter)
-            ctx.Add(ctx.AtKey("rotor.bore", $"is not less than rotor.outer_diameter ({F(r.OuterDiameter)})", F(r.Bore), "less than rotor.outer_diameter"));
+            Add(ctx.AtKey("rotor.bore", $"is not less than rotor.outer_diameter ({F(r.OuterDiameter)})", F(r.Bore), "less than rotor.outer_diameter"));
         var layout = Layout.Parse(d.Machine.Layout);
         if (layout is { RotorBetweenStators: true } && r.PocketFloor > 0)
-            ctx.Add(ctx.AtKey("rotor.pocket_floor", "is not allowed in a dual-stator layout: the rotor holds its magnets in through pockets, facing both stators",
-                F(r.PocketFloor), "0", "set rotor.pocket_floor: 0"));
+            Add(ctx.AtKey("rotor.pocket_floor", "is not allowed in a dual-stator layout: the rotor holds its magnets in through pockets, facing both stators",
+                F(r.PocketFloor), "0", "set rotor.pocket_floor: 0"), "machine.layout");
         else if (r.PocketFloor >= r.Thickness)
-            ctx.Add(ctx.AtKey("rotor.pocket_floor", $"leaves no pocket in a rotor {F(r.Thickness)} mm thick", F(r.PocketFloor), $"less than rotor.thickness ({F(r.Thickness)})"));
+            Add(ctx.AtKey("rotor.pocket_floor", $"leaves no pocket in a rotor {F(r.Thickness)} mm thick", F(r.PocketFloor), $"less than rotor.thickness ({F(r.Thickness)})"));
         if (layout is { AllowsBackIron: false } && r.BackIron != null)
-            ctx.Add(ctx.AtKey("rotor.back_iron", "is not allowed in a dual-stator layout: both faces of the rotor face a stator", suggestion: "remove rotor.back_iron"));
+            Add(ctx.AtKey("rotor.back_iron", "is not allowed in a dual-stator layout: both faces of the rotor face a stator", suggestion: "remove rotor.back_iron"), "machine.layout");
 
         if (shape != null && m.Poles >= 2)
         {
             var (pIn, pOut) = shape.RadialRangeMm(r.PocketClearance);
             double web = shape.WebMm(m.Poles, r.PocketClearance);
             if (pOut >= rim)
-                ctx.Add(ctx.AtKey("magnets." + kind!.OuterKey, $"puts the pockets out to radius {F(pOut)} mm, through the rotor rim at {F(rim)} mm",
-                    suggestion: $"make rotor.outer_diameter more than {F(2 * pOut)} or move the magnets inwards"));
+                Add(ctx.AtKey("magnets." + kind!.OuterKey, $"puts the pockets out to radius {F(pOut)} mm, through the rotor rim at {F(rim)} mm",
+                    suggestion: $"make rotor.outer_diameter more than {F(2 * pOut)} or move the magnets inwards"), PocketReads);
             if (pIn <= boreR)
-                ctx.Add(ctx.AtKey("magnets." + kind!.InnerKey, $"puts the pockets in to radius {F(pIn)} mm, into the bore (radius {F(boreR)} mm)",
-                    suggestion: "move the magnets outwards or make rotor.bore smaller"));
+                Add(ctx.AtKey("magnets." + kind!.InnerKey, $"puts the pockets in to radius {F(pIn)} mm, into the bore (radius {F(boreR)} mm)",
+                    suggestion: "move the magnets outwards or make rotor.bore smaller"), PocketReads);
             if (web <= 0)
-                ctx.Add(ctx.AtKey("magnets." + kind!.SizeKey, $"makes neighbouring pockets overlap by {F(-web)} mm ({m.Poles} on radius {F(shape.PitchRadiusMm)} mm)",
-                    suggestion: "use smaller magnets, fewer machine.poles or a larger pitch radius", fallbacks: "magnets.shape"));
+                Add(ctx.AtKey("magnets." + kind!.SizeKey, $"makes neighbouring pockets overlap by {F(-web)} mm ({m.Poles} on radius {F(shape.PitchRadiusMm)} mm)",
+                    suggestion: "use smaller magnets, fewer machine.poles or a larger pitch radius", fallbacks: "magnets.shape"), PocketReads);
         }
         if (r.BoltCircle is { } bc)
         {
             double rb = bc.Diameter / 2, h = bc.Hole / 2;
             if (rb + h >= rim)
-                ctx.Add(ctx.AtKey("rotor.bolt_circle.diameter", $"puts the bolt holes out to radius {F(rb + h)} mm, beyond the rotor rim at {F(rim)} mm", F(bc.Diameter)));
+                Add(ctx.AtKey("rotor.bolt_circle.diameter", $"puts the bolt holes out to radius {F(rb + h)} mm, beyond the rotor rim at {F(rim)} mm", F(bc.Diameter)), BoltReads);
             if (rb - h <= boreR)
-                ctx.Add(ctx.AtKey("rotor.bolt_circle.diameter", $"puts the bolt holes in to radius {F(rb - h)} mm, into the bore (radius {F(boreR)} mm)", F(bc.Diameter),
-                    suggestion: "make the bolt circle larger or rotor.bore smaller"));
+                Add(ctx.AtKey("rotor.bolt_circle.diameter", $"puts the bolt holes in to radius {F(rb - h)} mm, into the bore (radius {F(boreR)} mm)", F(bc.Diameter),
+                    suggestion: "make the bolt circle larger or rotor.bore smaller"), BoltReads);
             if (bc.Count > 1 && 2 * rb * Math.Sin(Math.PI / bc.Count) <= bc.Hole)
-                ctx.Add(ctx.AtKey("rotor.bolt_circle.count", $"makes the bolt holes overlap ({bc.Count} holes of {F(bc.Hole)} mm on a {F(bc.Diameter)} mm circle)", bc.Count.ToString()));
+                Add(ctx.AtKey("rotor.bolt_circle.count", $"makes the bolt holes overlap ({bc.Count} holes of {F(bc.Hole)} mm on a {F(bc.Diameter)} mm circle)", bc.Count.ToString()), BoltReads);
             if (shape != null && shape.RadialRangeMm(r.PocketClearance) is var (p2In, p2Out) && rb + h >= p2In && rb - h <= p2Out)
-                ctx.Add(ctx.AtKey("rotor.bolt_circle.diameter", $"puts the bolt holes (radius {F(rb - h)} to {F(rb + h)} mm) into the magnet pockets (radius {F(p2In)} to {F(p2Out)} mm)",
-                    F(bc.Diameter), suggestion: "keep the bolt circle inside the pocket ring"));
+                Add(ctx.AtKey("rotor.bolt_circle.diameter", $"puts the bolt holes (radius {F(rb - h)} to {F(rb + h)} mm) into the magnet pockets (radius {F(p2In)} to {F(p2Out)} mm)",
+                    F(bc.Diameter), suggestion: "keep the bolt circle inside the pocket ring"), BoltReads);
         }
 
         // Stator ring
         var s = d.Stator;
         if (s.InnerDiameter >= s.OuterDiameter)
-            ctx.Add(ctx.AtKey("stator.inner_diameter", $"is not less than stator.outer_diameter ({F(s.OuterDiameter)})", F(s.InnerDiameter), "less than stator.outer_diameter"));
+            Add(ctx.AtKey("stator.inner_diameter", $"is not less than stator.outer_diameter ({F(s.OuterDiameter)})", F(s.InnerDiameter), "less than stator.outer_diameter"));
         else if (s.Mount is { } mt)
         {
             double rm = mt.CircleDiameter / 2, h = mt.Hole / 2;
             if (rm + h >= s.OuterDiameter / 2 || rm - h <= s.InnerDiameter / 2)
-                ctx.Add(ctx.AtKey("stator.mount.circle_diameter", $"puts the mount holes (radius {F(rm - h)} to {F(rm + h)} mm) outside the stator ring ({F(s.InnerDiameter / 2)} to {F(s.OuterDiameter / 2)} mm)", F(mt.CircleDiameter)));
+                Add(ctx.AtKey("stator.mount.circle_diameter", $"puts the mount holes (radius {F(rm - h)} to {F(rm + h)} mm) outside the stator ring ({F(s.InnerDiameter / 2)} to {F(s.OuterDiameter / 2)} mm)", F(mt.CircleDiameter)), "stator");
             if (mt.Count > 1 && 2 * rm * Math.Sin(Math.PI / mt.Count) <= mt.Hole)
-                ctx.Add(ctx.AtKey("stator.mount.count", $"makes the mount holes overlap ({mt.Count} holes of {F(mt.Hole)} mm on a {F(mt.CircleDiameter)} mm circle)", mt.Count.ToString()));
+                Add(ctx.AtKey("stator.mount.count", $"makes the mount holes overlap ({mt.Count} holes of {F(mt.Hole)} mm on a {F(mt.CircleDiameter)} mm circle)", mt.Count.ToString()), "stator");
         }
 
         // Coils
         var c = d.Coils;
         bool awg = ctx.Has("coils.wire.awg"), dia = ctx.Has("coils.wire.diameter");
         if (awg && dia)
-            ctx.Add(ctx.AtKey("coils.wire.diameter", "is given together with coils.wire.awg; give one of them", suggestion: "remove one"));
+            Add(ctx.AtKey("coils.wire.diameter", "is given together with coils.wire.awg; give one of them", suggestion: "remove one"));
         else if (!awg && !dia)
-            ctx.Add(ctx.AtKey("coils.wire", "is missing; give the wire as { awg: 28 } or { diameter: 0.32 } (bare copper, mm)", fallbacks: "coils"));
+            Add(ctx.AtKey("coils.wire", "is missing; give the wire as { awg: 28 } or { diameter: 0.32 } (bare copper, mm)", fallbacks: "coils"));
         bool turns = ctx.Has("coils.turns"), target = ctx.Has("coils.target_emf");
         if (turns && target)
-            ctx.Add(ctx.AtKey("coils.target_emf", "is given together with coils.turns; give one (target_emf solves the turns)", suggestion: "remove one"));
+            Add(ctx.AtKey("coils.target_emf", "is given together with coils.turns; give one (target_emf solves the turns)", suggestion: "remove one"));
         else if (!turns && !target)
-            ctx.Add(ctx.AtKey("coils.turns", "is missing; give coils.turns, or coils.target_emf to have the turns solved", fallbacks: "coils"));
+            Add(ctx.AtKey("coils.turns", "is missing; give coils.turns, or coils.target_emf to have the turns solved", fallbacks: "coils"));
         if (c.Shape == "round")
         {
             if (!ctx.Has("coils.core.diameter"))
-                ctx.Add(ctx.AtKey("coils.core.diameter", "is missing; a round coil needs the diameter of its hole", fallbacks: ["coils.core", "coils.shape"]));
+                Add(ctx.AtKey("coils.core.diameter", "is missing; a round coil needs the diameter of its hole", fallbacks: ["coils.core", "coils.shape"]), "coils.shape");
             if (ctx.Has("coils.core.width"))
-                ctx.Add(ctx.AtKey("coils.core.width", "does not apply to round coils (use coils.core.diameter)"));
+                Add(ctx.AtKey("coils.core.width", "does not apply to round coils (use coils.core.diameter)"), "coils.shape");
         }
         else
         {
             if (!ctx.Has("coils.core.width"))
-                ctx.Add(ctx.AtKey("coils.core.width", "is missing; a keystone coil needs the width of its inner window", fallbacks: ["coils.core", "coils.shape"]));
+                Add(ctx.AtKey("coils.core.width", "is missing; a keystone coil needs the width of its inner window", fallbacks: ["coils.core", "coils.shape"]), "coils.shape");
             if (ctx.Has("coils.core.diameter"))
-                ctx.Add(ctx.AtKey("coils.core.diameter", "does not apply to keystone coils (use coils.core.width)"));
+                Add(ctx.AtKey("coils.core.diameter", "does not apply to keystone coils (use coils.core.width)"), "coils.shape");
         }
         // Sensor
         var sn = d.Sensor;
         if (sn.Kind != "none" && sn.Count == 3 && m.Phases != 3)
-            ctx.Add(ctx.AtKey("sensor.count", "is not allowed with 1 phase: 3 sensors time 3 phases", "3", "1 (or sensor.kind: none)", fallbacks: "sensor.kind"));
+            Add(ctx.AtKey("sensor.count", "is not allowed with 1 phase: 3 sensors time 3 phases", "3", "1 (or sensor.kind: none)", fallbacks: "sensor.kind"), "sensor.kind", "machine.phases");
 
         // Printer and cutter: one nozzle and one kerf; sheets that go on the bed; spacing that clears the kerf.
         if (d.Printer.Nozzle is { } pn && ctx.Has("process.nozzle") && pn != d.Process.Nozzle)
-            ctx.Add(ctx.AtKey("printer.nozzle", $"differs from process.nozzle ({F(d.Process.Nozzle)})", F(pn), "the same nozzle in both, or only one of them", "remove one of the two keys"));
+            Add(ctx.AtKey("printer.nozzle", $"differs from process.nozzle ({F(d.Process.Nozzle)})", F(pn), "the same nozzle in both, or only one of them", "remove one of the two keys"), "printer.nozzle", "process.nozzle", "cutter.kerf", "process.kerf");
         if (d.Cutter.Kerf is { } ck && ctx.Has("process.kerf") && ck != d.Process.Kerf)
-            ctx.Add(ctx.AtKey("cutter.kerf", $"differs from process.kerf ({F(d.Process.Kerf)})", F(ck), "the same kerf in both, or only one of them", "remove one of the two keys"));
+            Add(ctx.AtKey("cutter.kerf", $"differs from process.kerf ({F(d.Process.Kerf)})", F(ck), "the same kerf in both, or only one of them", "remove one of the two keys"), "printer.nozzle", "process.nozzle", "cutter.kerf", "process.kerf");
         var cu = d.Cutter;
         double kerf = cu.Kerf ?? d.Process.Kerf;
         if (cu.Spacing < kerf)
-            ctx.Add(ctx.AtKey("cutter.spacing", $"is less than the kerf ({F(kerf)})", F(cu.Spacing), $"at least {F(kerf)}", $"set cutter.spacing to {F(kerf)} or more"));
+            Add(ctx.AtKey("cutter.spacing", $"is less than the kerf ({F(kerf)})", F(cu.Spacing), $"at least {F(kerf)}", $"set cutter.spacing to {F(kerf)} or more"), "cutter", "process.kerf");
         if (cu.Sheets != null && ctx.Has("cutter.sheets"))
         {
             foreach (var sh in Machines.CutterSpec.ParseSheets(cu.Sheets, cu.BedX, cu.BedY))
@@ -166,11 +196,11 @@ internal static class DesignRules
                 string size = $"{F(sh.WidthMm)}x{F(sh.HeightMm)}";
                 bool fits = (sh.WidthMm <= cu.BedX && sh.HeightMm <= cu.BedY) || (sh.HeightMm <= cu.BedX && sh.WidthMm <= cu.BedY);
                 if (!(sh.WidthMm > 0 && sh.HeightMm > 0))
-                    ctx.Add(ctx.AtKey("cutter.sheets", "has a sheet of zero size", size, "a width and a height above 0 mm"));
+                    Add(ctx.AtKey("cutter.sheets", "has a sheet of zero size", size, "a width and a height above 0 mm"), "cutter");
                 else if (!fits)
-                    ctx.Add(ctx.AtKey("cutter.sheets", $"has a sheet larger than the cutter's bed ({F(cu.BedX)}x{F(cu.BedY)})", size, "sheets no larger than cutter.bed_x x cutter.bed_y", "cut the sheet down or raise cutter.bed_x / cutter.bed_y", "cutter.bed_x"));
+                    Add(ctx.AtKey("cutter.sheets", $"has a sheet larger than the cutter's bed ({F(cu.BedX)}x{F(cu.BedY)})", size, "sheets no larger than cutter.bed_x x cutter.bed_y", "cut the sheet down or raise cutter.bed_x / cutter.bed_y", "cutter.bed_x"), "cutter");
                 if (sh.Count == 0)
-                    ctx.Add(ctx.AtKey("cutter.sheets", "has a sheet size with a count of 0", size + ":0", "a count of at least 1, or no count (as many as needed)"));
+                    Add(ctx.AtKey("cutter.sheets", "has a sheet size with a count of 0", size + ":0", "a count of at least 1, or no count (as many as needed)"), "cutter");
             }
         }
     }

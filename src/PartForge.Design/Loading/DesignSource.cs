@@ -40,11 +40,12 @@ public sealed class DesignSource
             if (applied != null) root = applied;
         }
         var design = (Model.Design)NodeMapper.MapSection(SectionSpec.Root, root, "", ctx);
-        if (ctx.Errors.Count == 0) DesignRules.Apply(design, ctx);
-        else DesignRules.Apply(design, new MapContext(FileName)); // resolve only; the rules' messages would repeat the mapping errors
+        // The rules run beside the mapping errors (each leaves out what it would judge on a key that failed to
+        // map), so one run reports every mistake; they are listed in file order, unplaced ones last.
+        DesignRules.Apply(design, ctx);
         if (ctx.Errors.Count > 0)
         {
-            var errs = ctx.Errors;
+            var errs = InFileOrder(ctx.Errors);
             if (errs.Count > LoadLimits.MaxErrors)
             {
                 int more = errs.Count - LoadLimits.MaxErrors;
@@ -55,6 +56,12 @@ public sealed class DesignSource
         }
         return DesignLoadResult.Ok(design, Machines.MachineModel.From(design));
     }
+
+    /// <summary>Errors by line and column (stable), those without a place in the file (overrides, whole file) last.</summary>
+    private static List<DesignError> InFileOrder(List<DesignError> errors) =>
+        errors.Select((e, i) => (e, i))
+            .OrderBy(x => x.e.Line > 0 ? 0 : 1).ThenBy(x => x.e.Line).ThenBy(x => x.e.Column).ThenBy(x => x.i)
+            .Select(x => x.e).ToList();
 
     /// <summary>Checks that a key path names a key of the design file; null if it does, else the error.</summary>
     public static DesignError? CheckKeyPath(string keyPath, string fileName = "override")

@@ -18,6 +18,30 @@ internal sealed class MapContext(string file)
     public void Add(DesignError e) => Errors.Add(e);
 
     /// <summary>
+    /// Key paths whose value did not map (wrong type, out of range, missing, or probably meant by an unknown key):
+    /// the design image holds a default there, so a cross-key rule that reads one of them would judge a value the
+    /// user did not write (<see cref="DesignRules"/> leaves such a rule's error out until the key is fixed).
+    /// </summary>
+    public HashSet<string> Failed { get; } = new(StringComparer.Ordinal);
+
+    /// <summary>True when any of <paramref name="paths"/> is, contains or lies inside a key that failed to map.</summary>
+    public bool TouchesFailed(IEnumerable<string> paths)
+    {
+        if (Failed.Count == 0) return false;
+        foreach (var p in paths)
+        {
+            foreach (var f in Failed)
+            {
+                if (p == f || Within(p, f) || Within(f, p)) return true;
+            }
+        }
+        return false;
+    }
+
+    private static bool Within(string inner, string outer) =>
+        outer.Length == 0 || (inner.Length > outer.Length && inner[outer.Length] == '.' && inner.StartsWith(outer, StringComparison.Ordinal));
+
+    /// <summary>
     /// An error located at a node. A key path or value with characters outside printable ASCII is shown with
     /// them as code points (<c>p\u043Eles</c>), and the suggestion starts by naming them.
     /// </summary>

@@ -19,6 +19,7 @@ internal static class NodeMapper
         {
             if (entry.Key is not YScalar ks || ks.IsNull)
             {
+                ctx.Failed.Add(prefix);
                 ctx.Add(ctx.At(entry.Key, prefix, "a key must be a plain word such as 'poles'", "type"));
                 continue;
             }
@@ -41,6 +42,10 @@ internal static class NodeMapper
             var spec1 = spec.Find(key);
             if (spec1 == null)
             {
+                // The key it was probably meant as holds its default: a rule reading that key waits for the fix.
+                ctx.Failed.Add(path);
+                if (KeySuggester.Nearest(key, spec.Keys.Select(k => k.Key)) is { } meant)
+                    ctx.Failed.Add(prefix.Length == 0 ? meant : prefix + "." + meant);
                 ctx.Add(ctx.At(ks, path, "is not a known key", "unknown-key",
                     allowed: "keys here: " + string.Join(", ", spec.Keys.Select(k => k.Key)),
                     suggestion: KeySuggester.ForKey(key, spec, prefix)));
@@ -48,14 +53,15 @@ internal static class NodeMapper
             }
             ctx.Keys[path] = ks;
             ctx.Values[path] = entry.Value;
-            if (TryValue(spec1, entry.Value, path, ctx, out var value) && value != null)
-                spec1.Property.SetValue(instance, value);
+            if (!TryValue(spec1, entry.Value, path, ctx, out var value)) ctx.Failed.Add(path);
+            else if (value != null) spec1.Property.SetValue(instance, value);
         }
         foreach (var k in spec.Keys)
         {
             if (k.IsRequired && !seen.ContainsKey(k.Key))
             {
                 string path = prefix.Length == 0 ? k.Key : prefix + "." + k.Key;
+                ctx.Failed.Add(path);
                 ctx.Add(ctx.At(map, path, "is missing; it is required", "missing", allowed: k.AllowedText()));
             }
         }

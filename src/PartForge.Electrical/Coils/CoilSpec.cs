@@ -89,7 +89,7 @@ public sealed record CoilSpec
         var c = m.Coils;
         var inv = CultureInfo.InvariantCulture;
         int n0 = diagnostics.Count;
-        void Err(string id, string key, string msg) => diagnostics.Add(new Diagnostic(id, DiagnosticSeverity.Error, key, msg));
+        void Err(string id, string key, string msg, DiagnosticMeasure? measure = null) => diagnostics.Add(new Diagnostic(id, DiagnosticSeverity.Error, key, msg, measure));
         double pr = c.PitchRadiusMm;
         double core = c.CoreMm ?? throw new ArgumentException("the coil core is not resolved for this coil shape", nameof(m));
         double radialLength = 0;
@@ -104,11 +104,13 @@ public sealed record CoilSpec
         if (c.Shape == CoilShape.Round && core / 2 >= pr)
             Err("coil-core-crosses-axis", "coils.core.diameter", string.Format(inv, "the coil core (diameter {0:0.###} mm) reaches the machine axis; raise coils.pitch_radius or make the core smaller.", core));
         if (wire.OverallDiameterMm > c.HeightMm)
-            Err("wire-thicker-than-window", "coils.wire", string.Format(inv, "the wire ({0:0.###} mm overall) is thicker than the winding height coils.height {1:0.###} mm; use thinner wire or a taller coil.", wire.OverallDiameterMm, c.HeightMm));
+            Err("wire-thicker-than-window", "coils.wire", string.Format(inv, "the wire ({0:0.###} mm overall) is thicker than the winding height coils.height {1:0.###} mm; use thinner wire or a taller coil.", wire.OverallDiameterMm, c.HeightMm),
+                new DiagnosticMeasure(wire.OverallDiameterMm, c.HeightMm, "mm", c.HeightMm - wire.OverallDiameterMm));
         if (c.FillFactor > wire.MaxHexagonalFill)
             Err("fill-unachievable", "coils.fill_factor", string.Format(inv,
-                "coils.fill_factor {0:0.###} cannot be reached with this wire: hexagonal packing of {1:0.###} mm bare / {2:0.###} mm enamelled wire gives at most {3:0.###}; lower coils.fill_factor.",
-                c.FillFactor, wire.BareDiameterMm, wire.OverallDiameterMm, wire.MaxHexagonalFill));
+                "coils.fill_factor {0:0.###} cannot be reached with this wire: hexagonal packing of {1:0.###} mm bare / {2:0.###} mm enamelled wire gives at most {3:0.###}; lower coils.fill_factor to {4:0.###} or less.",
+                c.FillFactor, wire.BareDiameterMm, wire.OverallDiameterMm, wire.MaxHexagonalFill, Math.Floor(wire.MaxHexagonalFill * 1000) / 1000),
+                new DiagnosticMeasure(c.FillFactor, wire.MaxHexagonalFill, "1", wire.MaxHexagonalFill - c.FillFactor));
         if (diagnostics.Count > n0 && diagnostics.Skip(n0).Any(x => x.Severity == DiagnosticSeverity.Error)) return null;
         return new CoilSpec
         {

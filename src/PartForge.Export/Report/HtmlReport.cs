@@ -56,8 +56,8 @@ public static class HtmlReport
             if (c.Counterpart.Length > 0) sb.Append(" data-counterpart=\"").Append(Esc(c.Counterpart)).Append('"');
             sb.Append(" data-status=\"").Append(Esc(c.Status))
               .Append("\" data-value=\"").Append(SvgCanvas.Num(c.Value)).Append("\"><td>").Append(Pill(c.Status)).Append("</td><td>").Append(Esc(c.Id))
-              .Append("</td><td>").Append(Esc(c.Part)).Append("</td><td class=\"num\">").Append(Fmt(c.Value)).Append("</td><td class=\"num\">").Append(Fmt(c.Limit))
-              .Append("</td><td class=\"num\">").Append(Fmt(c.Margin)).Append("</td><td>").Append(Esc(c.Unit)).Append("</td><td>").Append(Esc(c.Message));
+              .Append("</td><td>").Append(Esc(c.Part)).Append("</td><td class=\"num\">").Append(c.Measured ? Fmt(c.Value) : "-").Append("</td><td class=\"num\">").Append(c.Measured ? Fmt(c.Limit) : "-")
+              .Append("</td><td class=\"num\">").Append(c.Measured ? Fmt(c.Margin) : "-").Append("</td><td>").Append(Esc(c.Unit)).Append("</td><td>").Append(Esc(c.Message));
             if (c.Basis.Length > 0) sb.Append("<br><span class=\"note\">Basis: ").Append(Esc(c.Basis)).Append("</span>");
             sb.Append("</td></tr>\n");
         }

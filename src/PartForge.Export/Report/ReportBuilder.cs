@@ -39,7 +39,7 @@ public static class ReportBuilder
             CoilWaveform = e.CoilWaveform,
             PhaseWaveforms = e.PhaseWaveforms,
             WaveformRpm = e.WaveformRpm,
-            Checks = checks.Checks.Select(c => new ReportCheck(c.Id, c.PartName, c.StatusText, c.Value, c.Limit, c.Unit, c.Margin, c.Message, c.Basis ?? "", c.CounterpartName ?? "")).ToArray(),
+            Checks = checks.Checks.Select(c => new ReportCheck(c.Id, c.PartName, c.StatusText, c.Value, c.Limit, c.Unit, c.Margin, c.Message, c.Basis ?? "", c.CounterpartName ?? "", c.Measured)).ToArray(),
             Status = checks.StatusText,
             Forced = forced,
             Drawings = parts.Parts.Select(p => PartSketches.For(d, p)).ToArray(),

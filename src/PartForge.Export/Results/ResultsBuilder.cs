@@ -28,7 +28,7 @@ public static class ResultsBuilder
             Electrical = ElectricalOf(ev.Machine, ev.Electrical),
             Checks = checks.Checks.Select(c => new CheckEntry(c.Id, c.PartName, c.StatusText, c.Value, c.Limit, c.Unit, c.Margin, c.Message)
             {
-                Counterpart = c.CounterpartName, Where = c.Where?.Feature, WhereAngleDeg = c.Where?.AngleDeg, Basis = c.Basis,
+                Counterpart = c.CounterpartName, Where = c.Where?.Feature, WhereAngleDeg = c.Where?.AngleDeg, Basis = c.Basis, Measured = c.Measured,
             }).ToArray(),
             Parts = ev.Parts?.Parts.Select(p => new PartEntry(p.Name, Words.Of(p.Process), p.Quantity,
                 files != null && files.TryGetValue(p.Name, out var f) ? f : Array.Empty<string>(), countTriangles ? p.VolumeMm3 : 0, countTriangles ? p.Mesh.TriangleCount : 0)

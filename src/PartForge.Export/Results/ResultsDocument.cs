@@ -40,6 +40,9 @@ public sealed record ResultsSummary(string Status, int Fail, int Warn)
 
 public sealed record CheckEntry(string Id, string Part, string Status, double Value, double Limit, string Unit, double Margin, string Message)
 {
+    /// <summary>False when the finding has no number (value, limit and margin are 0 and mean nothing); written only then (an addition).</summary>
+    public bool Measured { get; init; } = true;
+
     /// <summary>The other part of the pair the check is about, or null (an addition to the pinned keys: every check carries it).</summary>
     public string? Counterpart { get; init; }
 

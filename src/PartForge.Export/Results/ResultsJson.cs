@@ -45,6 +45,7 @@ public static class ResultsJson
                 if (c.Where is { } where) w.WriteString("where", where); else w.WriteNull("where");
                 if (c.WhereAngleDeg is { } wa) Num(w, "where_angle_deg", wa, "checks." + c.Id + ".where_angle_deg"); else w.WriteNull("where_angle_deg");
                 if (c.Basis is { } basis) w.WriteString("basis", basis); else w.WriteNull("basis");
+                if (!c.Measured) w.WriteBoolean("measured", false);
                 w.WriteEndObject();
             }
             w.WriteEndArray();

@@ -45,9 +45,13 @@ public class SweepCommandTests
         Assert.Contains("sweep: 6/6 variants", r.Stderr); // plain progress lines when stderr is not a terminal
         var csv = File.ReadAllText(w.File("s.csv")).Split("\r\n", StringSplitOptions.RemoveEmptyEntries);
         Assert.Equal(7, csv.Length);
-        // Sorted by closeness of the phase EMF to 3 V: distances never decrease down the table.
+        // The CSV is written as the variants finish, in plan order; the table is sorted by closeness of the phase
+        // EMF to 3 V: distances (read from the CSV by variant number) never decrease down the table.
+        Assert.Equal(["1", "2", "3", "4", "5", "6"], csv.Skip(1).Select(l => l.Split(',')[0]));
         int col = Array.IndexOf(csv[0].Split(','), "electrical.phase.emf_rms_v");
-        var d3 = csv.Skip(1).Select(l => Math.Abs(double.Parse(l.Split(',')[col], System.Globalization.CultureInfo.InvariantCulture) - 3)).ToList();
+        var byVariant = csv.Skip(1).ToDictionary(l => int.Parse(l.Split(',')[0]),
+            l => Math.Abs(double.Parse(l.Split(',')[col], System.Globalization.CultureInfo.InvariantCulture) - 3));
+        var d3 = lines.Skip(1).Select(l => byVariant[int.Parse(l.TrimStart().Split(' ')[0])]).ToList();
         for (int i = 1; i < d3.Count; i++) Assert.True(d3[i] >= d3[i - 1]);
         // More turns give more EMF (Faraday: e = N dPhi/dt; the larger winding links a little less flux per turn, so not exactly in proportion).
         var json = PartforgeProcess.Run(w.Path, TimeSpan.FromSeconds(300), "sweep", d, "--vary", "coils.turns=100..140:20", "--json", "--quiet");
