@@ -48,6 +48,8 @@ public static class CheckIds
     public const string PrintBedFit = "print-bed-fit";
     /// <summary>A cut part fits a sheet the user has (with the edge spacing), and so the cutter's bed.</summary>
     public const string CutSheetFit = "cut-sheet-fit";
+    /// <summary>Every copy of a cut part has a place in the nest of its material and thickness on the sheets of cutter.sheets.</summary>
+    public const string CutSheetStock = "cut-sheet-stock";
     /// <summary>The coil seats (former footprint plus the seat clearance) lie radially inside the stator ring.</summary>
     public const string CoilSeatInRing = "coil-seat-in-ring";
     /// <summary>The windings face the magnet track: radial overlap of the winding with the magnets.</summary>
