@@ -30,6 +30,7 @@ public static partial class CheckRunner
         var report = Run(design, facts, ViewsFrom(parts!), options);
         var stock = new List<CheckResult>();
         Collect(stock, "cut sheet", () => Rules.CutSheetStockRules.Run(design, parts!));
+        Collect(stock, "overhang", () => Rules.OverhangRules.Run(design, parts!));
         return report with { Checks = report.Checks.Concat(stock).Concat(PartErrors(parts!)).ToList() };
     }
 

@@ -34,7 +34,7 @@ public static class BomBuilder
 
         foreach (var p in parts.Where(p => p.Id.Role == PartRole.Former))
             lines.Add(new BomLine("formers", "coil former", $"printed, {p.Material}", p.Quantity, "pcs",
-                $"{F(Round(p.MassEachG, 1))} g each, {F(Round(p.MassEachG * p.Quantity, 1))} g in all; one per coil"));
+                $"{F(Round(p.MassEachG, 1))} g each, {F(Round(p.MassEachG * p.Quantity, 1))} g in all; one per coil; printed in two pieces (former-base and former-cap) without supports"));
         foreach (var p in parts.Where(p => p.Process == PartProcess.Print && p.Id.Role != PartRole.Former))
             lines.Add(new BomLine("printed parts", p.Name, $"printed, {p.Material}", p.Quantity, "pcs",
                 $"{F(Round(p.MassEachG * p.Quantity, 1))} g of {p.Material} (solid; infill lowers it)"));

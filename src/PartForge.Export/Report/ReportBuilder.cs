@@ -93,7 +93,7 @@ public static class ReportBuilder
 
     private static ReportTable? PlateTable(MachineModel d, PartSet parts)
     {
-        var printed = parts.Parts.Where(p => p.Process == PartProcess.Print).ToArray();
+        var printed = parts.Parts.Where(p => p.Process == PartProcess.Print).SelectMany(p => p.PrintUnits).ToArray();
         if (printed.Length == 0) return null;
         var plates = parts.PlatesOf(printed, d.Printer, d.Precision);
         static string F(double v) => v.ToString("0.#", System.Globalization.CultureInfo.InvariantCulture);
