@@ -49,8 +49,12 @@ public static class CheckIds
     public const string MagnetTemperature = "magnet-temperature";
     /// <summary>A printed part fits the printer: its footprint in printing orientation on the bed (in a quarter turn), its height under bed_z.</summary>
     public const string PrintBedFit = "print-bed-fit";
+    /// <summary>A printed part (each of its print pieces) has no overhang beyond 45 degrees in its printing orientation (warns: needs supports).</summary>
+    public const string PrintOverhang = "print-overhang";
     /// <summary>A cut part fits a sheet the user has (with the edge spacing), and so the cutter's bed.</summary>
     public const string CutSheetFit = "cut-sheet-fit";
+    /// <summary>Every copy of a cut part has a place in the nest of its material and thickness on the sheets of cutter.sheets.</summary>
+    public const string CutSheetStock = "cut-sheet-stock";
     /// <summary>The coil seats (former footprint plus the seat clearance) lie radially inside the stator ring.</summary>
     public const string CoilSeatInRing = "coil-seat-in-ring";
     /// <summary>The windings face the magnet track: radial overlap of the winding with the magnets.</summary>

@@ -28,7 +28,10 @@ public static partial class CheckRunner
             return new CheckReport(list.Concat(parts is null ? [] : PartErrors(parts)).ToList());
         }
         var report = Run(design, facts, ViewsFrom(parts!), options);
-        return report with { Checks = report.Checks.Concat(PartErrors(parts!)).ToList() };
+        var stock = new List<CheckResult>();
+        Collect(stock, "cut sheet", () => Rules.CutSheetStockRules.Run(design, parts!));
+        Collect(stock, "overhang", () => Rules.OverhangRules.Run(design, parts!));
+        return report with { Checks = report.Checks.Concat(stock).Concat(PartErrors(parts!)).ToList() };
     }
 
     /// <summary>The electrical engine's diagnostics as checks: errors fail, warnings warn.</summary>

@@ -16,8 +16,22 @@ public sealed record PartModel
     /// <summary>Which part (role and side).</summary>
     public required PartId Id { get; init; }
 
-    /// <summary>The contract part name (rotor-front, back-iron, ...), for file names and messages.</summary>
-    public string Name => Id.Name;
+    /// <summary>The contract part name (rotor-front, back-iron, ...), for file names and messages; a print piece's
+    /// name is its part's and the piece's (<c>former-base</c>).</summary>
+    public string Name => Piece is null ? Id.Name : $"{Id.Name}-{Piece}";
+
+    /// <summary>For a print piece (one of <see cref="PrintPieces"/> of a part): its name within the part; null for a part.</summary>
+    public string? Piece { get; init; }
+
+    /// <summary>
+    /// The pieces the part is printed in when it is not printed whole (a coil former as a base and a cap, so that
+    /// no surface overhangs): each a prismatic part of its own, in its own frame (z = 0 its bottom face), with the
+    /// part's copies; together, as assembled, they make the part. Empty when the part is printed in one piece.
+    /// </summary>
+    public IReadOnlyList<PartModel> PrintPieces { get; init; } = Array.Empty<PartModel>();
+
+    /// <summary>What goes on the printer: the part's pieces, or the part itself.</summary>
+    public IEnumerable<PartModel> PrintUnits => PrintPieces.Count > 0 ? PrintPieces : new[] { this };
 
     /// <summary>What the part is for.</summary>
     public PartRole Role => Id.Role;

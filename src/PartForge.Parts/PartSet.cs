@@ -37,6 +37,21 @@ public sealed record PartSet
         return hit.Parts.SequenceEqual(list, ReferenceEqualityComparer.Instance) ? hit.Plates : Fabrication.PrintPlates.Of(list, printer, precision);
     }
 
+    private readonly System.Collections.Concurrent.ConcurrentDictionary<string, (PartModel[] Parts, Fabrication.CutSheetNest Nest)> _nests = new();
+
+    /// <summary>
+    /// The cut sheets of some of these parts on a cutter (<see cref="Fabrication.CutSheetNest.Of"/>), nested once
+    /// per set of parts and cutter and kept: a build's plan, its DXF and SVG sheets, its BOM and report share one nest.
+    /// </summary>
+    public Fabrication.CutSheetNest SheetsOf(IEnumerable<PartModel> cut, CutterSpec cutter, PartForge.Geometry.Precision precision)
+    {
+        var list = cut.ToArray();
+        string key = string.Join(",", list.Select(p => p.Name)) + "|" + cutter.BedXMm + "," + cutter.BedYMm + "," + cutter.KerfMm + "," + cutter.SpacingMm + ","
+                     + string.Join(";", cutter.Sheets) + "|" + precision;
+        var hit = _nests.GetOrAdd(key, _ => (list, Fabrication.CutSheetNest.Of(list, cutter, precision)));
+        return hit.Parts.SequenceEqual(list, ReferenceEqualityComparer.Instance) ? hit.Nest : Fabrication.CutSheetNest.Of(list, cutter, precision);
+    }
+
     public PartModel? Find(PartId id) => Parts.FirstOrDefault(p => p.Id == id);
 
     /// <summary>The part (throws if absent).</summary>

@@ -22,4 +22,7 @@ internal sealed record PartSpec
     public Profile? CutProfile { get; init; }
     public IReadOnlyList<Contour> Marks { get; init; } = Array.Empty<Contour>();
     public IReadOnlyList<string> Notes { get; init; } = Array.Empty<string>();
+
+    /// <summary>The pieces it is printed in (name, layers in the piece's frame, height), or none when printed whole.</summary>
+    public IReadOnlyList<(string Name, IReadOnlyList<ExactLayer> Layers, double HeightMm)> Pieces { get; init; } = Array.Empty<(string, IReadOnlyList<ExactLayer>, double)>();
 }

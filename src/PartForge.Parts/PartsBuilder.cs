@@ -141,6 +141,11 @@ public static partial class PartsBuilder
             Features = s.Features,
             Instances = s.Instances,
             Notes = s.Notes,
+            PrintPieces = s.Pieces.Select(pc => ToModel(new PartSpec
+            {
+                Id = s.Id, Process = s.Process, Material = s.Material, HeightMm = pc.HeightMm, Layers = pc.Layers,
+                Features = Array.Empty<PartFeature>(), Instances = s.Instances,
+            }, precision, 1) with { Piece = pc.Name }).ToArray(),
         };
     }
 }

@@ -16,6 +16,6 @@ public sealed class Cutter
     public double Spacing { get; init; } = 2;
 
     [Pattern(@"^\s*\d+(\.\d+)?x\d+(\.\d+)?(:\d+)?(\s*,\s*\d+(\.\d+)?x\d+(\.\d+)?(:\d+)?)*\s*$"),
-     Doc("Sheet sizes you have, in order of preference: WIDTHxHEIGHT mm, optionally :COUNT, comma-separated (e.g. \"600x400:2, 300x200\"); a size without a count has as many sheets as needed. Default: sheets of the bed's size.")]
+     Doc("Sheet sizes you have, in order of preference: WIDTHxHEIGHT mm, optionally :COUNT, comma-separated (e.g. \"600x400:2, 300x200\"); a size without a count has as many sheets as needed, a count is per material and thickness. The cut parts of one material and thickness are nested together on as few sheets as the nesting finds, sizes tried in this order. Default: sheets of the bed's size.")]
     public string? Sheets { get; init; }
 }

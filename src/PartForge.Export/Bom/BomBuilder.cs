@@ -15,7 +15,7 @@ public static class BomBuilder
     /// <summary>Margin added on every side of a cut part's bounding box for the sheet size, mm (our choice).</summary>
     public const double SheetMarginMm = 10;
 
-    public static BillOfMaterials Build(MachineModel d, double electricalWireTotalM, double wireGramsPerMetre, IReadOnlyList<BomPart> parts, IReadOnlyList<FastenerJoint> joints, JackingSet? jacks = null)
+    public static BillOfMaterials Build(MachineModel d, double electricalWireTotalM, double wireGramsPerMetre, IReadOnlyList<BomPart> parts, IReadOnlyList<FastenerJoint> joints, JackingSet? jacks = null, PartForge.Parts.Fabrication.CutSheetNest? sheets = null)
     {
         var lines = new List<BomLine>();
         int rotors = RotorCount(d), stators = StatorCount(d);
@@ -34,7 +34,7 @@ public static class BomBuilder
 
         foreach (var p in parts.Where(p => p.Id.Role == PartRole.Former))
             lines.Add(new BomLine("formers", "coil former", $"printed, {p.Material}", p.Quantity, "pcs",
-                $"{F(Round(p.MassEachG, 1))} g each, {F(Round(p.MassEachG * p.Quantity, 1))} g in all; one per coil"));
+                $"{F(Round(p.MassEachG, 1))} g each, {F(Round(p.MassEachG * p.Quantity, 1))} g in all; one per coil; printed in two pieces (former-base and former-cap) without supports"));
         foreach (var p in parts.Where(p => p.Process == PartProcess.Print && p.Id.Role != PartRole.Former))
             lines.Add(new BomLine("printed parts", p.Name, $"printed, {p.Material}", p.Quantity, "pcs",
                 $"{F(Round(p.MassEachG * p.Quantity, 1))} g of {p.Material} (solid; infill lowers it)"));
@@ -44,6 +44,17 @@ public static class BomBuilder
             lines.Add(new BomLine("cut parts", p.Name, $"{p.Material} sheet {F(p.ThicknessMm)} mm, at least {F(w)} x {F(h)} mm each", p.Quantity, "pcs",
                 $"{F(Round(p.MassEachG, 1))} g each; sheet = bounding box + {F(SheetMarginMm)} mm each side"));
         }
+
+        if (sheets is not null)
+            foreach (var stock in sheets.Stocks)
+                foreach (var size in stock.Layout.Bins.GroupBy(b => (b.WidthMm, b.HeightMm)))
+                {
+                    var bins = size.ToArray();
+                    double used = bins.Sum(b => b.PartAreaMm2) / bins.Sum(b => b.WidthMm * b.HeightMm);
+                    string copies = string.Join(", ", stock.Layout.Placements.Where(p => bins.Any(b => b.Index == p.BinIndex)).GroupBy(p => p.PartId).Select(g => $"{g.Key} x {g.Count()}"));
+                    lines.Add(new BomLine("cut sheets", $"{stock.Material} sheet {F(stock.ThicknessMm)} mm", $"{F(size.Key.WidthMm)} x {F(size.Key.HeightMm)} mm", bins.Length, "sheets",
+                        $"nested: {copies}; {F(Round(100 * used, 1))} % used (parts' area / sheet area)"));
+                }
 
         foreach (var j in joints) lines.Add(Fastener(j));
         if (jacks is { } jk)

@@ -10,6 +10,9 @@ public sealed record ExportScope(MachineModel Machine, IReadOnlyList<PartModel> 
     public bool WholeMachine => Parts.Count == All.Parts.Count;
 
     public IEnumerable<PartModel> Printed => Parts.Where(p => p.Process == PartProcess.Print);
+    /// <summary>What goes on the printer: each printed part, or its print pieces when it is printed in pieces.</summary>
+    public IEnumerable<PartModel> PrintUnits => Printed.SelectMany(p => p.PrintUnits);
+
     public IEnumerable<PartModel> Cut => Parts.Where(p => p.Process == PartProcess.Cut);
 
     /// <summary>A per-part file name: &lt;design&gt;-&lt;part&gt;.&lt;extension&gt;.</summary>

@@ -10,6 +10,9 @@ namespace PartForge.Export.Exporters;
 /// <param name="Variant">A format's own distinction between its files (e.g. "assembly"); empty when there is one kind.</param>
 public sealed record PlannedFile(string Name, ExportFormat Format, IReadOnlyList<PartModel> Parts, IReadOnlyList<PartModel> MeshedParts, string Variant = "")
 {
+    /// <summary>For one sheet of a nest: every part the nest was made of (the build's cut parts); empty otherwise.</summary>
+    public IReadOnlyList<PartModel> LaidOut { get; init; } = [];
+
     /// <summary>The one part of a per-part file, or null.</summary>
     public PartModel? Part => Parts.Count == 1 && Variant.Length == 0 ? Parts[0] : null;
 }

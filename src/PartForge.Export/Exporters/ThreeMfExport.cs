@@ -29,7 +29,7 @@ public sealed class ThreeMfExport : ExportFormat
 
     public override IEnumerable<PlannedFile> Plan(ExportScope scope)
     {
-        var printed = scope.Printed.ToArray();
+        var printed = scope.PrintUnits.ToArray();
         if (printed.Length > 0)
         {
             yield return new PlannedFile(OutputNames.ThreeMf(scope.Machine.Name), this, printed, printed, "parts");

@@ -26,13 +26,13 @@ public sealed class ExportPlan
     /// <summary>Whether the results document is written (it then carries every part's triangle count).</summary>
     public bool WritesResults => Files.Any(f => f.Format is ResultsExport);
 
-    /// <summary>The parts whose meshes the planned files need, in the machine's part order. Formats made from exact
-    /// profiles (DXF, SVG) need none.</summary>
+    /// <summary>The parts (and print pieces) whose meshes the planned files need, in the machine's part order, each
+    /// part followed by its pieces. Formats made from exact profiles (DXF, SVG) need none.</summary>
     public IReadOnlyList<PartModel> MeshedParts(PartSet all)
     {
-        var need = new HashSet<PartId>();
-        foreach (var f in Files) foreach (var p in f.MeshedParts) need.Add(p.Id);
-        return all.Parts.Where(p => need.Contains(p.Id)).ToArray();
+        var need = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var f in Files) foreach (var p in f.MeshedParts) need.Add(p.Name);
+        return all.Parts.SelectMany(p => p.PrintPieces.Prepend(p)).Where(p => need.Contains(p.Name)).ToArray();
     }
 
     /// <summary>Every preview the planned files show, each once, in a stable order.</summary>
@@ -54,7 +54,8 @@ public sealed class ExportPlan
             foreach (var f in format.Plan(scope))
             {
                 files.Add(f);
-                foreach (var p in f.Parts) byPart[p.Name].Add(f.Name);
+                // A print piece's files are listed under its part.
+                foreach (var name in f.Parts.Select(p => p.Id.Name).Distinct()) byPart[name].Add(f.Name);
             }
         }
         return new ExportPlan(files, byPart.ToDictionary(kv => kv.Key, kv => (IReadOnlyList<string>)kv.Value, StringComparer.Ordinal), scope);

@@ -57,7 +57,8 @@ public static class MeshBudget
         double c = r.PocketClearanceMm;
         // The magnet's half size: the scale of coils and seats.
         double half = shape.PlanSizeMm / 2;
-        var pocket = shape.Outline(c);
+        // The pocket as made, with its corner reliefs (a printed rotor's, the larger arcs of the two kinds).
+        var pocket = Parts.Shapes.DesignGeometry.RelievedPocketOutline(d, PartProcess.Print);
         for (int i = 0; i < rotors; i++)
         {
             Circle(r.OuterDiameterMm / 2);

@@ -23,6 +23,8 @@ public static class OutputNames
     }
 
     public static string PartFile(string design, string part, string extension) => $"{Sanitize(design)}-{Sanitize(part)}.{extension}";
+    /// <summary>A nested cut sheet: &lt;design&gt;-sheet-&lt;n&gt;.&lt;extension&gt;, n from 1 across the stocks.</summary>
+    public static string SheetFile(string design, int sheet, string extension) => $"{Sanitize(design)}-sheet-{sheet.ToString(System.Globalization.CultureInfo.InvariantCulture)}.{extension}";
     public static string ThreeMf(string design) => $"{Sanitize(design)}.3mf";
     public static string PlateThreeMf(string design, int plate) => $"{Sanitize(design)}-plate-{plate.ToString(System.Globalization.CultureInfo.InvariantCulture)}.3mf";
     public static string AssemblyThreeMf(string design) => $"{Sanitize(design)}-assembly.3mf";

@@ -4,6 +4,7 @@ using PartForge.Design.Parts;
 using PartForge.Export.Bom;
 using PartForge.Export.Pipeline;
 using PartForge.Parts;
+using PartForge.Parts.Fabrication;
 
 namespace PartForge.Export.Report;
 
@@ -45,7 +46,7 @@ public static class ReportBuilder
             Drawings = parts.Parts.Select(p => PartSketches.For(d, p)).ToArray(),
             SectionBodies = bodies,
             SectionDimensions = dims,
-            Bom = BomBuilder.Build(d, e.TotalWireM, e.WireGramsPerMetre, BomParts(parts), checks.Joints, checks.Jacks),
+            Bom = BomBuilder.Build(d, e.TotalWireM, e.WireGramsPerMetre, BomParts(parts), checks.Joints, checks.Jacks, SheetsOf(d, parts)),
             Assembly = checks.Assembly,
             Tables = e.Tables,
             Fabrication = FabricationTables(d, parts),
@@ -55,11 +56,45 @@ public static class ReportBuilder
         };
     }
 
-    /// <summary>The print plates of every printed part (the layout of <c>&lt;name&gt;.3mf</c> for the whole machine).</summary>
+    /// <summary>The nested cut sheets of every cut part of the machine (the sheets of a whole-machine build).</summary>
+    public static CutSheetNest SheetsOf(MachineModel d, PartSet parts) =>
+        parts.SheetsOf(parts.Parts.Where(p => p.Process == PartProcess.Cut), d.Cutter, d.Precision);
+
+    /// <summary>The print plates of every printed part (the layout of <c>&lt;name&gt;.3mf</c> for the whole machine) and the nested cut sheets.</summary>
     public static IReadOnlyList<ReportTable> FabricationTables(MachineModel d, PartSet parts)
     {
-        var printed = parts.Parts.Where(p => p.Process == PartProcess.Print).ToArray();
-        if (printed.Length == 0) return [];
+        var tables = new List<ReportTable>();
+        var plateTable = PlateTable(d, parts);
+        if (plateTable is not null) tables.Add(plateTable);
+        var sheetTable = SheetTable(d, parts);
+        if (sheetTable is not null) tables.Add(sheetTable);
+        return tables;
+    }
+
+    private static ReportTable? SheetTable(MachineModel d, PartSet parts)
+    {
+        var nest = SheetsOf(d, parts);
+        if (nest.Stocks.Count == 0) return null;
+        static string F(double v) => v.ToString("0.#", System.Globalization.CultureInfo.InvariantCulture);
+        var rows = new List<IReadOnlyList<string>>();
+        foreach (var (stock, bin, n) in nest.Sheets())
+        {
+            var on = stock.Layout.Placements.Where(p => p.BinIndex == bin.Index).GroupBy(p => p.PartId).Select(g => g.Count() > 1 ? $"{g.Key} x {g.Count()}" : g.Key);
+            string num = n.ToString(System.Globalization.CultureInfo.InvariantCulture);
+            rows.Add([num, $"{stock.Material} {F(stock.ThicknessMm)} mm", $"{F(bin.WidthMm)} x {F(bin.HeightMm)}", string.Join(", ", on), F(100 * bin.Utilisation) + " %",
+                OutputNames.SheetFile(d.Name, n, "dxf") + ", " + OutputNames.SheetFile(d.Name, n, "svg")]);
+        }
+        foreach (var stock in nest.Stocks)
+            foreach (var miss in stock.Layout.NotPlaced.GroupBy(m => m.PartId))
+                rows.Add(["-", $"{stock.Material} {F(stock.ThicknessMm)} mm", "", $"{miss.Key} x {miss.Count()} not placed: larger than every sheet left", "", ""]);
+        string title = $"Cut sheets: {nest.SheetCount}, every copy of the cut parts of one material and thickness nested on the sheets of cutter.sheets, {F(d.Cutter.SpacingMm)} mm apart and from the edges (bottom-left fill on no-fit polygons of the parts' convex hulls, largest part first, quarter turns); utilisation = parts' area / sheet area";
+        return new ReportTable(title, ["sheet", "stock", "size mm", "parts", "utilisation", "files"], rows);
+    }
+
+    private static ReportTable? PlateTable(MachineModel d, PartSet parts)
+    {
+        var printed = parts.Parts.Where(p => p.Process == PartProcess.Print).SelectMany(p => p.PrintUnits).ToArray();
+        if (printed.Length == 0) return null;
         var plates = parts.PlatesOf(printed, d.Printer, d.Precision);
         static string F(double v) => v.ToString("0.#", System.Globalization.CultureInfo.InvariantCulture);
         var rows = new List<IReadOnlyList<string>>();
@@ -72,7 +107,7 @@ public static class ReportBuilder
         foreach (var miss in plates.Layout.NotPlaced.GroupBy(m => m.PartId))
             rows.Add(["-", $"{miss.Key} x {miss.Count()} not placed: larger than the bed", "", ""]);
         string title = $"Print plates: {plates.PlateCount} on a {F(d.Printer.BedXMm)} x {F(d.Printer.BedYMm)} mm bed, {F(d.Printer.SpacingMm)} mm apart, each part with its larger flat face down";
-        return [new ReportTable(title, ["plate", "parts", "first-layer fill", "file"], rows)];
+        return new ReportTable(title, ["plate", "parts", "first-layer fill", "file"], rows);
     }
 
     public static IReadOnlyList<BomPart> BomParts(PartSet parts) => parts.Parts.Select(p =>

@@ -88,7 +88,7 @@ public static class ResultsBuilder
     private static IReadOnlyList<BomEntry> BomOf(MachineModel d, ElectricalResult e, PartSet parts, IReadOnlyList<PartForge.Checks.Hardware.FastenerJoint> joints, PartForge.Checks.Hardware.JackingSet? jacks)
     {
         var view = ElectricalView.From(d, e);
-        return BomBuilder.Build(d, view.TotalWireM, view.WireGramsPerMetre, ReportBuilder.BomParts(parts), joints, jacks).Lines
+        return BomBuilder.Build(d, view.TotalWireM, view.WireGramsPerMetre, ReportBuilder.BomParts(parts), joints, jacks, ReportBuilder.SheetsOf(d, parts)).Lines
             .Select(l => new BomEntry(l.Category, l.Item, l.Specification, l.Quantity, l.Unit, l.Notes)).ToArray();
     }
 

@@ -9,6 +9,9 @@ namespace PartForge.Formats.Cutting;
 /// </summary>
 public sealed record CutPlan(string PartName, double KerfMm, IReadOnlyList<CutPath> Paths, Vec2 MinMm, Vec2 MaxMm)
 {
+    /// <summary>The sheet of a nest (see <see cref="CutSheet.Frame"/>), or null.</summary>
+    public SheetFrame? Frame { get; init; }
+
     /// <summary>Half the kerf: how far outlines moved out and holes moved in.</summary>
     public double HalfKerfMm => KerfMm / 2;
 

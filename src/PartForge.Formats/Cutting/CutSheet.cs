@@ -13,6 +13,9 @@ namespace PartForge.Formats.Cutting;
 /// 0 writes the design contours unchanged.</param>
 public sealed record CutSheet(string PartName, Profile Cuts, IReadOnlyList<Contour> Marks, double KerfMm)
 {
+    /// <summary>The whole sheet when the cuts are a nest of parts on it; null for one part drawn on its own.</summary>
+    public SheetFrame? Frame { get; init; }
+
     /// <summary>A sheet with no marks.</summary>
     public static CutSheet Of(string partName, Profile cuts, double kerfMm) => new(partName, cuts, Array.Empty<Contour>(), kerfMm);
 }

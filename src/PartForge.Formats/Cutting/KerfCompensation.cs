@@ -42,7 +42,7 @@ public static class KerfCompensation
         foreach (var p in paths) ContourBounds.Extend(p.Contour, ref min, ref max);
         if (!double.IsFinite(min.X) || !double.IsFinite(min.Y) || !double.IsFinite(max.X) || !double.IsFinite(max.Y))
             throw new KerfCompensationException($"part '{name}': a contour has a coordinate that is not a finite number");
-        return new CutPlan(name, sheet.KerfMm, paths, min, max);
+        return new CutPlan(name, sheet.KerfMm, paths, min, max) { Frame = sheet.Frame };
     }
 
     private static Contour Compensate(Contour? c, double distanceMm, string part, string what, int index)

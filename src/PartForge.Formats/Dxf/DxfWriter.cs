@@ -57,10 +57,14 @@ public static class DxfWriter
         var w = new TagWriter(new StringBuilder(4096 + plan.Paths.Count * 512));
 
         string note = ShortKerfNote(plan);
-        var notePos = new Vec2(plan.MinMm.X, plan.MinMm.Y - 2 * NoteHeightMm);
+        var frame = plan.Frame;
+        // A nest's drawing is its sheet: the sheet's corner at the origin, the note below the sheet.
+        var lo = frame is null ? plan.MinMm : new Vec2(Math.Min(0, plan.MinMm.X), Math.Min(0, plan.MinMm.Y));
+        var hi = frame is null ? plan.MaxMm : new Vec2(Math.Max(frame.WidthMm, plan.MaxMm.X), Math.Max(frame.HeightMm, plan.MaxMm.Y));
+        var notePos = new Vec2(lo.X, lo.Y - 2 * NoteHeightMm);
         // Approximate extents of the note: about 0.6 x height a character (STANDARD style, width factor 1).
-        var extMin = new Vec2(plan.MinMm.X, notePos.Y);
-        var extMax = new Vec2(Math.Max(plan.MaxMm.X, notePos.X + 0.6 * NoteHeightMm * note.Length), plan.MaxMm.Y);
+        var extMin = new Vec2(lo.X, notePos.Y);
+        var extMax = new Vec2(Math.Max(hi.X, notePos.X + 0.6 * NoteHeightMm * note.Length), hi.Y);
 
         w.Comment(Ascii($"{plan.PartName}: {KerfNote(plan)}"));
         w.Comment("written by PartForge, ASCII DXF R12, units millimetre");
@@ -118,6 +122,20 @@ public static class DxfWriter
                 w.Int(70, 0);
             }
             w.Tag(0, "SEQEND"); w.Tag(8, layer);
+        }
+        if (frame is not null)
+        {
+            // The sheet's edge on the notes layer (never cut), and each part's label.
+            w.Tag(0, "POLYLINE"); w.Tag(8, DxfLayers.Notes); w.Int(66, 1); w.Point(10, new Vec2(0, 0)); w.Int(70, 1);
+            foreach (var corner in new[] { new Vec2(0, 0), new Vec2(frame.WidthMm, 0), new Vec2(frame.WidthMm, frame.HeightMm), new Vec2(0, frame.HeightMm) })
+            {
+                w.Tag(0, "VERTEX"); w.Tag(8, DxfLayers.Notes); w.Point(10, corner); w.Int(70, 0);
+            }
+            w.Tag(0, "SEQEND"); w.Tag(8, DxfLayers.Notes);
+            foreach (var (text, at) in frame.Labels)
+            {
+                w.Tag(0, "TEXT"); w.Tag(8, DxfLayers.Notes); w.Point(10, at); w.Real(40, NoteHeightMm); w.Tag(1, Ascii(text));
+            }
         }
         w.Tag(0, "TEXT"); w.Tag(8, DxfLayers.Notes); w.Point(10, notePos); w.Real(40, NoteHeightMm); w.Tag(1, Ascii(note));
         w.Tag(0, "ENDSEC");

@@ -45,8 +45,10 @@ public static class SvgWriter
         ArgumentNullException.ThrowIfNull(stream);
         ArgumentNullException.ThrowIfNull(plan);
         var b = new StringBuilder(1024 + plan.Paths.Count * 256);
+        // A nest's page is its sheet (lower-left corner at the origin); one part's page is its paths plus a margin.
         double x0 = plan.MinMm.X - MarginMm, y0 = -(plan.MaxMm.Y + MarginMm);
         double w = plan.WidthMm + 2 * MarginMm, h = plan.HeightMm + 2 * MarginMm;
+        if (plan.Frame is { } f) (x0, y0, w, h) = (0, -f.HeightMm, f.WidthMm, f.HeightMm);
 
         b.Append("<?xml version=\"1.0\" encoding=\"UTF-8\" standalone=\"no\"?>\n");
         b.Append("<svg xmlns=\"http://www.w3.org/2000/svg\" version=\"1.1\" width=\"").Append(N(w)).Append("mm\" height=\"").Append(N(h))

@@ -24,6 +24,12 @@ namespace PartForge.Parts.Formers;
 /// <item>Start-lead slot: through the upper flange along +x, from the core surface to the flange edge, width
 /// max(1.0, 2 x overall wire diameter). The upper flange is on the stator's grooved face, where the slot leads
 /// into the wire channel.</item>
+/// <item>Printed in two pieces, so that no surface overhangs (the upper flange of a one-piece former overhangs the
+/// core by the winding's radial build plus the margin and needs support): <c>former-base</c>, the lower flange, the
+/// core and the core carried on through the upper flange's height (printed flange down, every layer inside the one
+/// below), and <c>former-cap</c>, the upper flange as a flat ring with the lead slot whose hole is the core grown by
+/// the seat's slip fit (<see cref="DesignGeometry.SeatClearanceMm"/>), pushed over the core's top and glued.
+/// Assembled they are the former (less the slip-fit gap round the core's top).</item>
 /// <item>Spindle hole: a round through hole at the coil centre for a winding spindle, leaving a core wall of
 /// max(1.2, 3 x nozzle); left out when its diameter would be under 2 mm.</item>
 /// </list>
@@ -73,6 +79,17 @@ internal static class FormerBuilder
             new(f, f + h, new[] { window }, spin),
             new(f + h, H, new[] { footprint }, spin.Append(slot).ToArray()),
         };
+        // The two print pieces (see the remarks): the base, and the cap in its own frame (z = 0 at its bottom face).
+        var capHole = ContourOffset.Offset(window, DesignGeometry.SeatClearanceMm(d));
+        var pieces = new (string, IReadOnlyList<ExactLayer>, double)[]
+        {
+            ("base", new List<ExactLayer>
+            {
+                new(0, f, new[] { footprint }, spin),
+                new(f, H, new[] { window }, spin),
+            }, H),
+            ("cap", new List<ExactLayer> { new(0, f, new[] { footprint }, new[] { capHole, slot }) }, f),
+        };
         var features = new List<PartFeature>
         {
             new("flange-lower", FeatureKind.Flange, 0, footprint, 0, f, 0, 0),
@@ -87,6 +104,7 @@ internal static class FormerBuilder
         var (process, material) = ProcessChoice.Resolve(PartId.Former, d.Parts.For(PartRole.Former), false,
             "a former is a bobbin of three layers (flange, core, flange)", diags);
         notes.Insert(0, $"former: wind {coil.Turns} turns between the flanges, start lead out through the slot in the upper flange (the flange with the slot faces the stator's grooved side); the flat on the flanges matches the flat in the seat.");
+        notes.Insert(1, "former: printed in two pieces without supports, former-base (lower flange and core, flange down) and former-cap (the upper flange, a flat ring with the lead slot); push the cap over the top of the core with its flat in line with the base's, glue it, then wind.");
         return new PartSpec
         {
             Id = PartId.Former,
@@ -97,6 +115,7 @@ internal static class FormerBuilder
             Features = features,
             Instances = Array.Empty<PartInstance>(), // placed by PartsBuilder with the stators
             Notes = notes,
+            Pieces = pieces,
         };
     }
 

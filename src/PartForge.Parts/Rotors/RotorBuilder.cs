@@ -68,7 +68,13 @@ internal static class RotorBuilder
         int poles = d.Poles;
         var notes = new List<string>();
 
-        var pocket0 = DesignGeometry.PocketOutline(d);
+        string whyNot = through ? "" : "its magnet pockets are blind (rotor.pocket_floor > 0)";
+        var (process, material) = ProcessChoice.Resolve(id, d.Parts.For(PartRole.Rotor), through, whyNot, diags);
+        var pocket0 = DesignGeometry.RelievedPocketOutline(d, process);
+        if (pocket0.Circle is null && pocket0.Segments.Count > DesignGeometry.PocketOutline(d).Segments.Count)
+            notes.Add(process == PartProcess.Print
+                ? $"{name}: each magnet pocket corner has a relief circle (radius from printer.nozzle {d.Printer.NozzleMm.ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)} mm) so a magnet of the nominal size seats in the corners"
+                : $"{name}: each magnet pocket corner has a dog-bone notch (radius kerf/2 + 0.02 mm, kerf {d.Cutter.KerfMm.ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)} mm) so a magnet of the nominal size seats in the corners");
         var (pIn, pOut) = Exact2D.RadialExtent(pocket0);
         var pockets = Enumerable.Range(0, poles).Select(i => pocket0.RotatedDeg(DesignGeometry.PoleAngleDeg(d, i))).ToArray();
 
@@ -137,8 +143,6 @@ internal static class RotorBuilder
             diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, id, "no-polarity-marks", $"{name}: no room beside the pockets for polarity dots; left out"));
         }
 
-        string whyNot = through ? "" : "its magnet pockets are blind (rotor.pocket_floor > 0)";
-        var (process, material) = ProcessChoice.Resolve(id, d.Parts.For(PartRole.Rotor), through, whyNot, diags);
 
         var st = new PrismaticStack(t).Outer(rim);
         if (bore is not null) st.Through(bore);

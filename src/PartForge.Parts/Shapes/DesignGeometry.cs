@@ -1,5 +1,6 @@
 using PartForge.Design.Machines;
 using PartForge.Geometry.Exact;
+using PartForge.Geometry.Fabrication;
 using PartForge.Geometry.Profiles;
 
 namespace PartForge.Parts.Shapes;
@@ -31,6 +32,33 @@ public static class DesignGeometry
 
     /// <summary>Magnet pocket 0 (rotor.pocket_clearance added as the magnet shape defines it).</summary>
     public static Contour PocketOutline(MachineModel m) => m.Magnets.Shape.Outline(m.Rotor.PocketClearanceMm);
+
+    /// <summary>
+    /// How the corners of a magnet pocket that the tool cannot reach are relieved, so that a magnet of the nominal
+    /// size seats to the bottom of every corner: a printed rotor gets a circle about each corner sized from the
+    /// extrusion line (<see cref="CornerCircleRelief"/> with the line width taken as <c>printer.nozzle</c>, common
+    /// practice); a cut rotor a dog-bone notch sized from the beam (<see cref="DogBoneRelief"/> with the tool radius
+    /// kerf / 2). Null when there is no tool radius (a cut with kerf 0).
+    /// </summary>
+    public static CornerReliefRule? PocketRelief(MachineModel m, PartProcess process) =>
+        process == PartProcess.Print ? new CornerCircleRelief(m.Printer.NozzleMm)
+        : m.Cutter.KerfMm > 0 ? new DogBoneRelief(m.Cutter.KerfMm / 2) : null;
+
+    /// <summary>Magnet pocket 0 as made: <see cref="PocketOutline"/> with its unreachable corners relieved (<see cref="PocketRelief"/>);
+    /// a pocket without corners (a disc's) is unchanged.</summary>
+    public static Contour RelievedPocketOutline(MachineModel m, PartProcess process)
+    {
+        var pocket = PocketOutline(m);
+        if (PocketRelief(m, process) is not { } rule) return pocket;
+        try
+        {
+            return CornerRelief.RelieveHole(pocket, rule, m.Precision);
+        }
+        catch (ArgumentException e)
+        {
+            throw new PartsException($"the magnet pocket's corner reliefs do not fit the pocket ({e.Message}); make the magnet larger or the nozzle (printer.nozzle) or kerf (cutter.kerf) smaller");
+        }
+    }
 
     /// <summary>Smallest and largest radius of the bare magnets (no clearance), exact on the outline.</summary>
     public static (double Min, double Max) MagnetRadialExtentMm(MachineModel m) => Exact2D.RadialExtent(m.Magnets.Shape.Outline(0));

@@ -122,9 +122,10 @@ public sealed class AssemblyThreeMfTests : IDisposable
             Assert.True(Math.Abs(part.VolumeMm3 - report.SignedVolume) < 1e-6 * part.VolumeMm3, $"{o.Name}: volume {report.SignedVolume} vs {part.VolumeMm3}");
         }
 
-        // The other file keeps its contract form: one object per printed part (the back irons are cut steel).
+        // The other file keeps its contract form: one object per printed part, or per print piece of a part printed in
+        // pieces (the former's base and cap; the back irons are cut steel).
         var (perPart, _) = ReadModel(Path.Combine(r.OutputFolder!, "wind-duo.3mf"));
-        Assert.Equal(set.Parts.Where(p => p.Process == PartForge.Design.Machines.PartProcess.Print).Select(p => p.Name), perPart.Select(o => o.Name));
+        Assert.Equal(set.Parts.Where(p => p.Process == PartForge.Design.Machines.PartProcess.Print).SelectMany(p => p.PrintUnits).Select(p => p.Name), perPart.Select(o => o.Name));
     }
 
     [Fact]

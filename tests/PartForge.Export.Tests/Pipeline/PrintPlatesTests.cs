@@ -117,7 +117,12 @@ public sealed class PrintPlatesTests : IDisposable
         {
             var f = SplitCsv(line);
             if (f[2].StartsWith("printed", StringComparison.Ordinal))
-                d[f[1] == "coil former" ? "former" : f[1]] = int.Parse(f[3], CultureInfo.InvariantCulture);
+            {
+                // The coil former is printed in two pieces, each once per coil.
+                int q = int.Parse(f[3], CultureInfo.InvariantCulture);
+                if (f[1] == "coil former") { d["former-base"] = q; d["former-cap"] = q; }
+                else d[f[1]] = q;
+            }
         }
         return d;
     }

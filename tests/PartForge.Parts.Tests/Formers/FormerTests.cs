@@ -87,4 +87,40 @@ public class FormerTests
         Assert.True(r.IsValid, r.ToString());
         Assert.Equal(1, r.Genus); // the spindle hole; the lead slot is open at the edge
     }
+
+    /// <summary>
+    /// The two print pieces of the former (base and cap) against closed forms: the base is the lower flange and the
+    /// core to the full height; the cap the upper flange less a hole of the core's radius plus the seat's slip fit
+    /// (print_xy 0.1 + 0.1 = 0.2 mm) and the lead slot. Source: as VolumeMatchesTrueCircleGeometry (pi r^2, circular
+    /// segment, strip integral). Each piece is watertight and prints with every layer inside the one below.
+    /// </summary>
+    [Fact]
+    public void PrintPiecesAreTheBaseAndTheCapAsDocumented()
+    {
+        var (_, _, set) = Single();
+        var former = set.Get(PartForge.Design.Parts.PartId.Former);
+        Assert.Equal(["former-base", "former-cap"], former.PrintPieces.Select(p => p.Name));
+        var bas = former.PrintPieces[0];
+        var cap = former.PrintPieces[1];
+        double rf = 4 + 5 + 1.0, k = 0.6, f = 0.8, h = 5, rc = 4, rsp = 4 - 1.2, a = 0.5, c = 0.2;
+        double flange = Geo.Circle(rf) - Geo.SegmentArea(rf, k);
+        double vBase = f * (flange - Geo.Circle(rsp)) + (h + f) * (Geo.Circle(rc) - Geo.Circle(rsp));
+        double vCap = f * (flange - Geo.Circle(rc + c) - (Geo.ChordStrip(rf, a) - Geo.ChordStrip(rc + c, a)));
+        double e = TestDesigns.Tol;
+        double bBase = e * 2 * Math.PI * (rf * f + rc * (h + f) + rsp * (2 * f + h));
+        double bCap = e * 2 * Math.PI * (rf + rc + c) * f + e * 4 * rf * f;
+        Assert.InRange(bas.VolumeMm3, vBase - bBase, vBase + bBase);
+        Assert.InRange(cap.VolumeMm3, vCap - bCap, vCap + bCap);
+        Assert.Equal(2 * f + h, bas.HeightMm, 12);
+        Assert.Equal(f, cap.HeightMm, 12);
+        Assert.Equal(former.Quantity, bas.Quantity);
+        Assert.Equal(former.Quantity, cap.Quantity);
+        foreach (var p in former.PrintPieces)
+        {
+            var r = MeshValidator.Validate(p.Mesh);
+            Assert.True(r.IsValid, $"{p.Name}: {r}");
+        }
+        Assert.Equal(1, MeshValidator.Validate(bas.Mesh).Genus); // the spindle hole
+        Assert.Equal(0, MeshValidator.Validate(cap.Mesh).Genus); // a ring opened by the lead slot
+    }
 }

@@ -67,8 +67,14 @@ public class RotorTests
         var rotor = Dual().Get(PartForge.Design.Parts.PartId.RotorFront);
         foreach (var p in rotor.FeaturesOf(FeatureKind.MagnetPocket))
         {
-            var pts = p.Contour.Segments.Select(s => s.Start).ToArray();
-            Assert.Equal(4, pts.Length);
+            // Four sides and, at each corner, the relief circle of a printed rotor (radius rho x 2 cos 45 deg, rho half the
+            // 0.4 mm default nozzle: CornerCircleRelief's rule at a right angle).
+            var lines = p.Contour.Segments.OfType<LineSegment>().ToArray();
+            var notches = p.Contour.Segments.OfType<ArcSegment>().ToArray();
+            Assert.Equal(4, lines.Length);
+            Assert.Equal(4, notches.Length);
+            Assert.All(notches, a => Assert.Equal(0.2 * Math.Sqrt(2), a.Radius, 9));
+            var pts = lines.SelectMany(l => new[] { l.From, l.To }).ToArray();
             var centre = Geo.VertexCentroid(p.Contour);
             Assert.Equal(p.Index * 22.5, Geo.AngleOf(centre), 9);
             Assert.Equal(60.0, centre.Length, 9);
@@ -85,7 +91,11 @@ public class RotorTests
     {
         var rotor = DualStator().Get(PartForge.Design.Parts.PartId.Rotor);
         var p0 = rotor.Feature("pocket-0");
-        var arcs = p0.Contour.Segments.OfType<ArcSegment>().ToArray();
+        // The drawn pocket: two arcs and two radial sides, each corner with its relief circle (4 small arcs).
+        Assert.Equal(4, p0.Contour.Segments.OfType<ArcSegment>().Count(a => a.Radius < 1));
+        Assert.Equal(2, p0.Contour.Segments.OfType<ArcSegment>().Count(a => a.Radius > 1));
+        // The outline before relief, as the magnet shape defines it.
+        var arcs = PartForge.Parts.Shapes.DesignGeometry.PocketOutline(PartForge.Design.Machines.MachineModel.From(TestDesigns.DualStator())).Segments.OfType<ArcSegment>().ToArray();
         Assert.Equal(2, arcs.Length);
         Assert.Equal(30 - 0.1, arcs.Min(a => a.Radius), 12);
         Assert.Equal(45 + 0.1, arcs.Max(a => a.Radius), 12);
