@@ -39,10 +39,12 @@ public static partial class CheckRunner
     public static ElectricalFacts? FactsFrom(MachineModel design, ElectricalResult e)
     {
         if (e.Coil is not { Outline: { } outline } coil) return null;
-        // Which operating point: a machine with a timing sensor is driven as a motor (the sensor switches
-        // the coils), one without is a generator into operation.load_resistance. Both at rated rpm.
-        bool motor = design.Sensor.Kind != SensorKind.None && e.Motor is not null;
-        double j = motor ? e.Motor!.CurrentDensityAtRatedAPerMm2 : e.Generator?.CurrentDensityAPerMm2 ?? 0;
+        // Which operating point: machine.role, never the sensor. A motor-generator is judged at the harder of its two
+        // points (the higher current density). Both at rated rpm.
+        double jMotor = design.RunsAsMotor && e.Motor is { } mp ? mp.CurrentDensityAtRatedAPerMm2 : double.NaN;
+        double jGen = design.RunsAsGenerator && e.Generator is { } gp ? gp.CurrentDensityAPerMm2 : double.NaN;
+        bool motor = double.IsFinite(jMotor) && !(double.IsFinite(jGen) && jGen > jMotor);
+        double j = motor ? jMotor : double.IsFinite(jGen) ? jGen : 0;
         string point = motor
             ? $"motor operating point (rated {Judge.F(design.RatedRpm)} rpm, operation.supply_voltage {Judge.F(design.Operation.SupplyVoltageV)} V)"
             : $"generator operating point (rated {Judge.F(design.RatedRpm)} rpm into operation.load_resistance {Judge.F(design.Operation.LoadResistanceOhm)} ohm)";

@@ -51,7 +51,12 @@ public static class ElectricalEngine
         int poles = d.Poles, coils = d.CoilsPerStator, phases = d.Phases;
         var conn = d.Connection;
 
-        var layout = WindingLayout.For(coils, poles, phases);
+        // Winding and sensors are planned in electrical angles: with same-pole magnets one electrical period is one
+        // magnet pitch, as in an alternating machine of twice as many poles (MachineModel.ElectricalPoles).
+        bool same = d.Magnets.Arrangement == MagnetArrangement.Same;
+        var layout = WindingLayout.For(coils, d.ElectricalPoles, phases);
+        if (!layout.IsValid && same)
+            layout = layout with { Reason = SameReason(coils, poles, phases) };
         if (!layout.IsValid)
             diags.Add(new Diagnostic("winding-invalid", DiagnosticSeverity.Error, "machine.coils", layout.Reason!));
 
@@ -64,12 +69,12 @@ public static class ElectricalEngine
         var wire = WireSpec.From(d.Coils.Wire, d.Coils.EnamelGrade);
         var spec = CoilSpec.From(d, wire, diags);
 
-        bool fieldOk = gap > 0 && layout.IsValid && poles >= 2 && poles % 2 == 0;
+        bool fieldOk = gap > 0 && layout.IsValid && poles >= 2 && (same || poles % 2 == 0);
         RotorField? field = fieldOk ? RotorField.From(d, q.FarFactor) : null;
 
         if (spec is null) return Empty(d, diags, layout, gap, field);
 
-        int p = Math.Max(1, poles / 2);
+        int p = Math.Max(1, d.FieldPeriods);
         int statorFactor = d.Layout.Stators.Count;
         bool parallel = phases == 1 && conn == Connection.Parallel;
         int inSeries = (phases == 3 ? coils / 3 : parallel ? 1 : coils) * statorFactor;
@@ -167,12 +172,12 @@ public static class ElectricalEngine
 
         // Sensor timing: the positive-going zero crossing of each phase's fundamental EMF: p theta + arg K = -90.
         var zeroCross = k.Select(kk => Norm(-90 - kk[0].Phase * 180 / Math.PI)).ToArray();
-        var sensors = SensorPlanner.Plan(d.Sensor, poles, phases, coil.Outline, coils, zeroCross, diags);
+        var sensors = SensorPlanner.Plan(d.Sensor, d.ElectricalPoles, phases, coil.Outline, coils, zeroCross, diags, !same);
 
         // Operating points (hot winding).
         var op = d.Operation;
-        GeneratorPoint gen;
-        MotorPoint mot;
+        GeneratorPoint? gen;
+        MotorPoint? mot;
         int fine = 720;
         if (phases == 3)
         {
@@ -200,6 +205,9 @@ public static class ElectricalEngine
             mot = OperatingPoints.Motor("pulse", op.SupplyVoltageV, op.SwitchDropV, ohmPhHot, kc, cond, d.RatedRpm, ratio, wire.CopperAreaMm2);
         }
 
+        // Only the role's operating points (machine.role; never inferred from the sensor).
+        if (!d.RunsAsGenerator) gen = null;
+        if (!d.RunsAsMotor) mot = null;
         double peakLink = series.PeakWb();
         return new ElectricalResult
         {
@@ -322,7 +330,7 @@ public static class ElectricalEngine
 
     private static ElectricalResult Empty(MachineModel d, List<Diagnostic> diags, WindingLayout layout, double gap, RotorField? field = null)
     {
-        int p = Math.Max(0, d.Poles / 2);
+        int p = Math.Max(0, d.FieldPeriods);
         return new ElectricalResult
         {
             PolePairs = p, RatedRpm = d.RatedRpm, ElectricalHz = p * d.RatedRpm / 60,
@@ -332,6 +340,11 @@ public static class ElectricalEngine
             LineEmfRmsAtMaxRpmV = 0, LineEmfPeakAtMaxRpmV = 0, Harmonics = Array.Empty<Harmonic>(), Winding = layout, Diagnostics = diags,
         };
     }
+
+    /// <summary>Why a same-pole combination gives no winding, in the design's own counts (the planner sees twice the poles).</summary>
+    private static string SameReason(int coils, int magnets, int phases) => phases == 1
+        ? string.Format(Inv, "{0} coils with {1} same-pole magnets are not all in phase for a 1-phase winding (their EMFs would partly cancel); use coils = magnets ({1}), a divisor of 2 x magnets, or 3 phases.", coils, magnets)
+        : string.Format(Inv, "machine.coils {0} with {1} same-pole magnets give no balanced 3-phase winding (coils / (3 x gcd(coils, magnets)) must be a whole number); choose coils and magnets with that ratio, or machine.phases: 1.", coils, magnets);
 
     /// <summary>Phase harmonics per unit shaft speed (V per rad/s): K_n = i n p C_n S_n x mult.</summary>
     private static Complex[] PhaseHarmonics(FluxLinkageSeries s, WindingLayout layout, char phase, double mult)

@@ -19,8 +19,9 @@ internal static class DesignRules
     {
         var m = d.Machine;
         // Machine
-        if (m.Poles % 2 != 0)
-            ctx.Add(ctx.AtKey("machine.poles", "is not allowed", m.Poles.ToString(), "an even number (magnets alternate north and south)"));
+        if (m.Poles % 2 != 0 && d.Magnets.Arrangement != "same")
+            ctx.Add(ctx.AtKey("machine.poles", "is not allowed", m.Poles.ToString(), "an even number (magnets alternate north and south)",
+                "use an even number, or magnets.arrangement: same (every magnet shows one pole to the coils, any count)"));
         if (m.Phases == 3 && m.Coils % 3 != 0)
             ctx.Add(ctx.AtKey("machine.coils", "is not allowed", m.Coils.ToString(), "a multiple of 3 for 3 phases"));
         string[] conns = m.Phases == 3 ? ["star", "delta"] : ["series", "parallel"];

@@ -31,6 +31,15 @@ public sealed class MachineModel
     public required int Phases { get; init; }
 
     public required Connection Connection { get; init; }
+
+    /// <summary>What the machine is for (<c>machine.role</c>, default generator; never inferred from the sensor).</summary>
+    public required MachineRole Role { get; init; }
+
+    /// <summary>True when the motor operating point and motor checks apply (motor or motor-generator).</summary>
+    public bool RunsAsMotor => Role != MachineRole.Generator;
+
+    /// <summary>True when the generator operating point and generator checks apply (generator or motor-generator).</summary>
+    public bool RunsAsGenerator => Role != MachineRole.Motor;
     public required double RatedRpm { get; init; }
     public required double MaxRpm { get; init; }
 
@@ -60,8 +69,16 @@ public sealed class MachineModel
     /// <summary>The grid and chordal tolerance every part is made on.</summary>
     public Precision Precision => Precision.FromChordalTolerance(ChordalToleranceMm);
 
-    /// <summary>Pole pairs p.</summary>
+    /// <summary>Pole pairs p (alternating magnets; with same-pole magnets the field periods are <see cref="FieldPeriods"/>).</summary>
     public int PolePairs => Poles / 2;
+
+    /// <summary>Periods of the rotor field in one revolution: poles / 2 with alternating magnets, poles with same-pole
+    /// magnets. One electrical period is 360 / FieldPeriods mechanical degrees.</summary>
+    public int FieldPeriods => Magnets.Arrangement == MagnetArrangement.Same ? Poles : Poles / 2;
+
+    /// <summary>The pole count of the alternating machine with the same electrical period (2 x FieldPeriods): what
+    /// the winding and sensor planning read.</summary>
+    public int ElectricalPoles => 2 * FieldPeriods;
 
     /// <summary>Coils in the whole machine (every stator).</summary>
     public int CoilsInMachine => CoilsPerStator * Layout.Stators.Count;
@@ -83,7 +100,20 @@ public sealed class MachineModel
             throw new ArgumentException($"magnets.{problems[0].Key} {problems[0].Message}", nameof(d));
         var shape = kind.Make(d.Magnets);
         double br = d.Magnets.Br ?? MagnetGrades.MidRangeBrTesla(d.Magnets.Grade) ?? throw Bad("magnets.grade", d.Magnets.Grade);
-        var magnets = new MagnetSet(shape, d.Magnets.Grade, br, d.Magnets.Br is not null);
+        var arrangement = d.Magnets.Arrangement switch
+        {
+            "alternating" => MagnetArrangement.Alternating,
+            "same" => MagnetArrangement.Same,
+            var o => throw Bad("magnets.arrangement", o),
+        };
+        var magnets = new MagnetSet(shape, d.Magnets.Grade, br, d.Magnets.Br is not null) { Arrangement = arrangement };
+        var machineRole = d.Machine.Role switch
+        {
+            "generator" => MachineRole.Generator,
+            "motor" => MachineRole.Motor,
+            "motor-generator" => MachineRole.MotorGenerator,
+            var o => throw Bad("machine.role", o),
+        };
 
         int phases = d.Machine.Phases;
         var connection = d.Machine.Connection switch
@@ -149,6 +179,7 @@ public sealed class MachineModel
             CoilsPerStator = d.Machine.Coils,
             Phases = phases,
             Connection = connection,
+            Role = machineRole,
             RatedRpm = d.Machine.RatedRpm,
             MaxRpm = d.Machine.MaxRpm,
             Magnets = magnets,

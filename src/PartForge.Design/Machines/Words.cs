@@ -18,5 +18,9 @@ public static class Words
 
     public static string Of(SensorKind k) => k switch { SensorKind.Hall => "hall", SensorKind.Reed => "reed", _ => "none" };
 
+    public static string Of(MachineRole r) => r switch { MachineRole.Motor => "motor", MachineRole.MotorGenerator => "motor-generator", _ => "generator" };
+
+    public static string Of(MagnetArrangement a) => a switch { MagnetArrangement.Same => "same", _ => "alternating" };
+
     public static string Of(CoilShape s) => s switch { CoilShape.Keystone => "keystone", _ => "round" };
 }

@@ -21,7 +21,8 @@ public static class BomBuilder
 
         string grade = m.BrGiven ? $"NdFeB, Br {F(m.BrTesla)} T" : $"NdFeB {m.Grade}";
         lines.Add(new BomLine("magnets", $"{m.Shape.Kind.Word} magnet", $"{m.Shape.Describe()}, {grade}, magnetised through the thickness",
-            d.Poles * rotors, "pcs", $"{d.Poles} per rotor x {rotors} rotor{(rotors > 1 ? "s" : "")}"));
+            d.Poles * rotors, "pcs", $"{d.Poles} per rotor x {rotors} rotor{(rotors > 1 ? "s" : "")}"
+                + (m.Arrangement == MagnetArrangement.Same ? "; all with the same pole toward the coils (magnets.arrangement: same), not alternating" : "")));
 
         string wire = d.Coils.Wire.Awg is { } awg ? $"AWG {awg}" : $"bare D{F(d.Coils.Wire.BareDiameterMm ?? 0)} mm";
         double buy = WireSpare.ToBuyM(electricalWireTotalM);

@@ -9,4 +9,11 @@ public sealed record MagnetSet(MagnetShape Shape, string Grade, double BrTesla, 
 {
     /// <summary>"br" when <c>magnets.br</c> was given, else the grade name.</summary>
     public string BrSource => BrGiven ? "br" : Grade;
+
+    /// <summary>How the poles face the coils (<c>magnets.arrangement</c>).</summary>
+    public MagnetArrangement Arrangement { get; init; } = MagnetArrangement.Alternating;
+
+    /// <summary>The sign of magnet k's magnetisation along +z on the front (or only) rotor: alternating +1, -1, ...,
+    /// or +1 for every magnet when they all show the same pole.</summary>
+    public int SignOf(int k) => Arrangement == MagnetArrangement.Same || k % 2 == 0 ? 1 : -1;
 }
