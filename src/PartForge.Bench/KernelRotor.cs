@@ -8,7 +8,7 @@ namespace PartForge.Bench;
 
 /// <summary>
 /// The reference rotor of the kernel benchmarks: a disc minus bore minus bolt holes, with blind round
-/// pockets on a pitch circle (the R1/R2 shapes of the shared measurement notes), from profiles to solid.
+/// pockets on a pitch circle (the reference rotors R1/R2, docs/physics.md §9), from profiles to solid.
 /// </summary>
 internal sealed record KernelRotor(double Od, double T, double Bore, int Pockets, double PocketD, double PocketDepth,
     double PitchR, int Bolts, double BoltD, double BoltCircleD, double E)

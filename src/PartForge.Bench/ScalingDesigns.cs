@@ -45,6 +45,8 @@ public static class ScalingDesigns
         sb.Append($"  mount: {{ circle_diameter: {F(sOut - 10)}, count: 8, hole: 5.5 }}\n  material: PLA\n");
         sb.Append("sensor:\n  kind: none\ngap:\n  air_gap: 1.5\n  min_running_gap: 0.3\n");
         sb.Append($"mesh:\n  chordal_tolerance: {chordalTolerance.ToString("R", Inv)}\n");
+        // An invented large-format printer, so the 400 mm class parts print whole (the kernel is what is measured).
+        sb.Append("printer: { bed_x: 2000, bed_y: 2000, bed_z: 500 }\n");
         return sb.ToString();
     }
 

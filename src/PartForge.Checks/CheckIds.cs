@@ -44,6 +44,22 @@ public static class CheckIds
     public const string CurrentDensity = "current-density";
     /// <summary>Winding temperature against the softening point of the former and stator materials.</summary>
     public const string CoilTemperature = "coil-temperature";
+    /// <summary>A printed part fits the printer: its footprint in printing orientation on the bed (in a quarter turn), its height under bed_z.</summary>
+    public const string PrintBedFit = "print-bed-fit";
+    /// <summary>A cut part fits a sheet the user has (with the edge spacing), and so the cutter's bed.</summary>
+    public const string CutSheetFit = "cut-sheet-fit";
+    /// <summary>The coil seats (former footprint plus the seat clearance) lie radially inside the stator ring.</summary>
+    public const string CoilSeatInRing = "coil-seat-in-ring";
+    /// <summary>The windings face the magnet track: radial overlap of the winding with the magnets.</summary>
+    public const string CoilFacesMagnets = "coil-faces-magnets";
     /// <summary>A diagnostic of the electrical engine (impossible combination, extra-low-voltage warning).</summary>
     public const string Electrical = "electrical";
+    /// <summary>Flux density in the steel behind the magnets (back iron or a steel rotor) against steel's saturation.</summary>
+    public const string BackIronSaturation = "back-iron-saturation";
+    /// <summary>Tensile stress in each stud or bolt of a joint (ISO 898-1 tensile stress area, class 8.8) under the clamp the torque and pull need.</summary>
+    public const string FastenerTension = "fastener-tension";
+    /// <summary>Bearing stress a fastener puts on a clamped part: under its washer, and on the hole wall if the joint slips.</summary>
+    public const string FastenerBearing = "fastener-bearing";
+    /// <summary>Jacking screws of the last rotor against the full pull: screw stress and nut bearing on the printed trap, as a utilisation.</summary>
+    public const string JackingScrew = "jacking-screw";
 }

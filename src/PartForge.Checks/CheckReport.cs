@@ -3,6 +3,15 @@ namespace PartForge.Checks;
 /// <summary>All check results of one design, in a fixed order (the order the runner produced them).</summary>
 public sealed record CheckReport(IReadOnlyList<CheckResult> Checks)
 {
+    /// <summary>The fasteners that hold the stack together, read from the placed parts (empty when no parts were made).</summary>
+    public IReadOnlyList<Hardware.FastenerJoint> Joints { get; init; } = [];
+
+    /// <summary>The ordered assembly steps with the pull at each (empty when no parts were made).</summary>
+    public IReadOnlyList<Hardware.AssemblyStep> Assembly { get; init; } = [];
+
+    /// <summary>The last rotor's jacking screws, or null when it has none.</summary>
+    public Hardware.JackingSet? Jacks { get; init; }
+
     public int FailCount => Checks.Count(c => c.Status == CheckStatus.Fail);
     public int WarnCount => Checks.Count(c => c.Status == CheckStatus.Warn);
 

@@ -28,7 +28,7 @@ public static partial class CheckRunner
             return new CheckReport(list.Concat(parts is null ? [] : PartErrors(parts)).ToList());
         }
         var report = Run(design, facts, ViewsFrom(parts!), options);
-        return new CheckReport(report.Checks.Concat(PartErrors(parts!)).ToList());
+        return report with { Checks = report.Checks.Concat(PartErrors(parts!)).ToList() };
     }
 
     /// <summary>The electrical engine's diagnostics as checks: errors fail, warnings warn.</summary>
@@ -59,10 +59,15 @@ public static partial class CheckRunner
             CurrentDensityAPerMm2 = double.IsFinite(j) ? j : 0,
             OperatingPoint = point,
             PullOnRotorN = pulls,
+            BackIron = e.BackIron,
+            ShaftTorqueNm = Finite(motor ? e.Motor!.StallTorqueNm : e.Generator?.ShaftTorqueNm ?? 0),
+            MagnetToBackIronN = Finite(e.Pull?.MagnetToBackIronN ?? 0),
             SensorAnglesDeg = e.Sensors?.Sensors.Select(s => s.AngleDeg).ToArray() ?? Array.Empty<double>(),
             Diagnostics = e.Diagnostics.Select(d => (d.Id, d.Severity == Electrical.DiagnosticSeverity.Error, d.Key, d.Message)).ToArray(),
         };
     }
+
+    private static double Finite(double v) => double.IsFinite(v) ? Math.Abs(v) : 0;
 
     /// <summary>The checker's view of the parts.</summary>
     public static IReadOnlyList<PartView> ViewsFrom(PartSet parts) =>

@@ -18,10 +18,16 @@ public static partial class CheckRunner
         Collect(results, "stack-up", () => GapRules.Run(c));
         Collect(results, "rotation sweep", () => SweepRules.Run(c));
         Collect(results, "printability", () => PrintRules.Run(c));
+        Collect(results, "machine fit", () => MachineFitRules.Run(c));
         Collect(results, "winding", () => WindingRules.Run(c));
+        Collect(results, "coil placement", () => CoilPlacementRules.Run(c));
         Collect(results, "speed", () => SpeedRules.Run(c));
         Collect(results, "electrical", () => ElectricalRules.Run(c));
-        return new CheckReport(results);
+        Collect(results, "steel", () => IronRules.Run(c));
+        Collect(results, "hardware", () => HardwareRules.Run(c));
+        var joints = Hardware.FastenerPlanner.Plan(design, electrical, parts);
+        var jacks = Hardware.JackingSet.From(electrical, parts);
+        return new CheckReport(results) { Joints = joints, Jacks = jacks, Assembly = Hardware.AssemblyPlanner.Plan(design, electrical, parts, joints, jacks) };
     }
 
     private static void Collect(List<CheckResult> into, string group, Func<IEnumerable<CheckResult>> rule)

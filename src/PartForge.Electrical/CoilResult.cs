@@ -3,7 +3,7 @@ using PartForge.Electrical.Coils;
 
 namespace PartForge.Electrical;
 
-/// <summary>One coil: the CONTRACT `electrical.coil` keys (lengths in mm) plus additions.</summary>
+/// <summary>One coil: the pinned results `electrical.coil` keys (lengths in mm) plus additions.</summary>
 public sealed record CoilResult
 {
     public required CoilShape Shape { get; init; }

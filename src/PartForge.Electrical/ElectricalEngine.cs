@@ -70,7 +70,8 @@ public static class ElectricalEngine
         var spec = CoilSpec.From(d, wire, diags);
 
         bool fieldOk = gap > 0 && layout.IsValid && poles >= 2 && (same || poles % 2 == 0);
-        RotorField? field = fieldOk ? RotorField.From(d, q.FarFactor) : null;
+        var ironFlux = fieldOk ? BackIronFlux.Compute(d, q.FarFactor) : Array.Empty<BackIronFluxResult>();
+        RotorField? field = fieldOk ? RotorField.From(d, q.FarFactor, ironFlux) : null;
 
         if (spec is null) return Empty(d, diags, layout, gap, field);
 
@@ -239,17 +240,18 @@ public static class ElectricalEngine
             Generator = gen,
             Motor = mot,
             Waveforms = waves,
-            Pull = PullOf(d, diags),
+            Pull = PullOf(d, ironFlux),
+            BackIron = ironFlux,
             Diagnostics = diags,
         };
     }
 
     /// <summary>The axial pull between the rotors of a dual-rotor machine (the only layout where a rotor feels a net
     /// axial pull: a coreless stator holds no iron, and a magnet's pull on its own back iron is internal to its rotor).</summary>
-    private static MagneticPullResult? PullOf(MachineModel d, List<Diagnostic> diags)
+    private static MagneticPullResult? PullOf(MachineModel d, IReadOnlyList<BackIronFluxResult> ironFlux)
     {
         if (!d.Layout.StatorBetweenRotors) return null;
-        return MagneticPull.Compute(d);
+        return MagneticPull.Compute(d, ironFlux);
     }
 
     private static int SolveTurns(CoilSpec spec, RotorField field, WindingLayout layout, FluxQuadrature q, double mult,

@@ -7,7 +7,7 @@ using PartForge.Electrical.Winding;
 namespace PartForge.Electrical;
 
 /// <summary>
-/// Everything the electrical engine found for a design: the CONTRACT `electrical` keys (pole_pairs,
+/// Everything the electrical engine found for a design: the pinned results `electrical` keys (pole_pairs,
 /// electrical_hz, magnetic_gap, winding_factor, magnet.br, coil{...}, coil_flux_linkage_peak_wb,
 /// phase{...}, line_emf_rms_v, ke_v_per_krpm) and more. Values at `machine.rated_rpm` unless named
 /// otherwise. When <see cref="Diagnostics"/> holds an error, the values it prevents are 0 (never NaN) and
@@ -73,6 +73,9 @@ public sealed record ElectricalResult
 
     /// <summary>Axial magnetic forces on the rotors (computed where a rotor feels a net pull: dual-rotor); null otherwise.</summary>
     public MagneticPullResult? Pull { get; init; }
+
+    /// <summary>Flux density in each steel face behind the magnets (back iron or a steel rotor) and its image strength; empty without steel.</summary>
+    public IReadOnlyList<Field.BackIronFluxResult> BackIron { get; init; } = Array.Empty<Field.BackIronFluxResult>();
 
     public required IReadOnlyList<Diagnostic> Diagnostics { get; init; }
 

@@ -3,7 +3,7 @@ using PartForge.Design.Machines;
 namespace PartForge.Electrical;
 
 /// <summary>
-/// One phase (the CONTRACT `electrical.phase` keys plus additions), at `machine.rated_rpm`. In a dual-stator
+/// One phase (the pinned results `electrical.phase` keys plus additions), at `machine.rated_rpm`. In a dual-stator
 /// machine a phase is the phase's coils of both stators in series. 1-phase parallel: every coil in parallel
 /// (one coil in series, `coils` parallel paths).
 /// </summary>

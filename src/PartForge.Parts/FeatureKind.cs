@@ -9,6 +9,10 @@ public enum FeatureKind
     Bore,
     /// <summary>A hole of the rotor/back-iron/spacer bolt circle.</summary>
     BoltHole,
+    /// <summary>A clearance hole for a jacking screw (the last rotor of a dual-rotor machine and the back iron).</summary>
+    JackHole,
+    /// <summary>A hex pocket that holds a jacking screw's nut, on the rotor's stator-side face.</summary>
+    NutTrap,
     /// <summary>A stator mount hole.</summary>
     MountHole,
     /// <summary>A magnet pocket (blind or through).</summary>

@@ -1,3 +1,4 @@
+using PartForge.Design.Machines;
 using PartForge.Design.Parts;
 using PartForge.Design.Stack;
 
@@ -21,6 +22,21 @@ public sealed record PartSet
     public bool HasErrors => Diagnostics.Any(x => x.Severity == DiagnosticSeverity.Error);
 
     /// <summary>The part, or null.</summary>
+    private readonly System.Collections.Concurrent.ConcurrentDictionary<string, (PartModel[] Parts, Fabrication.PrintPlates Plates)> _plates = new();
+
+    /// <summary>
+    /// The print plates of some of these parts on a printer (<see cref="Fabrication.PrintPlates.Of"/>), laid out once
+    /// per set of parts and printer and kept: a build's plan, its 3MF files and its report share one layout.
+    /// </summary>
+    public Fabrication.PrintPlates PlatesOf(IEnumerable<PartModel> printed, PrinterSpec printer, PartForge.Geometry.Precision precision)
+    {
+        var list = printed.ToArray();
+        string key = string.Join(",", list.Select(p => p.Name)) + "|" + printer + "|" + precision;
+        var hit = _plates.GetOrAdd(key, _ => (list, Fabrication.PrintPlates.Of(list, printer, precision)));
+        // The same part objects (a copy of the set made with `with` shares this table, not necessarily its parts).
+        return hit.Parts.SequenceEqual(list, ReferenceEqualityComparer.Instance) ? hit.Plates : Fabrication.PrintPlates.Of(list, printer, precision);
+    }
+
     public PartModel? Find(PartId id) => Parts.FirstOrDefault(p => p.Id == id);
 
     /// <summary>The part (throws if absent).</summary>

@@ -31,6 +31,7 @@ public sealed class TestMachine
     public double PullN = 20, CurrentDensity = 3;
     public string SensorKind = "hall"; public int SensorCount = 3; public double SensorLength = 4, SensorWidth = 3;
     public double MountCircleD = 122, MountHole = 4.5; public int MountCount = 4;
+    public double BedX = 220, BedY = 220, BedZ = 250, CutSpacing = 2; public string? Sheets;
 
     public double BuildMm => Turns * Math.PI * WireBare * WireBare / 4 / (Fill * CoilHeight);
 
@@ -59,6 +60,8 @@ public sealed class TestMachine
         Gap = new Gap { AirGap = AirGap, MinRunningGap = MinGap },
         Tolerances = new Tolerances { PrintXy = PrintXy, PrintZ = PrintZ, Runout = Runout, AxialPlay = AxialPlay },
         Process = new Process { Nozzle = Nozzle, Layer = Layer, MinWallLines = WallLines },
+        Printer = new Printer { BedX = BedX, BedY = BedY, BedZ = BedZ },
+        Cutter = new Cutter { Spacing = CutSpacing, Sheets = Sheets },
         Parts = new PartOverrides { Former = new PartOverride { Material = FormerMaterial } },
     };
 

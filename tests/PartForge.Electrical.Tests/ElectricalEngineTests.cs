@@ -28,7 +28,7 @@ public class ElectricalEngineTests
             if (p.GetIndexParameters().Length == 0) AssertAllFinite(p.GetValue(o), path + "." + p.Name, depth + 1);
     }
 
-    // CONTRACT consistency: resistance = wire length x ohm per metre; phase = coils in series x coil; hot by IEC 60028 alpha.
+    // Results consistency: resistance = wire length x ohm per metre; phase = coils in series x coil; hot by IEC 60028 alpha.
     [Theory]
     [InlineData("crank")]
     [InlineData("large")]

@@ -7,7 +7,7 @@ using PartForge.Geometry.Solids;
 namespace PartForge.Geometry.Tests;
 
 /// <summary>
-/// The reference rotors R1 and R2 of the shared measurement notes, built in the test itself as layered
+/// The reference rotors R1 and R2 (docs/physics.md §9), built in the test itself as layered
 /// solids: a disc minus bore minus bolt holes, with blind round pockets from the top.
 /// </summary>
 public static class ReferenceRotors

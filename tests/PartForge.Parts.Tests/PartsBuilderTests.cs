@@ -20,7 +20,7 @@ public class PartsBuilderTests
             Assert.Equal(proc, p.Process);
             Assert.Equal(mat, p.Material.Name);
             Assert.Equal(proc == PartProcess.Cut, p.CutProfile is not null);
-            // Density: PLA 1.24 g/cm^3 (../shared/REFERENCE.md section 4), steel 7.85 (EN 1993-1-1 3.2.6), acrylic 1.18 (datasheets, from memory).
+            // Density: PLA 1.24 g/cm^3 (docs/physics.md §8), steel 7.85 (EN 1993-1-1 3.2.6), acrylic 1.18 (datasheets, from memory).
             double rho = mat switch { "PLA" => 1.24, "steel" => 7.85, _ => 1.18 };
             Assert.Equal(rho * p.VolumeMm3 / 1000.0, p.MassG, 9);
             Assert.Equal(p.Instances.Count, p.Quantity);

@@ -30,9 +30,18 @@ public sealed record ElectricalFacts
     /// <summary>Axial magnetic pull on each rotor toward the stator side, N, by rotor.</summary>
     public IReadOnlyDictionary<PartId, double> PullOnRotorN { get; init; } = new Dictionary<PartId, double>();
 
+    /// <summary>Shaft torque at the operating point the fasteners must carry, N m (motor: the stall torque; 0 when not computed).</summary>
+    public double ShaftTorqueNm { get; init; }
+
+    /// <summary>Attraction between one magnet and its rotor's back iron, N (0 without back iron).</summary>
+    public double MagnetToBackIronN { get; init; }
+
     /// <summary>Mechanical sensor angles (machine frame), degrees.</summary>
     public IReadOnlyList<double> SensorAnglesDeg { get; init; } = Array.Empty<double>();
 
     /// <summary>Errors and warnings of the electrical engine: (id, error?, key, message).</summary>
     public IReadOnlyList<(string Id, bool IsError, string Key, string Message)> Diagnostics { get; init; } = Array.Empty<(string, bool, string, string)>();
+
+    /// <summary>Flux in each steel face behind the magnets (the electrical engine's <c>BackIron</c>).</summary>
+    public IReadOnlyList<PartForge.Electrical.Field.BackIronFluxResult> BackIron { get; init; } = Array.Empty<PartForge.Electrical.Field.BackIronFluxResult>();
 }

@@ -30,7 +30,14 @@ internal sealed class CheckContext
         Parts = parts;
         SweepStepDeg = sweepStepDeg;
         RotorMaterial = MaterialOf(d.Layout.Rotors[0]);
-        Plate = new RotorPlate(d.Rotor.OuterDiameterMm / 2, RotorPlate.HubRadius(d.Rotor), Magnet.PitchRadiusMm, d.Rotor.ThicknessMm, RotorMaterial);
+        Plate = new RotorPlate(d.Rotor.OuterDiameterMm / 2, RotorPlate.HubRadius(d.Rotor), Magnet.PitchRadiusMm, d.Rotor.ThicknessMm, RotorMaterial)
+        {
+            // The back-iron disc, bolted to the rotor on its bolt circle (not bonded: see RotorPlate).
+            Backing = d.Rotor.BackIronThicknessMm is { } bi && d.Layout.AllowsBackIron
+                ? new PlateBacking(Magnet.RadialRangeMm(0).Max, bi, // the steel covers at least the magnets (the pull acts inside it)
+                    parts.FirstOrDefault(p => p.Id == PartId.BackIron)?.Material ?? PartForge.Design.Materials.MaterialTable.Steel)
+                : null,
+        };
         BulgePerFaceMm = CoilBulge.PerFaceMm(e.Turns, e.WireBareMm, d.Coils.HeightMm, e.Outline.RadialBuildMm, d.Former.MarginMm);
         RotorIds = d.Stack.OfKind(SlabKind.Rotor).Select(s => s.Owner).Distinct().ToArray();
     }

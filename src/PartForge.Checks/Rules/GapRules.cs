@@ -8,7 +8,7 @@ namespace PartForge.Checks.Rules;
 /// <summary>running-gap, magnet-pull-deflection, magnet-pull-stress.</summary>
 internal static class GapRules
 {
-    /// <summary>Rim deflection allowed, as a fraction of gap.air_gap (our own rule: a disc that flexes by more than half its gap is too soft whatever the other tolerances; PLA also creeps under the steady pull, REFERENCE.md section 4).</summary>
+    /// <summary>Rim deflection allowed, as a fraction of gap.air_gap (our own rule: a disc that flexes by more than half its gap is too soft whatever the other tolerances; PLA also creeps under the steady pull, docs/physics.md §8).</summary>
     public const double DeflectionFractionOfGap = 0.5;
 
     public static IEnumerable<CheckResult> Run(CheckContext c)

@@ -143,7 +143,7 @@ internal static class PrintRules
         if (edges.Count == 0) yield break;
         if (MinPair(holes, edges, false) is not { } p) yield break;
         double dia = Box2.Of(p.A.Contour).Width;
-        // A screw hole is a loaded fit: printed, at least 3 lines (REFERENCE.md section 4, practice: "3+ around
+        // A screw hole is a loaded fit: printed, at least 3 lines (docs/physics.md §8, practice: "3+ around
         // press fits"); cut from sheet, at least half the hole diameter (edge distance from the centre of one
         // diameter; common practice from memory).
         double wall = pv.Process == PartProcess.Print

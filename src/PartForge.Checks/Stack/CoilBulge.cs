@@ -4,7 +4,7 @@ namespace PartForge.Checks.Stack;
 /// Estimate of how far a hand-wound coil bulges axially out of its former.
 ///
 /// The electrical engine sizes the winding at the design's stated fill factor: build = N A_cu / (fill h).
-/// A random-wound coil does not reach more than about 0.50 copper fill (REFERENCE.md section 3, practice:
+/// A random-wound coil does not reach more than about 0.50 copper fill (docs/physics.md §2, practice:
 /// hand or random-wound round enamelled wire 0.30-0.50). When the stated fill is higher, the real winding
 /// needs the larger cross-section N A_cu / 0.50. The former's window is coils.height by (build +
 /// former.margin): the flange overhang takes the first of the excess radially; what is left over (the
@@ -14,7 +14,7 @@ namespace PartForge.Checks.Stack;
 /// </summary>
 public static class CoilBulge
 {
-    /// <summary>Practical upper copper fill of a random-wound coil (REFERENCE.md section 3, practice).</summary>
+    /// <summary>Practical upper copper fill of a random-wound coil (docs/physics.md §2, practice).</summary>
     public const double PracticalFill = 0.50;
 
     /// <summary>Bulge on each face, mm (0 when the winding fits).</summary>

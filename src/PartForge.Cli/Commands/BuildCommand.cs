@@ -28,6 +28,7 @@ public static class BuildCommand
                 Formats = pr.GetValue(formats),
                 Parts = pr.GetValue(parts),
                 Force = pr.GetValue(force),
+                Guard = s.Guard,
             });
             foreach (var p in r.Problems) s.Problem(p);
             if (pr.GetValue(timings) && r.Timings.Count > 0)
@@ -35,6 +36,7 @@ public static class BuildCommand
                     + FormattableString.Invariant($"; process {(DateTime.Now - System.Diagnostics.Process.GetCurrentProcess().StartTime).TotalMilliseconds:0} ms so far"));
             if (r.Status == PipelineStatus.BadInput) return ExitCodes.BadInput;
             string dir = pr.GetValue(output) ?? "out";
+            foreach (var t in r.RemovedTemporaries) s.Detail($"removed a leftover temporary of an earlier build: {Path.Combine(dir, t)}");
             if (r.Written.Count == 0)
             {
                 s.Problem($"partforge: a check failed; nothing was written to {dir} (fix the design, or use --force to write it marked failed)");

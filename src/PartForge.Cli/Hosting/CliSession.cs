@@ -1,3 +1,4 @@
+using PartForge.Formats.Io;
 using Spectre.Console;
 
 namespace PartForge.Cli.Hosting;
@@ -8,8 +9,9 @@ namespace PartForge.Cli.Hosting;
 /// </summary>
 public sealed class CliSession
 {
-    public CliSession(TextWriter output, TextWriter error, bool verbose, bool quiet, bool outputIsTerminal, bool colour)
+    public CliSession(TextWriter output, TextWriter error, bool verbose, bool quiet, bool outputIsTerminal, bool colour, InterruptGuard? guard = null)
     {
+        Guard = guard;
         Out = output;
         Err = error;
         Verbose = verbose;
@@ -21,6 +23,9 @@ public sealed class CliSession
     public TextWriter Out { get; }
     public TextWriter Err { get; }
     public bool Verbose { get; }
+
+    /// <summary>The process's SIGINT/SIGTERM guard, or null inside another host.</summary>
+    public InterruptGuard? Guard { get; }
     public bool Quiet { get; }
 
     /// <summary>Stdout is an interactive terminal.</summary>

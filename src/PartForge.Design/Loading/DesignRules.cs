@@ -150,6 +150,30 @@ internal static class DesignRules
         var sn = d.Sensor;
         if (sn.Kind != "none" && sn.Count == 3 && m.Phases != 3)
             ctx.Add(ctx.AtKey("sensor.count", "is not allowed with 1 phase: 3 sensors time 3 phases", "3", "1 (or sensor.kind: none)", fallbacks: "sensor.kind"));
+
+        // Printer and cutter: one nozzle and one kerf; sheets that go on the bed; spacing that clears the kerf.
+        if (d.Printer.Nozzle is { } pn && ctx.Has("process.nozzle") && pn != d.Process.Nozzle)
+            ctx.Add(ctx.AtKey("printer.nozzle", $"differs from process.nozzle ({F(d.Process.Nozzle)})", F(pn), "the same nozzle in both, or only one of them", "remove one of the two keys"));
+        if (d.Cutter.Kerf is { } ck && ctx.Has("process.kerf") && ck != d.Process.Kerf)
+            ctx.Add(ctx.AtKey("cutter.kerf", $"differs from process.kerf ({F(d.Process.Kerf)})", F(ck), "the same kerf in both, or only one of them", "remove one of the two keys"));
+        var cu = d.Cutter;
+        double kerf = cu.Kerf ?? d.Process.Kerf;
+        if (cu.Spacing < kerf)
+            ctx.Add(ctx.AtKey("cutter.spacing", $"is less than the kerf ({F(kerf)})", F(cu.Spacing), $"at least {F(kerf)}", $"set cutter.spacing to {F(kerf)} or more"));
+        if (cu.Sheets != null && ctx.Has("cutter.sheets"))
+        {
+            foreach (var sh in Machines.CutterSpec.ParseSheets(cu.Sheets, cu.BedX, cu.BedY))
+            {
+                string size = $"{F(sh.WidthMm)}x{F(sh.HeightMm)}";
+                bool fits = (sh.WidthMm <= cu.BedX && sh.HeightMm <= cu.BedY) || (sh.HeightMm <= cu.BedX && sh.WidthMm <= cu.BedY);
+                if (!(sh.WidthMm > 0 && sh.HeightMm > 0))
+                    ctx.Add(ctx.AtKey("cutter.sheets", "has a sheet of zero size", size, "a width and a height above 0 mm"));
+                else if (!fits)
+                    ctx.Add(ctx.AtKey("cutter.sheets", $"has a sheet larger than the cutter's bed ({F(cu.BedX)}x{F(cu.BedY)})", size, "sheets no larger than cutter.bed_x x cutter.bed_y", "cut the sheet down or raise cutter.bed_x / cutter.bed_y", "cutter.bed_x"));
+                if (sh.Count == 0)
+                    ctx.Add(ctx.AtKey("cutter.sheets", "has a sheet size with a count of 0", size + ":0", "a count of at least 1, or no count (as many as needed)"));
+            }
+        }
     }
 
     private static string Article(string word) => word.Length > 0 && "aeiou".Contains(word[0]) ? "an" : "a";

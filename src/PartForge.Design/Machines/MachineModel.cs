@@ -54,6 +54,12 @@ public sealed class MachineModel
     public required ProcessSpec Process { get; init; }
     public required OperationSpec Operation { get; init; }
 
+    /// <summary>The printer the printed parts are laid out for (<c>printer.*</c>).</summary>
+    public required PrinterSpec Printer { get; init; }
+
+    /// <summary>The cutter and sheets the cut parts are nested on (<c>cutter.*</c>).</summary>
+    public required CutterSpec Cutter { get; init; }
+
     /// <summary>Largest distance between a true arc and its facets, mm (<c>mesh.chordal_tolerance</c>).</summary>
     public required double ChordalToleranceMm { get; init; }
 
@@ -150,7 +156,10 @@ public sealed class MachineModel
         var gap = new GapSpec(d.Gap.AirGap, d.Gap.MinRunningGap);
         var tol = new ToleranceSpec(d.Tolerances.PrintXy, d.Tolerances.PrintZ, d.Tolerances.Runout, d.Tolerances.AxialPlay);
         var p = d.Process;
-        var process = new ProcessSpec(p.Nozzle, p.Layer, p.MinWallLines, p.Kerf,
+        double nozzle = d.Printer.Nozzle ?? p.Nozzle, kerf = d.Cutter.Kerf ?? p.Kerf;
+        var printer = new PrinterSpec(d.Printer.BedX, d.Printer.BedY, d.Printer.BedZ, nozzle, d.Printer.Spacing);
+        var cutter = new CutterSpec(d.Cutter.BedX, d.Cutter.BedY, kerf, d.Cutter.Spacing, CutterSpec.ParseSheets(d.Cutter.Sheets, d.Cutter.BedX, d.Cutter.BedY));
+        var process = new ProcessSpec(nozzle, p.Layer, p.MinWallLines, kerf,
             p.DxfContours switch { "polyline" => CutContourStyle.Polyline, "entities" => CutContourStyle.Entities, var o => throw Bad("process.dxf_contours", o) });
         var op = d.Operation;
         var operation = new OperationSpec(op.LoadResistance, op.SupplyVoltage, op.SwitchDrop, op.LeadAllowance);
@@ -192,6 +201,8 @@ public sealed class MachineModel
             Tolerances = tol,
             Process = process,
             Operation = operation,
+            Printer = printer,
+            Cutter = cutter,
             ChordalToleranceMm = d.Mesh.ChordalTolerance,
             ExplodeMm = d.Assembly.Explode,
             Parts = new PartPlan(plan),

@@ -29,6 +29,12 @@ public sealed class Design
     [Doc("Operating points for the electrical results (generator load, motor supply).")]
     public Operation Operation { get; init; } = new();
 
+    [Doc("The 3D printer the printed parts are laid out for and checked against.")]
+    public Printer Printer { get; init; } = new();
+
+    [Doc("The laser cutter and sheets the cut parts are nested on and checked against.")]
+    public Cutter Cutter { get; init; } = new();
+
     [Doc("Placement of the parts in the assembly view.")]
     public AssemblyLayout Assembly { get; init; } = new();
 

@@ -2,7 +2,7 @@ namespace PartForge.Design.Model;
 
 public sealed class Rotor
 {
-    [Range(0, 2000, MinExclusive = true), Doc("Rotor disc outer diameter, mm.")]
+    [Range(0, 1000, MinExclusive = true), Doc("Rotor disc outer diameter, mm (at most 1000: parts are meshed on a 0.0001 mm grid written as float32, which keeps grid points apart only within 512 mm of the centre).")]
     public double OuterDiameter { get; init; } = 110;
 
     [Range(0.0001, 100), Doc("Rotor disc thickness, mm (at least the 0.0001 mm mesh grid).")]

@@ -2,10 +2,10 @@ namespace PartForge.Design.Model;
 
 public sealed class Stator
 {
-    [Range(0, 2000), Doc("Stator ring inner diameter, mm.")]
+    [Range(0, 1000), Doc("Stator ring inner diameter, mm.")]
     public double InnerDiameter { get; init; } = 30;
 
-    [Range(0, 3000, MinExclusive = true), Doc("Stator ring outer diameter, mm.")]
+    [Range(0, 1000, MinExclusive = true), Doc("Stator ring outer diameter, mm (at most 1000: parts are meshed on a 0.0001 mm grid written as float32, which keeps grid points apart only within 512 mm of the centre).")]
     public double OuterDiameter { get; init; } = 130;
 
     [Range(0.0001, 100), Doc("Stator ring thickness, mm (at least the 0.0001 mm mesh grid).")]

@@ -75,7 +75,9 @@ public sealed record CoilSpec
             MeanTurnMm = mtl,
             LeadAllowanceMm = LeadAllowanceMm,
             MaxTemperatureC = MaxTemperatureC,
-            InductanceUh = CoilInductance.WheelerMicrohenry(meanRadius, HeightMm, b, turns),
+            InductanceUh = Shape == CoilShape.Round
+                ? CoilInductance.WheelerMicrohenry(meanRadius, HeightMm, b, turns)
+                : CoilInductance.KeystoneMicrohenry(o, HeightMm, b, turns),
             NeighbourGapMm = gap,
             MaxBuildMm = MaxBuildMm(),
         };

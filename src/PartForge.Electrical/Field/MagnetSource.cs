@@ -230,7 +230,8 @@ public sealed class MagnetSource
         return d2 < LodNearMm * LodNearMm ? 0 : d2 < LodFarMm * LodFarMm ? 1 : 2;
     }
 
-    /// <summary>A copy mirrored in the plane z = planeMm with the same magnetisation (the image in ideal iron).</summary>
-    public MagnetSource ImageIn(double planeMm, double farFactor) =>
-        new(Shape, CentreDeg, 2 * planeMm - ZMaxMm, 2 * planeMm - ZMinMm, SignedBrTesla, farFactor, ArcToleranceMm);
+    /// <summary>A copy mirrored in the plane z = planeMm with the same magnetisation (the image in ideal iron), its
+    /// remanence scaled by <paramref name="strength"/> (1: ideal iron; below 1: saturated, see BackIronFlux).</summary>
+    public MagnetSource ImageIn(double planeMm, double farFactor, double strength = 1) =>
+        new(Shape, CentreDeg, 2 * planeMm - ZMaxMm, 2 * planeMm - ZMinMm, SignedBrTesla * strength, farFactor, ArcToleranceMm);
 }

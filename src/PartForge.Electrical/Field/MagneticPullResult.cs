@@ -23,6 +23,13 @@ public sealed record MagneticPullResult
     /// <summary>Axial distance between facing magnet faces of the two rotors, mm (0 when not dual-rotor).</summary>
     public required double FaceToFaceMm { get; init; }
 
+    /// <summary>
+    /// Pull between the rotors against the face-to-face gap of their magnets while they are brought together
+    /// (the first point is the running gap; then wider, until the pull is below 1 % of the running pull). Empty
+    /// when not dual-rotor.
+    /// </summary>
+    public IReadOnlyList<PullCurvePoint> AssemblyCurve { get; init; } = Array.Empty<PullCurvePoint>();
+
     /// <summary>Model and approximations, one sentence.</summary>
     public required string Method { get; init; }
 }

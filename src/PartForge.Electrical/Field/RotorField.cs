@@ -10,9 +10,10 @@ namespace PartForge.Electrical.Field;
 /// machine the back rotor's magnet k therefore shows the opposite pole to the front rotor's magnet k across
 /// the stator, so their fields in the copper add.
 ///
-/// Back iron (`rotor.back_iron`) is modelled by the image method — an APPROXIMATION: ideal unsaturated iron of
-/// infinite permeability and infinite extent in its plane. Each magnet is mirrored in the iron face with the
-/// same magnetisation. In a dual-rotor machine with iron on both rotors only first-order images are used
+/// Back iron (`rotor.back_iron`, or a steel rotor disc with blind pockets: see <see cref="IronPlane"/>) is modelled
+/// by the image method — an APPROXIMATION: iron of infinite permeability and infinite extent in its plane. Each
+/// magnet is mirrored in the iron face with the same magnetisation, weakened by the face's image strength when the
+/// steel saturates (<see cref="BackIronFlux"/>). In a dual-rotor machine with iron on both rotors only first-order images are used
 /// (each magnet mirrored once in each iron face), not the infinite series of images of images.
 /// Dual-stator machines carry no back iron (the rotor is between the stators); a back iron there is ignored.
 ///
@@ -71,17 +72,24 @@ public sealed class RotorField
         return s;
     }
 
-    /// <summary>Builds the sources of a machine (its magnets, rings and back iron from the machine model and its stack).</summary>
-    public static RotorField From(MachineModel machine, double farFactor = DefaultFarFactor)
+    /// <summary>The magnet slabs of the machine, in z order.</summary>
+    public static IReadOnlyList<AxialSlab> MagnetSlabs(MachineModel machine) => machine.Stack.OfKind(SlabKind.Magnet).ToList();
+
+    /// <summary>
+    /// Builds the sources of a machine (its magnets, rings and steel faces from the machine model and its stack).
+    /// <paramref name="ironFlux"/> gives each steel face's image strength (saturation); null: ideal iron.
+    /// </summary>
+    public static RotorField From(MachineModel machine, double farFactor = DefaultFarFactor, IReadOnlyList<BackIronFluxResult>? ironFlux = null)
     {
         int poles = machine.Poles;
         var g = machine.Magnets.Shape;
         double brTesla = machine.Magnets.BrTesla;
         var stack = machine.Stack;
-        var magnets = stack.OfKind(SlabKind.Magnet).ToList();
-        var irons = stack.OfKind(SlabKind.BackIron).ToList();
+        var magnets = MagnetSlabs(machine);
         var copper = stack.OfKind(SlabKind.Copper).OrderByDescending(s => s.ZMax).First();
-        bool iron = machine.Rotor.BackIronThicknessMm is not null && machine.Layout.AllowsBackIron && irons.Count > 0;
+        var planes = ironFlux?.Select(f => (f.Plane, f.ImageStrength)).ToList()
+                     ?? IronPlane.Of(machine).Select(p => (p, 1.0)).ToList();
+        bool iron = planes.Count > 0;
 
         List<MagnetSource> Ring(double z0, double z1) =>
             Enumerable.Range(0, poles).Select(k => new MagnetSource(g, k * 360.0 / poles, z0, z1, machine.Magnets.SignOf(k) * brTesla, farFactor)).ToList();
@@ -90,20 +98,17 @@ public sealed class RotorField
         var all = new List<MagnetSource>();
         foreach (var r in rings) all.AddRange(r.ring);
         var images = new List<(double zPlane, MagnetSource img)>();
-        if (iron)
+        foreach (var (plane, strength) in planes)
         {
-            foreach (var ib in irons)
-            {
-                // The iron face towards the magnets: the face nearer z = 0.
-                double plane = ib.ZMin > 0 ? ib.ZMin : ib.ZMax;
-                foreach (var r in rings)
-                    foreach (var m in r.ring) images.Add((plane, m.ImageIn(plane, farFactor)));
-            }
-            all.AddRange(images.Select(i => i.img));
+            if (strength <= 0) continue;
+            foreach (var r in rings)
+                foreach (var m in r.ring) images.Add((plane.FaceZMm, m.ImageIn(plane.FaceZMm, farFactor, strength)));
         }
+        all.AddRange(images.Select(i => i.img));
 
         IReadOnlyList<MagnetSource>? half = null;
-        if (machine.Layout.StatorBetweenRotors && Math.Abs(copper.ZMin + copper.ZMax) < 1e-9)
+        bool symmetric = planes.Count != 1 && (planes.Count == 0 || Math.Abs(planes[0].Plane.FaceZMm + planes[^1].Plane.FaceZMm) < 1e-9 && planes[0].Item2 == planes[^1].Item2);
+        if (machine.Layout.StatorBetweenRotors && Math.Abs(copper.ZMin + copper.ZMax) < 1e-9 && symmetric)
         {
             var h = new List<MagnetSource>();
             foreach (var r in rings) if (r.m.ZMin > 0) h.AddRange(r.ring);

@@ -42,7 +42,6 @@ public static class OperatingPoints
         int on = 0;
         for (int i = 0; i < n; i++) if (conducting[i]) { kMean += conductingEmfPerRadS[i]; on++; }
         kMean = on > 0 ? kMean / on : 0;
-        double w0 = kMean > 0 ? v / kMean : 0;
         (double iAvg, double tAvg, double iRms) At(double w)
         {
             double si = 0, st = 0, si2 = 0;
@@ -56,6 +55,24 @@ public static class OperatingPoints
             return (si / n, st / n, Math.Sqrt(si2 / n));
         }
         var stall = At(0);
+        // No-load speed: where this model's mean torque falls to zero. The current of each sample is clamped at 0
+        // (no reverse current through the switch), so the torque is not zero at v / mean(k) but later: found by
+        // bisection between 0 and v / (smallest positive k), beyond which no sample drives a positive current into a
+        // positive k.
+        double kMinPos = double.PositiveInfinity;
+        for (int i = 0; i < n; i++) if (conducting[i] && conductingEmfPerRadS[i] > 0) kMinPos = Math.Min(kMinPos, conductingEmfPerRadS[i]);
+        double w0 = 0;
+        if (stall.tAvg > 0 && double.IsFinite(kMinPos) && pathOhm > 0)
+        {
+            double lo = 0, hi = v / kMinPos;
+            for (int it = 0; it < 80 && hi - lo > 1e-12 * hi; it++)
+            {
+                double mid = (lo + hi) / 2;
+                if (At(mid).tAvg > 0) lo = mid; else hi = mid;
+            }
+            w0 = (lo + hi) / 2;
+        }
+        else if (stall.tAvg > 0 && kMean > 0) w0 = v / kMean; // no resistance: the ideal speed of the mean EMF
         double wr = 2 * Math.PI * ratedRpm / 60;
         var rated = At(wr);
         double pin = supplyV * rated.iAvg;

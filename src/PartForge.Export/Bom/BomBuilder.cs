@@ -1,4 +1,6 @@
 using System.Globalization;
+using PartForge.Checks.Hardware;
+using PartForge.Design.Hardware;
 using PartForge.Design.Machines;
 using PartForge.Design.Parts;
 
@@ -13,7 +15,7 @@ public static class BomBuilder
     /// <summary>Margin added on every side of a cut part's bounding box for the sheet size, mm (our choice).</summary>
     public const double SheetMarginMm = 10;
 
-    public static BillOfMaterials Build(MachineModel d, double electricalWireTotalM, double wireGramsPerMetre, IReadOnlyList<BomPart> parts)
+    public static BillOfMaterials Build(MachineModel d, double electricalWireTotalM, double wireGramsPerMetre, IReadOnlyList<BomPart> parts, IReadOnlyList<FastenerJoint> joints, JackingSet? jacks = null)
     {
         var lines = new List<BomLine>();
         int rotors = RotorCount(d), stators = StatorCount(d);
@@ -44,10 +46,10 @@ public static class BomBuilder
                 $"{F(Round(p.MassEachG, 1))} g each; sheet = bounding box + {F(SheetMarginMm)} mm each side"));
         }
 
-        if (d.Rotor.BoltCircle is { } bc) lines.Add(Fastener("rotor bolt circle", bc.HoleMm, bc.Count * rotors,
-            d.Rotor.ThicknessMm + (d.Rotor.BackIronThicknessMm ?? 0), $"{bc.Count} per rotor x {rotors} on D{F(bc.CircleDiameterMm)}"));
-        if (d.Stator.Mount is { } mt) lines.Add(Fastener("stator mount", mt.HoleMm, mt.Count * stators,
-            d.Stator.ThicknessMm, $"{mt.Count} per stator x {stators} on D{F(mt.CircleDiameterMm)}"));
+        foreach (var j in joints) lines.Add(Fastener(j));
+        if (jacks is { } jk)
+            lines.Add(new BomLine("fasteners", $"{jk.Thread.Size} jacking screw with hex nut", $"fully threaded, property class {FastenerSteel.PropertyClass} (ISO 898-1), length at least {F(Round(jk.ScrewLengthMm, 3))} mm; ISO 4032 nut in the nut trap", jk.Count, "sets",
+                $"{jk.Rotor.Name}: lowers it onto the hub spacer against {F(Round(jk.PullN, 1))} N; length = {F(Round(jk.PassMm, 3))} mm through the rotor and its back iron + {F(JackingSet.LiftMm)} mm lift"));
 
         if (d.Sensor.Kind != SensorKind.None)
         {
@@ -62,13 +64,20 @@ public static class BomBuilder
     public static int RotorCount(MachineModel d) => d.Layout.Rotors.Count;
     public static int StatorCount(MachineModel d) => d.Layout.Stators.Count;
 
-    private static BomLine Fastener(string where, double hole, int count, double gripMm, string notes)
+    /// <summary>
+    /// One line per joint: through-studs with a nut and washer at each end, or screws into a hub or frame. The grip
+    /// is the sum of the clamped parts (listed bottom to top), read from the placed parts.
+    /// </summary>
+    private static BomLine Fastener(FastenerJoint j)
     {
-        var pick = ClearanceHoles.ForHole(hole);
-        if (pick is not { } p)
-            return new BomLine("fasteners", $"{where} fastener", $"hole D{F(hole)} mm is below the smallest ISO 273 clearance hole (M1.6): choose a pin or screw to suit", count, "pcs", notes);
-        return new BomLine("fasteners", $"{p.Size} screw with nut and washer", $"for hole D{F(hole)} mm (ISO 273 {p.Series} series); length = grip {F(gripMm)} mm + hub/frame + nut", count, "sets",
-            $"{where}: {notes}");
+        string stackText = string.Join(" + ", j.Clamped.Select(c => $"{c.Part.Name} {F(Round(c.ThicknessMm, 3))}"));
+        string notes = $"{j.Where} on D{F(j.CircleDiameterMm)}: grip {F(Round(j.GripMm, 3))} mm = {stackText}";
+        if (j.Thread is not { } t)
+            return new BomLine("fasteners", $"{j.Where} fastener", $"hole D{F(j.HoleMm)} mm is below the smallest ISO 273 clearance hole (M1.6): choose a pin or screw to suit", j.Count, "pcs", notes);
+        string cls = $"property class {FastenerSteel.PropertyClass} (ISO 898-1)";
+        return j.Kind == JointKind.ThroughStud
+            ? new BomLine("fasteners", $"{t.Size} through-stud with 2 nuts and 2 washers", $"{cls}, for hole D{F(j.HoleMm)} mm (ISO 273 {j.HoleSeries} series); length = grip {F(Round(j.GripMm, 3))} mm + 2 washers + 2 nuts + 2 threads", j.Count, "sets", notes)
+            : new BomLine("fasteners", $"{t.Size} screw with nut and washer", $"{cls}, for hole D{F(j.HoleMm)} mm (ISO 273 {j.HoleSeries} series); length = grip {F(Round(j.GripMm, 3))} mm + hub/frame + nut", j.Count, "sets", notes);
     }
 
     private static double Round(double v, int digits) => Math.Round(v, digits, MidpointRounding.AwayFromZero);

@@ -17,6 +17,6 @@ public sealed class BomExport : ExportFormat
     {
         var ev = context.Evaluation;
         var e = ElectricalView.From(ev.Machine, ev.Electrical);
-        stream.Write(BomCsv.WriteUtf8(BomBuilder.Build(ev.Machine, e.TotalWireM, e.WireGramsPerMetre, ReportBuilder.BomParts(ev.Parts!))));
+        stream.Write(BomCsv.WriteUtf8(BomBuilder.Build(ev.Machine, e.TotalWireM, e.WireGramsPerMetre, ReportBuilder.BomParts(ev.Parts!), ev.Checks.Joints, ev.Checks.Jacks)));
     }
 }

@@ -5,6 +5,7 @@ using PartForge.Design.Parts;
 using PartForge.Export.Exporters;
 using PartForge.Export.Report;
 using PartForge.Export.Results;
+using PartForge.Formats.Io;
 using PartForge.Geometry;
 using PartForge.Parts;
 
@@ -13,7 +14,8 @@ namespace PartForge.Export.Pipeline;
 /// <summary>
 /// The whole job: load -> stages (electrical, parts, checks; <see cref="Stages"/>) -> gate -> export. The gate:
 /// if any check fails, nothing is written (unless forced, and then the results and report say so). Outputs go
-/// only into the output folder, each through an atomic write, in a fixed order, so two builds give identical files.
+/// only into the output folder, as one transaction (all staged, then all renamed, the manifest last), in a fixed
+/// order, so two builds give identical files and a folder holds either the previous set or the new one.
 /// </summary>
 public static class BuildPipeline
 {
@@ -47,7 +49,12 @@ public static class BuildPipeline
         };
     }
 
-    /// <summary><c>partforge build</c>.</summary>
+    /// <summary>
+    /// <c>partforge build</c>. The output folder is checked before anything is computed and its transaction begun
+    /// (lock taken, leftover temporaries of earlier runs removed) right after the design loads; every planned
+    /// file is then staged under a temporary name and the set committed with its manifest last
+    /// (<see cref="OutputTransaction"/>). Any failure rolls the set back: the folder keeps its previous set whole.
+    /// </summary>
     public static PipelineResult Build(BuildRequest request)
     {
         var clock = new StageClock();
@@ -61,7 +68,26 @@ public static class BuildPipeline
         if (problems.Count > 0) return Bad(problems);
         clock.Lap("load");
 
-        var (ev, problem) = TryEvaluate(loaded.Machine!, request.DesignPath, clock);
+        OutputTransaction tx;
+        try
+        {
+            tx = request.Guard?.Begin(folder!.FullPath, folder.Shown) ?? OutputTransaction.Begin(folder!.FullPath, folder.Shown);
+        }
+        catch (OutputWriteException ex)
+        {
+            return Bad([ex.Message]);
+        }
+        using (tx)
+        {
+            return BuildInto(request, tx, folder, loaded.Machine!, formats, partWords, clock);
+        }
+    }
+
+    private static PipelineResult BuildInto(BuildRequest request, OutputTransaction tx, OutputFolder folder, MachineModel machine,
+        IReadOnlyCollection<ExportFormat> formats, IReadOnlySet<string>? partWords, StageClock clock)
+    {
+        var problems = new List<string>();
+        var (ev, problem) = TryEvaluate(machine, request.DesignPath, clock);
         if (ev == null) return Bad([problem!]);
         HashSet<PartId>? partFilter = null;
         if (partWords != null && ev.Parts != null)
@@ -89,29 +115,44 @@ public static class BuildPipeline
         }
 
         var plan = ExportPlan.For(ev, formats, partFilter);
+        if (plan.Files.Count == 0) return Bad([NothingToWrite(ev, formats, partFilter)]);
+        string manifestName = OutputNames.Manifest(ev.Machine.Name);
+        try
+        {
+            // Refuse links or folders at any output name (and the manifest's) before anything is computed or staged.
+            foreach (var name in plan.Files.Select(f => f.Name).Append(manifestName)) folder.PathOf(name);
+        }
+        catch (OutputRefusedException ex)
+        {
+            return Bad([ex.Message]);
+        }
         if (MeshProblem(ev, plan.MeshedParts(ev.Parts), request.DesignPath) is { } meshProblem) return Bad([meshProblem]);
         clock.Lap("mesh");
         var doc = ResultsBuilder.Build(ev, plan.FilesByPart, forced: failed, countTriangles: plan.WritesResults);
         var context = new ExportContext(ev, doc, failed, RenderPreviews(plan.Previews(), ev.Parts));
         clock.Lap("previews");
-        var written = new List<string>();
+        ManifestInfo info;
         try
         {
-            foreach (var f in plan.Files) folder.PathOf(f.Name); // refuse links or folders at any output name before writing anything
-            folder.Create();
+            info = ManifestInfo.For(OutputNames.Sanitize(ev.Machine.Name), ToolInfo.Version, File.ReadAllBytes(request.DesignPath));
+        }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
+        {
+            // The design file is read again for its hash (it was read a moment ago): a user-level problem.
+            return new PipelineResult { Status = PipelineStatus.BadInput, Problems = [$"{request.DesignPath}: cannot be read again for the manifest ({ex.Message.ReplaceLineEndings(" ")}); nothing in {folder.Shown} was changed"], Evaluation = ev, Results = doc, OutputFolder = folder.FullPath };
+        }
+        try
+        {
             foreach (var f in plan.Files)
             {
-                folder.Write(f.Name, s => f.Format.Write(s, f, context));
-                written.Add(f.Name);
+                request.BeforeStage?.Invoke(f.Name);
+                tx.Stage(f.Name, s => f.Format.Write(s, f, context));
             }
+            tx.Commit(info);
         }
-        catch (OutputRefusedException ex)
+        catch (OutputWriteException ex)
         {
-            return new PipelineResult { Status = PipelineStatus.BadInput, Problems = [ex.Message], Evaluation = ev, Results = doc, Written = written, OutputFolder = folder.FullPath };
-        }
-        catch (UnauthorizedAccessException)
-        {
-            return new PipelineResult { Status = PipelineStatus.BadInput, Problems = [$"{request.OutputDir}: permission denied"], Evaluation = ev, Results = doc, Written = written, OutputFolder = folder.FullPath };
+            return new PipelineResult { Status = PipelineStatus.BadInput, Problems = [ex.Message], Evaluation = ev, Results = doc, OutputFolder = folder.FullPath };
         }
         clock.Lap("write");
         return new PipelineResult
@@ -120,10 +161,29 @@ public static class BuildPipeline
             Problems = failed ? FailLines(ev.Checks) : [],
             Evaluation = ev,
             Results = doc,
-            Written = written,
+            Written = [.. plan.Files.Select(f => f.Name), manifestName],
+            RemovedTemporaries = tx.RemovedTemporaries,
             OutputFolder = folder.FullPath,
             Timings = clock.Laps,
         };
+    }
+
+    /// <summary>
+    /// Why the chosen formats write nothing for the chosen parts: each part's process (printed or cut) and the
+    /// formats that would write it, so the message names what to change.
+    /// </summary>
+    private static string NothingToWrite(Evaluation ev, IReadOnlyCollection<ExportFormat> formats, IReadOnlySet<PartId>? partFilter)
+    {
+        var parts = ev.Parts!.Parts.Where(p => partFilter == null || partFilter.Contains(p.Id)).ToArray();
+        string chosen = string.Join(",", ExportRegistry.All.Where(formats.Contains).Select(f => f.Name));
+        var lines = new List<string>();
+        foreach (var p in parts)
+        {
+            var wouldWrite = ExportRegistry.All.Where(f => f.Plan(new ExportScope(ev.Machine, [p], ev.Parts)).Any(x => x.Parts.Contains(p))).Select(f => f.Name);
+            string process = p.Process == PartProcess.Print ? "printed, not cut" : "cut, not printed";
+            lines.Add($"{p.Name} is {process} (formats that write it: {string.Join(", ", wouldWrite)})");
+        }
+        return $"--formats {chosen}: nothing to write for --parts {string.Join(",", parts.Select(p => p.Name))}: {string.Join("; ", lines)}; change --formats or --parts";
     }
 
     /// <summary>

@@ -1,3 +1,5 @@
+using PartForge.Formats.Io;
+
 namespace PartForge.Export.Pipeline;
 
 /// <summary>What <c>partforge build</c> was asked to do.</summary>
@@ -17,4 +19,13 @@ public sealed record BuildRequest
 
     /// <summary>Write even if a check fails, stamping the results and report as failed.</summary>
     public bool Force { get; init; }
+
+    /// <summary>
+    /// The command line's interrupt guard: the build's output transaction is begun through it, so SIGINT or
+    /// SIGTERM rolls the set back (and the guard's line names the folder). Null: no signal handling.
+    /// </summary>
+    public InterruptGuard? Guard { get; init; }
+
+    /// <summary>Called with each output name just before it is staged (tests: throw to stand for a failure mid-build).</summary>
+    internal Action<string>? BeforeStage { get; init; }
 }

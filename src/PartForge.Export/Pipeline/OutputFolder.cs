@@ -3,10 +3,12 @@ using PartForge.Formats.Io;
 namespace PartForge.Export.Pipeline;
 
 /// <summary>
-/// The folder given with <c>-o</c>, and the only place outputs go. Every file is written through
-/// <see cref="AtomicFile"/> under a plain file name (no separators, no "..") directly inside the folder; a
-/// symbolic link or folder standing at an output name is refused rather than followed; nothing is ever
-/// deleted, so foreign files in the folder are left alone.
+/// The folder given with <c>-o</c>, and the only place outputs go. <see cref="Prepare"/> refuses, before
+/// anything is computed, a path that can never hold the outputs (empty, a file, under a file, inside /proc or
+/// /sys); the files themselves are written as one <see cref="OutputTransaction"/> under plain file names (no
+/// separators, no "..") directly inside the folder. A symbolic link or folder standing at an output name is
+/// refused rather than followed or replaced; only the transaction's own temporaries are ever deleted, so
+/// foreign files in the folder are left alone.
 /// </summary>
 public sealed class OutputFolder
 {
@@ -16,25 +18,57 @@ public sealed class OutputFolder
         Shown = shown;
     }
 
-    /// <summary>Absolute path of the folder (symbolic links in the given path resolved once, here).</summary>
+    /// <summary>Absolute path of the folder.</summary>
     public string FullPath { get; }
 
     /// <summary>The path as the user gave it, for messages.</summary>
     public string Shown { get; }
 
-    /// <summary>Checks the folder can be used (exists or can be created, is not a file). Creates nothing.</summary>
-    public static OutputFolder Prepare(string path, out string? problem)
+    /// <summary>
+    /// Checks the folder can be used (it exists, or it and its missing parents can be made: no part of the
+    /// path is a file; not a kernel file system). Creates nothing. A problem is one line naming what to change.
+    /// </summary>
+    public static OutputFolder? Prepare(string? path, out string? problem)
     {
         problem = null;
-        string full = Path.GetFullPath(path);
-        if (File.Exists(full)) problem = $"{path} is a file, not a folder; give a folder with -o";
+        if (string.IsNullOrWhiteSpace(path))
+        {
+            problem = "-o: the output folder is empty; give a folder, for example -o out";
+            return null;
+        }
+        if (path.Contains('\0'))
+        {
+            problem = "-o: the output folder's name contains a NUL character; give a plain folder name";
+            return null;
+        }
+        string full;
+        try
+        {
+            full = Path.GetFullPath(path);
+        }
+        catch (Exception ex) when (ex is ArgumentException or PathTooLongException or NotSupportedException or IOException)
+        {
+            problem = $"-o {path}: not a usable folder path ({ex.Message.ReplaceLineEndings(" ")}); give another folder";
+            return null;
+        }
+        string? kernel = IsUnder(full, "/proc") ? "/proc" : IsUnder(full, "/sys") ? "/sys" : null;
+        if (kernel != null)
+        {
+            problem = $"-o {path}: this is inside {kernel}, a kernel file system that holds no ordinary files; give another folder";
+            return null;
+        }
+        for (string? p = full; p != null; p = Path.GetDirectoryName(p))
+        {
+            if (Directory.Exists(p)) break;
+            if (File.Exists(p))
+            {
+                problem = p == full
+                    ? $"-o {path}: this is a file, not a folder; give a folder"
+                    : $"-o {path}: {p} is a file, so no folder can be made under it; give another folder";
+                return null;
+            }
+        }
         return new OutputFolder(full, path);
-    }
-
-    /// <summary>Creates the folder if needed (only when something is about to be written).</summary>
-    public void Create()
-    {
-        Directory.CreateDirectory(FullPath);
     }
 
     /// <summary>The full path of an output name, after checking it stays inside the folder and is not a link or folder.</summary>
@@ -47,13 +81,10 @@ public sealed class OutputFolder
         if (info.LinkTarget != null)
             throw new OutputRefusedException($"{Path.Combine(Shown, fileName)} is a symbolic link; not followed (remove it or choose another -o folder)");
         if (Directory.Exists(p))
-            throw new OutputRefusedException($"{Path.Combine(Shown, fileName)} is a folder; an output file cannot replace it");
+            throw new OutputRefusedException($"{Path.Combine(Shown, fileName)} is a folder; an output file cannot replace it (remove it or choose another -o folder)");
         return p;
     }
 
-    public void Write(string fileName, Action<Stream> write) => AtomicFile.Write(PathOf(fileName), write);
-
-    public void Write(string fileName, byte[] bytes) => AtomicFile.Write(PathOf(fileName), bytes);
-
-    public void WriteText(string fileName, string text) => AtomicFile.WriteText(PathOf(fileName), text);
+    private static bool IsUnder(string full, string root) =>
+        !OperatingSystem.IsWindows() && (full == root || full.StartsWith(root + "/", StringComparison.Ordinal));
 }

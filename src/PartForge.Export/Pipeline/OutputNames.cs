@@ -1,7 +1,7 @@
 namespace PartForge.Export.Pipeline;
 
 /// <summary>
-/// File names of the outputs (CONTRACT.md "Part names and output files"), derived from the design name and
+/// File names of the outputs (the pinned part names and output files, README "Outputs"), derived from the design name and
 /// sanitised so that no name can leave the output folder or surprise a shell: lowercase letters, digits and
 /// '-' only, at most 64 characters, never empty, never "." or "..".
 /// </summary>
@@ -24,8 +24,12 @@ public static class OutputNames
 
     public static string PartFile(string design, string part, string extension) => $"{Sanitize(design)}-{Sanitize(part)}.{extension}";
     public static string ThreeMf(string design) => $"{Sanitize(design)}.3mf";
+    public static string PlateThreeMf(string design, int plate) => $"{Sanitize(design)}-plate-{plate.ToString(System.Globalization.CultureInfo.InvariantCulture)}.3mf";
     public static string AssemblyThreeMf(string design) => $"{Sanitize(design)}-assembly.3mf";
     public static string Results(string design) => $"{Sanitize(design)}-results.json";
     public static string Report(string design) => $"{Sanitize(design)}-report.html";
     public static string Bom(string design) => $"{Sanitize(design)}-bom.csv";
+
+    /// <summary>The output set's manifest (<see cref="Formats.Io.OutputManifest"/>), written last.</summary>
+    public static string Manifest(string design) => Formats.Io.OutputManifest.FileNameFor(Sanitize(design));
 }

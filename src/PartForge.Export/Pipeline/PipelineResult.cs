@@ -5,7 +5,7 @@ namespace PartForge.Export.Pipeline;
 /// <summary>
 /// The outcome of <c>check</c> or <c>build</c>: the status, one line per problem (design errors, failed
 /// checks, refused outputs), the evaluation and results document when the design loaded, and the files
-/// written (relative to the output folder, in writing order).
+/// written (relative to the output folder, in writing order; the manifest last).
 /// </summary>
 public sealed record PipelineResult
 {
@@ -14,6 +14,9 @@ public sealed record PipelineResult
     public Evaluation? Evaluation { get; init; }
     public ResultsDocument? Results { get; init; }
     public IReadOnlyList<string> Written { get; init; } = [];
+
+    /// <summary>Leftover temporaries of earlier, interrupted builds that this build removed from the folder.</summary>
+    public IReadOnlyList<string> RemovedTemporaries { get; init; } = [];
 
     /// <summary>The output folder's full path (build only).</summary>
     public string? OutputFolder { get; init; }

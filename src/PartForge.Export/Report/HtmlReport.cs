@@ -6,7 +6,7 @@ namespace PartForge.Export.Report;
 
 /// <summary>
 /// Renders the design report: one self-contained HTML file (inline CSS and SVG, PNG previews as data URIs,
-/// no scripts, nothing fetched). Deterministic: the same input gives the same bytes (no dates, no random ids).
+/// the meshes inline for the 3D view, nothing fetched). Deterministic: the same input gives the same bytes (no dates, no random ids). Its one script is the project's own 3D view (<see cref="Viewer3d"/>).
 /// </summary>
 public static class HtmlReport
 {
@@ -52,7 +52,9 @@ public static class HtmlReport
         sb.Append("<section id=\"checks\"><h2>Checks</h2>\n<table id=\"check-table\"><thead><tr><th>status</th><th>check</th><th>part</th><th>value</th><th>limit</th><th>margin</th><th>unit</th><th>finding and fix</th></tr></thead><tbody>\n");
         foreach (var c in r.Checks)
         {
-            sb.Append("<tr data-check=\"").Append(Esc(c.Id)).Append("\" data-part=\"").Append(Esc(c.Part)).Append("\" data-status=\"").Append(Esc(c.Status))
+            sb.Append("<tr data-check=\"").Append(Esc(c.Id)).Append("\" data-part=\"").Append(Esc(c.Part)).Append('"');
+            if (c.Counterpart.Length > 0) sb.Append(" data-counterpart=\"").Append(Esc(c.Counterpart)).Append('"');
+            sb.Append(" data-status=\"").Append(Esc(c.Status))
               .Append("\" data-value=\"").Append(SvgCanvas.Num(c.Value)).Append("\"><td>").Append(Pill(c.Status)).Append("</td><td>").Append(Esc(c.Id))
               .Append("</td><td>").Append(Esc(c.Part)).Append("</td><td class=\"num\">").Append(Fmt(c.Value)).Append("</td><td class=\"num\">").Append(Fmt(c.Limit))
               .Append("</td><td class=\"num\">").Append(Fmt(c.Margin)).Append("</td><td>").Append(Esc(c.Unit)).Append("</td><td>").Append(Esc(c.Message));
@@ -71,6 +73,8 @@ public static class HtmlReport
         sb.Append("<section id=\"half-section\"><h2>Axial half-section</h2>\n<p class=\"note\">Through a magnet and a coil, to scale, nominal positions. The red dimensions are the running gaps: the drawn distance is the nominal gap; the value written is the worst case the checker found after tolerances, runout, play and deflection.</p>\n<figure>")
           .Append(HalfSection.Render("Axial half-section", r.SectionBodies, r.SectionDimensions)).Append("</figure></section>\n");
 
+        if (r.SceneJson.Length > 0) Viewer3d.Append(sb, r.SceneJson);
+
         // Previews
         if (r.Previews.Count > 0)
         {
@@ -87,6 +91,23 @@ public static class HtmlReport
             sb.Append("<tr><td>").Append(Esc(l.Category)).Append("</td><td>").Append(Esc(l.Item)).Append("</td><td>").Append(Esc(l.Specification))
               .Append("</td><td class=\"num\">").Append(Bom.BomCsv.Number(l.Quantity)).Append("</td><td>").Append(Esc(l.Unit)).Append("</td><td>").Append(Esc(l.Notes)).Append("</td></tr>\n");
         sb.Append("</tbody></table></section>\n");
+
+        if (r.Fabrication.Count > 0)
+        {
+            sb.Append("<section id=\"fabrication\"><h2>Making the parts</h2>\n");
+            foreach (var t in r.Fabrication) Table(sb, t);
+            sb.Append("</section>\n");
+        }
+
+        if (r.Assembly.Count > 0)
+        {
+            sb.Append("<section id=\"assembly\"><h2>Assembly steps</h2>\n<table id=\"assembly-table\"><thead><tr><th>step</th><th>action</th><th>pull (N)</th><th>caution</th></tr></thead><tbody>\n");
+            foreach (var s in r.Assembly)
+                sb.Append("<tr><td class=\"num\">").Append(s.Order.ToString(System.Globalization.CultureInfo.InvariantCulture)).Append("</td><td>").Append(Esc(s.Action))
+                  .Append("</td><td class=\"num\">").Append(Bom.BomCsv.Number(Math.Round(s.PullN, 1))).Append(s.PullNote.Length > 0 ? " (" + Esc(s.PullNote) + ")" : "")
+                  .Append("</td><td>").Append(Esc(s.Caution ?? "")).Append("</td></tr>\n");
+            sb.Append("</tbody></table></section>\n");
+        }
 
         if (r.Notes.Count > 0)
         {

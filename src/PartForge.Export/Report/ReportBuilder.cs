@@ -2,6 +2,7 @@ using PartForge.Checks;
 using PartForge.Design.Machines;
 using PartForge.Design.Parts;
 using PartForge.Export.Bom;
+using PartForge.Export.Pipeline;
 using PartForge.Parts;
 
 namespace PartForge.Export.Report;
@@ -38,17 +39,40 @@ public static class ReportBuilder
             CoilWaveform = e.CoilWaveform,
             PhaseWaveforms = e.PhaseWaveforms,
             WaveformRpm = e.WaveformRpm,
-            Checks = checks.Checks.Select(c => new ReportCheck(c.Id, c.PartName, c.StatusText, c.Value, c.Limit, c.Unit, c.Margin, c.Message, c.Basis ?? "")).ToArray(),
+            Checks = checks.Checks.Select(c => new ReportCheck(c.Id, c.PartName, c.StatusText, c.Value, c.Limit, c.Unit, c.Margin, c.Message, c.Basis ?? "", c.CounterpartName ?? "")).ToArray(),
             Status = checks.StatusText,
             Forced = forced,
             Drawings = parts.Parts.Select(p => PartSketches.For(d, p)).ToArray(),
             SectionBodies = bodies,
             SectionDimensions = dims,
-            Bom = BomBuilder.Build(d, e.TotalWireM, e.WireGramsPerMetre, BomParts(parts)),
+            Bom = BomBuilder.Build(d, e.TotalWireM, e.WireGramsPerMetre, BomParts(parts), checks.Joints, checks.Jacks),
+            Assembly = checks.Assembly,
             Tables = e.Tables,
+            Fabrication = FabricationTables(d, parts),
             Notes = e.Notes.Concat(parts.Parts.SelectMany(p => p.Notes.Select(n => n.StartsWith(p.Name, StringComparison.Ordinal) ? n : $"{p.Name}: {n}"))).ToArray(),
             Previews = previews ?? [],
+            SceneJson = ViewerScene.Json(parts, checks),
         };
+    }
+
+    /// <summary>The print plates of every printed part (the layout of <c>&lt;name&gt;.3mf</c> for the whole machine).</summary>
+    public static IReadOnlyList<ReportTable> FabricationTables(MachineModel d, PartSet parts)
+    {
+        var printed = parts.Parts.Where(p => p.Process == PartProcess.Print).ToArray();
+        if (printed.Length == 0) return [];
+        var plates = parts.PlatesOf(printed, d.Printer, d.Precision);
+        static string F(double v) => v.ToString("0.#", System.Globalization.CultureInfo.InvariantCulture);
+        var rows = new List<IReadOnlyList<string>>();
+        for (int k = 0; k < plates.PlateCount; k++)
+        {
+            var on = plates.Layout.Placements.Where(p => p.BinIndex == k).GroupBy(p => p.PartId).Select(g => g.Count() > 1 ? $"{g.Key} x {g.Count()}" : g.Key);
+            string file = plates.PlateCount > 1 ? OutputNames.PlateThreeMf(d.Name, k + 1) : OutputNames.ThreeMf(d.Name);
+            rows.Add([(k + 1).ToString(System.Globalization.CultureInfo.InvariantCulture), string.Join(", ", on), F(100 * plates.Fill(k)) + " %", file]);
+        }
+        foreach (var miss in plates.Layout.NotPlaced.GroupBy(m => m.PartId))
+            rows.Add(["-", $"{miss.Key} x {miss.Count()} not placed: larger than the bed", "", ""]);
+        string title = $"Print plates: {plates.PlateCount} on a {F(d.Printer.BedXMm)} x {F(d.Printer.BedYMm)} mm bed, {F(d.Printer.SpacingMm)} mm apart, each part with its larger flat face down";
+        return [new ReportTable(title, ["plate", "parts", "first-layer fill", "file"], rows)];
     }
 
     public static IReadOnlyList<BomPart> BomParts(PartSet parts) => parts.Parts.Select(p =>

@@ -31,7 +31,7 @@ public static class ReportFiles
     {
         var parts = ev.Parts ?? throw new InvalidOperationException("the design has no parts, so there is no bill of materials");
         var e = ElectricalView.From(ev.Machine, ev.Electrical);
-        return BomBuilder.Build(ev.Machine, e.TotalWireM, e.WireGramsPerMetre, ReportBuilder.BomParts(parts));
+        return BomBuilder.Build(ev.Machine, e.TotalWireM, e.WireGramsPerMetre, ReportBuilder.BomParts(parts), ev.Checks.Joints, ev.Checks.Jacks);
     }
 
     public static byte[] Bom(Evaluation ev) => BomCsv.WriteUtf8(BomOf(ev));

@@ -40,11 +40,20 @@ public sealed record ReportInput
 
     public required BillOfMaterials Bom { get; init; }
 
+    /// <summary>The ordered assembly steps with the pull at each.</summary>
+    public IReadOnlyList<PartForge.Checks.Hardware.AssemblyStep> Assembly { get; init; } = [];
+
     /// <summary>Further tables (winding layout, parts list).</summary>
     public IReadOnlyList<ReportTable> Tables { get; init; } = [];
 
+    /// <summary>How the parts are laid out for the machines that make them (print plates, ...), one table each.</summary>
+    public IReadOnlyList<ReportTable> Fabrication { get; init; } = [];
+
     /// <summary>Notes on approximations and assumptions.</summary>
     public IReadOnlyList<string> Notes { get; init; } = [];
+
+    /// <summary>The 3D view's scene (<see cref="ViewerScene.Json"/>); empty leaves the view out.</summary>
+    public string SceneJson { get; init; } = "";
 
     /// <summary>Inline PNG previews (name, PNG bytes); embedded as data URIs so the report stays one file.</summary>
     public IReadOnlyList<(string Name, byte[] Png)> Previews { get; init; } = [];

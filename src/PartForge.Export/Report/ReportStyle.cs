@@ -27,7 +27,7 @@ td.num { text-align:right; font-variant-numeric: tabular-nums; white-space:nowra
 .status-line { font-size:16px; margin:4px 0 10px; }
 .cautions li { margin:6px 0; } .cautions b { color:var(--fail); }
 .note { color:var(--soft); font-size:13px; }
-figure { margin:10px 0 18px; } figcaption { color:var(--soft); font-size:13px; margin-top:4px; }
+figure { margin:10px 0 18px; } #pf-view { width:100%; max-width:960px; display:block; border:1px solid #ccc; cursor:grab; touch-action:none; } .view3d-controls label { margin-right:12px; font-size:14px; } #pf-parts { margin:6px 0; } figcaption { color:var(--soft); font-size:13px; margin-top:4px; }
 svg { background:#fffdf8; border:1px solid var(--rule); max-width:100%; height:auto; }
 svg text { font-family:"DejaVu Sans", sans-serif; }
 .part-fill { fill:#dfe9e6; stroke:var(--ink); stroke-width:0.35; }

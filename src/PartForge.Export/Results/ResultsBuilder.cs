@@ -37,7 +37,8 @@ public static class ResultsBuilder
             }).ToArray() ?? [],
             Operating = OperatingOf(ev.Machine, ev.Electrical),
             Mechanics = MechanicsOf(ev, countTriangles),
-            Bom = ev.Parts is { } ps && countTriangles ? BomOf(ev.Machine, ev.Electrical, ps) : [],
+            Assembly = checks.Assembly,
+            Bom = ev.Parts is { } ps && countTriangles ? BomOf(ev.Machine, ev.Electrical, ps, ev.Checks.Joints, ev.Checks.Jacks) : [],
         };
     }
 
@@ -67,13 +68,16 @@ public static class ResultsBuilder
         var pull = ev.Electrical.Pull;
         var perRotor = d.Layout.Rotors.Select(r => (r.Name, pull?.RotorToRotorN ?? 0)).ToArray();
         string method = pull?.Method ?? "no net axial pull on a rotor: a coreless stator holds no iron, and a rotor's pull on its own back iron is internal to it";
-        return new MechanicsSection(rotatingKg, magnetG, perRotor, method);
+        return new MechanicsSection(rotatingKg, magnetG, perRotor, method)
+        {
+            PullCurve = pull?.AssemblyCurve.Select(c => (c.FaceToFaceMm, c.PullN)).ToArray() ?? Array.Empty<(double, double)>(),
+        };
     }
 
-    private static IReadOnlyList<BomEntry> BomOf(MachineModel d, ElectricalResult e, PartSet parts)
+    private static IReadOnlyList<BomEntry> BomOf(MachineModel d, ElectricalResult e, PartSet parts, IReadOnlyList<PartForge.Checks.Hardware.FastenerJoint> joints, PartForge.Checks.Hardware.JackingSet? jacks)
     {
         var view = ElectricalView.From(d, e);
-        return BomBuilder.Build(d, view.TotalWireM, view.WireGramsPerMetre, ReportBuilder.BomParts(parts)).Lines
+        return BomBuilder.Build(d, view.TotalWireM, view.WireGramsPerMetre, ReportBuilder.BomParts(parts), joints, jacks).Lines
             .Select(l => new BomEntry(l.Category, l.Item, l.Specification, l.Quantity, l.Unit, l.Notes)).ToArray();
     }
 

@@ -1,7 +1,7 @@
 namespace PartForge.Export.Results;
 
 /// <summary>
-/// The results document of CONTRACT.md ("Results document"): what <c>check --json</c> prints and
+/// The results document (its pinned keys: `partforge schema --results`): what <c>check --json</c> prints and
 /// <c>&lt;name&gt;-results.json</c> holds. Serialised by <see cref="ResultsJson"/> in a fixed key order.
 /// </summary>
 public sealed record ResultsDocument
@@ -15,14 +15,17 @@ public sealed record ResultsDocument
     public required IReadOnlyList<CheckEntry> Checks { get; init; }
     public required IReadOnlyList<PartEntry> Parts { get; init; }
 
-    /// <summary>The operating points (CONTRACT "Additions": <c>operating</c>).</summary>
+    /// <summary>The operating points (an addition to the pinned keys: <c>operating</c>).</summary>
     public OperatingSection Operating { get; init; } = new(0, null, null);
 
-    /// <summary>Masses and forces of the rotating assembly (CONTRACT "Additions": <c>mechanics</c>).</summary>
+    /// <summary>Masses and forces of the rotating assembly (an addition to the pinned keys: <c>mechanics</c>).</summary>
     public MechanicsSection Mechanics { get; init; } = new(0, 0, [], "");
 
     /// <summary>The bill of materials, line by line (empty when no parts could be made).</summary>
     public IReadOnlyList<BomEntry> Bom { get; init; } = [];
+
+    /// <summary>The ordered assembly steps with the pull at each (empty when no parts were made).</summary>
+    public IReadOnlyList<PartForge.Checks.Hardware.AssemblyStep> Assembly { get; init; } = [];
 }
 
 /// <summary>pass / warn / fail and the counts; <see cref="Forced"/> when --force wrote a failing design.</summary>
@@ -34,7 +37,7 @@ public sealed record ResultsSummary(string Status, int Fail, int Warn)
 
 public sealed record CheckEntry(string Id, string Part, string Status, double Value, double Limit, string Unit, double Margin, string Message)
 {
-    /// <summary>The other part of the pair the check is about, or null (CONTRACT "Additions": every check carries it).</summary>
+    /// <summary>The other part of the pair the check is about, or null (an addition to the pinned keys: every check carries it).</summary>
     public string? Counterpart { get; init; }
 
     /// <summary>Where the limiting value occurs (features; rotor angle for the rotation sweep), or null.</summary>
@@ -91,10 +94,10 @@ public sealed record ElectricalSection
     public double RatedRpm { get; init; }
     public IReadOnlyList<HarmonicEntry> Harmonics { get; init; } = [];
 
-    /// <summary>Which coil goes to which phase, and which way it is wound (CONTRACT "Additions": <c>electrical.winding_table</c>).</summary>
+    /// <summary>Which coil goes to which phase, and which way it is wound (an addition to the pinned keys: <c>electrical.winding_table</c>).</summary>
     public IReadOnlyList<WindingEntry> WindingTable { get; init; } = [];
 
-    /// <summary>The timing sensors (CONTRACT "Additions": <c>electrical.sensors</c>).</summary>
+    /// <summary>The timing sensors (an addition to the pinned keys: <c>electrical.sensors</c>).</summary>
     public IReadOnlyList<SensorEntry> Sensors { get; init; } = [];
 
     /// <summary>hall, reed or none.</summary>
@@ -127,7 +130,12 @@ public sealed record MotorEntry(string Drive, double SupplyVoltageV, double Swit
 /// The rotating assembly: its mass (rotating parts and magnets), one magnet's mass, and the axial pull on each
 /// rotor at the running gap (<c>pull_n</c>, by rotor part name), with the model used.
 /// </summary>
-public sealed record MechanicsSection(double RotatingMassKg, double MagnetMassG, IReadOnlyList<(string Part, double N)> PullN, string PullMethod);
+public sealed record MechanicsSection(double RotatingMassKg, double MagnetMassG, IReadOnlyList<(string Part, double N)> PullN, string PullMethod)
+{
+    /// <summary>The pull between the rotors against the face-to-face gap of their magnets while they are brought
+    /// together (<c>pull_curve</c>; empty unless dual-rotor), first point at the running gap.</summary>
+    public IReadOnlyList<(double FaceToFaceMm, double PullN)> PullCurve { get; init; } = Array.Empty<(double, double)>();
+}
 
 /// <summary>One line of the bill of materials.</summary>
 public sealed record BomEntry(string Category, string Item, string Specification, double Quantity, string Unit, string Notes);

@@ -82,6 +82,20 @@ public static class ResultsJson
                 w.WriteEndObject();
             }
             w.WriteEndArray();
+            w.WriteStartObject("assembly");
+            w.WriteStartArray("steps");
+            foreach (var s in doc.Assembly)
+            {
+                w.WriteStartObject();
+                w.WriteNumber("order", s.Order);
+                w.WriteString("action", s.Action);
+                Num(w, "pull_n", s.PullN, "assembly.steps.pull_n");
+                w.WriteString("pull_note", s.PullNote);
+                if (s.Caution is { } c) w.WriteString("caution", c); else w.WriteNull("caution");
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
             w.WriteEndObject();
         }
         ms.WriteByte((byte)'\n');
@@ -250,6 +264,15 @@ public static class ResultsJson
         foreach (var (part, n) in m.PullN) Num(w, part, n, "mechanics.pull_n." + part);
         w.WriteEndObject();
         w.WriteString("pull_method", m.PullMethod);
+        w.WriteStartArray("pull_curve");
+        foreach (var (gap, n) in m.PullCurve)
+        {
+            w.WriteStartObject();
+            Num(w, "face_to_face_mm", gap, "mechanics.pull_curve.face_to_face_mm");
+            Num(w, "pull_n", n, "mechanics.pull_curve.pull_n");
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
         w.WriteEndObject();
     }
 

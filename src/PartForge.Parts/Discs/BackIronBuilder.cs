@@ -44,6 +44,14 @@ internal static class BackIronBuilder
             holes.Add(bolts[j]);
             features.Add(new($"bolt-{j}", FeatureKind.BoltHole, j, bolts[j], 0, t, RotorBuilder.BoltAngle(d.Rotor.BoltCircle!, j), d.Rotor.BoltCircle!.CircleDiameterMm / 2));
         }
+        // The jacking screws of the last rotor pass through its back iron (both copies are the same part).
+        if (Jacking.For(d, null) is { } jacks)
+            for (int j = 0; j < jacks.AnglesDeg.Count; j++)
+            {
+                var h = jacks.Hole(j);
+                holes.Add(h);
+                features.Add(new($"jack-{j}", FeatureKind.JackHole, j, h, 0, t, jacks.AnglesDeg[j], jacks.CircleRadiusMm));
+            }
         var (process, material) = ProcessChoice.Resolve(PartId.BackIron, d.Parts.For(PartRole.BackIron), true, "", diags);
         var instances = new List<PartInstance>();
         foreach (var r in rotors)

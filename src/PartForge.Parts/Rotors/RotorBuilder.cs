@@ -40,8 +40,11 @@ internal static class RotorBuilder
     public const double MinNotchRadiusMm = 0.3;
     public const double MaxNotchRadiusMm = 1.0;
 
-    public static IReadOnlyList<PartSpec> Build(MachineModel d, AxialStack stack, List<PartDiagnostic> diags) =>
-        d.Layout.Rotors.Select(id => BuildOne(d, stack, id, evenNorthUp: id.Side != PartSide.Back, diags)).ToArray();
+    public static IReadOnlyList<PartSpec> Build(MachineModel d, AxialStack stack, List<PartDiagnostic> diags)
+    {
+        var jacks = Jacking.For(d, diags);
+        return d.Layout.Rotors.Select(id => BuildOne(d, stack, id, evenNorthUp: id.Side != PartSide.Back, jacks?.Rotor == id ? jacks : null, diags)).ToArray();
+    }
 
     /// <summary>The rim contour (outer circle, with the index notch bite on +x when notchRadius &gt; 0).</summary>
     public static Contour Rim(double r, double notchRadius)
@@ -56,7 +59,7 @@ internal static class RotorBuilder
         });
     }
 
-    private static PartSpec BuildOne(MachineModel d, AxialStack stack, PartId id, bool evenNorthUp, List<PartDiagnostic> diags)
+    private static PartSpec BuildOne(MachineModel d, AxialStack stack, PartId id, bool evenNorthUp, JackingPlan? jacks, List<PartDiagnostic> diags)
     {
         var rd = d.Rotor;
         string name = id.Name;
@@ -93,7 +96,12 @@ internal static class RotorBuilder
         // Polarity dots.
         double dotD = Math.Max(1.5, 3 * d.Process.NozzleMm);
         double dotDepth = Math.Min(2 * d.Process.LayerMm, Math.Min(t / 4, (t - pocketZ0) / 2));
-        var dotRadius = !rd.PolarityDots ? null : PlaceDots(d, R, notch, pocket0, pockets, bore, bolts, dotD / 2, wall, pIn, pOut);
+        var jackHoles = jacks is null ? [] : Enumerable.Range(0, jacks.AnglesDeg.Count).Select(jacks.Hole).ToArray();
+        var traps = jacks is null ? [] : Enumerable.Range(0, jacks.AnglesDeg.Count).Select(jacks.Trap).ToArray();
+        // Dots keep clear of each trap's circumscribed circle as of a bolt hole.
+        var keepClear = jacks is null ? bolts : bolts.Concat(Enumerable.Range(0, traps.Length)
+            .Select(j => Contour.FullCircle(Vec2.FromAngleDeg(jacks.AnglesDeg[j]) * jacks.CircleRadiusMm, jacks.TrapCircumradiusMm))).ToArray();
+        var dotRadius = !rd.PolarityDots ? null : PlaceDots(d, R, notch, pocket0, pockets, bore, keepClear, dotD / 2, wall, pIn, pOut);
         var features = new List<PartFeature>
         {
             new("rim", FeatureKind.Rim, 0, rim, 0, t, 0, R),
@@ -101,6 +109,13 @@ internal static class RotorBuilder
         if (bore is not null) features.Add(new("bore", FeatureKind.Bore, 0, bore, 0, t, 0, 0));
         for (int j = 0; j < bolts.Count; j++)
             features.Add(new($"bolt-{j}", FeatureKind.BoltHole, j, bolts[j], 0, t, BoltAngle(rd.BoltCircle!, j), rd.BoltCircle!.CircleDiameterMm / 2));
+        for (int j = 0; j < jackHoles.Length; j++)
+        {
+            features.Add(new($"jack-{j}", FeatureKind.JackHole, j, jackHoles[j], 0, t, jacks!.AnglesDeg[j], jacks.CircleRadiusMm));
+            features.Add(new($"nut-trap-{j}", FeatureKind.NutTrap, j, traps[j], t - jacks.TrapDepthMm, t, jacks.AnglesDeg[j], jacks.CircleRadiusMm));
+        }
+        if (jacks is not null)
+            notes.Add(FormattableString.Invariant($"{name}: press a {jacks.Thread.Size} hex nut into each of the {traps.Length} nut traps on the stator-side face; the jacking screws go in from the back and bear on the hub spacer"));
         if (notch > 0) features.Add(new("index-notch", FeatureKind.IndexNotch, 0, Contour.FullCircle(new Vec2(R, 0), notch), 0, t, 0, R));
 
         double pitch = d.Magnets.Shape.PitchRadiusMm;
@@ -138,7 +153,9 @@ internal static class RotorBuilder
         var st = new PrismaticStack(t).Outer(rim);
         if (bore is not null) st.Through(bore);
         foreach (var b in bolts) st.Through(b);
+        foreach (var h in jackHoles) st.Through(h);
         foreach (var p in pockets) st.Cut(p, pocketZ0, t);
+        if (jacks is not null) foreach (var trap in traps) st.Cut(trap, t - jacks.TrapDepthMm, t);
         IReadOnlyList<Contour> marks = Array.Empty<Contour>();
         Profile? cutProfile = null;
         if (process == PartProcess.Cut)

@@ -5,7 +5,7 @@ namespace PartForge.Checks.Tests.Mechanics;
 public class AnnularPlateTests
 {
     // Source: Roark's Formulas for Stress and Strain, 7th ed., Table 11.2, case 1j (annular plate, inner edge
-    // fixed, outer edge free, ring load); worked check in REFERENCE.md section 3 [calc]: PLA E 3.5 GPa,
+    // fixed, outer edge free, ring load); worked check in docs/physics.md §7 [calc]: PLA E 3.5 GPa,
     // nu 0.35, t 3, a 50, b 10, 20 N at the rim -> y_a = -0.1745 mm, M_rb = -5.748 N m/m, sigma 3.83 MPa.
     [Fact]
     public void Roark_case_1j_worked_check_is_reproduced()

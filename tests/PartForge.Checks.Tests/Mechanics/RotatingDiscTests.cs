@@ -5,7 +5,7 @@ namespace PartForge.Checks.Tests.Mechanics;
 public class RotatingDiscTests
 {
     // Source: Timoshenko & Goodier, Theory of Elasticity (rotating disc with a central hole); worked check in
-    // REFERENCE.md section 3 [calc]: PLA rho 1240, nu 0.35, b 50 mm, a 4 mm: 3000 rpm -> 0.2566 MPa;
+    // docs/physics.md §7 [calc]: PLA rho 1240, nu 0.35, b 50 mm, a 4 mm: 3000 rpm -> 0.2566 MPa;
     // 10000 rpm -> 2.851 MPa.
     [Theory]
     [InlineData(3000, 0.2566)]

@@ -177,7 +177,7 @@ public class PlantedFaultTests
     {
         var r = Base.With(m => m.MaxTemp = 56).Check();
         var c = One(r, CheckIds.CoilTemperature);
-        Assert.Equal(55, c.Limit, 12);   // PLA glass transition 55-60 C (REFERENCE.md section 4), lower end
+        Assert.Equal(55, c.Limit, 12);   // PLA glass transition 55-60 C (docs/physics.md §8), lower end
         AssertOnlyFailure(r, CheckIds.CoilTemperature);
         AssertNoFailure(Base.With(m => m.MaxTemp = 44).Check());
         // PETG former and stator (softening about 75 C, from memory): 64 C passes, 76 C fails.

@@ -26,7 +26,7 @@ public class DesignLoaderTests
     {
         var e = Single(Edit(Crank, "outer_diameter: 110", "outer_diameter: " + value), "rotor.outer_diameter");
         Assert.Contains("is not a finite number", e.ToString());
-        Assert.Equal("more than 0, up to 2000 mm", e.Allowed);
+        Assert.Equal("more than 0, up to 1000 mm", e.Allowed);
     }
 
     [Fact]

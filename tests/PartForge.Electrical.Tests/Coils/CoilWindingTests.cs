@@ -6,7 +6,7 @@ namespace PartForge.Electrical.Tests.Coils;
 
 public class CoilWindingTests
 {
-    // Source: Wheeler, Proc. IRE 16(10) 1928, worked values in REFERENCE.md section 3.
+    // Source: Wheeler, Proc. IRE 16(10) 1928, worked values computed from the formula (docs/physics.md §2).
     [Theory]
     [InlineData(25.4, 25.4, 12.7, 100, 400.0)]
     [InlineData(7, 3, 6, 100, 119.6)]

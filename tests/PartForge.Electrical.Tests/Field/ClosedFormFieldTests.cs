@@ -6,7 +6,7 @@ namespace PartForge.Electrical.Tests.Field;
 
 public class ClosedFormFieldTests
 {
-    // Source: REFERENCE.md section 2 on-axis closed forms (Furlani 2001, from memory) and their [calc] table:
+    // Source: on-axis closed forms (Furlani, Permanent Magnet and Electromechanical Devices, 2001, from memory), values computed from them (docs/physics.md §3):
     // cylinder D10 x 3 and block 10 x 10 x 3, Bz/Br at z from the face.
     [Theory]
     [InlineData(0.0, 0.25725, 0.23704)]
@@ -25,7 +25,7 @@ public class ClosedFormFieldTests
         Assert.Equal(bf, CuboidField.Bz(1, -5, 5, -5, 5, -3, 0, 0, 0, zc), 9);
     }
 
-    // Source: REFERENCE.md section 2, cuboid (Akoun and Yonnet 1984) check points, Br 1.30, x,y in [-5,5], z in [-3,0].
+    // Source: docs/physics.md §3, cuboid (Akoun and Yonnet 1984) check points, Br 1.30, x,y in [-5,5], z in [-3,0].
     [Theory]
     [InlineData(0, 0, 1, double.NaN, double.NaN, 0.263508)]
     [InlineData(2, 3, 1, 0.050349, 0.103747, 0.267269)]
@@ -38,7 +38,7 @@ public class ClosedFormFieldTests
         if (!double.IsNaN(by)) Assert.Equal(by, b.By, 6);
     }
 
-    // Source: REFERENCE.md section 2, flux through a centred 10 x 10 mm square 1 mm above the block face: 2.3003e-5 Wb.
+    // Source: docs/physics.md §3, flux through a centred 10 x 10 mm square 1 mm above the block face: 2.3003e-5 Wb.
     [Fact]
     public void CuboidFluxThroughSquare()
     {
@@ -49,7 +49,7 @@ public class ClosedFormFieldTests
         Assert.Equal(2.3003e-5, phi * 1e-6, 3e-9);
     }
 
-    // Source: Bulirsch cel, Numer. Math. 13 (1969); check values REFERENCE.md section 2 [calc].
+    // Source: Bulirsch cel, Numer. Math. 13 (1969); check values computed by direct quadrature (docs/physics.md §3).
     [Theory]
     [InlineData(0.5, 1, 1, -1, -0.364710006)]
     [InlineData(0.3, 0.25, 1, 0.5, 3.884366566)]
@@ -60,7 +60,7 @@ public class ClosedFormFieldTests
     [Fact]
     public void CelGivesEllipticK() => Assert.Equal(1.854074677, Bulirsch.Cel(Math.Sqrt(0.5), 1, 1, 1), 8);
 
-    // Source: REFERENCE.md section 2, cylinder (Derby and Olbert 2010) check points, Br 1.30, a 5, b 1.5, h above the face.
+    // Source: docs/physics.md §3, cylinder (Derby and Olbert 2010) check points, Br 1.30, a 5, b 1.5, h above the face.
     [Theory]
     [InlineData(0, 1, 0, 0.278576)]
     [InlineData(3, 1, 0.121234, 0.274564)]
@@ -73,7 +73,7 @@ public class ClosedFormFieldTests
         Assert.Equal(b.Bz, CylinderField.Bz(1.30, 5, 1.5, rho, 1.5 + h), 12);
     }
 
-    // Source: REFERENCE.md section 2, flux through a coaxial circle r 5 mm at h 1 mm above the D10 x 3 face: 1.86809e-5 Wb.
+    // Source: docs/physics.md §3, flux through a coaxial circle r 5 mm at h 1 mm above the D10 x 3 face: 1.86809e-5 Wb.
     [Fact]
     public void CylinderFluxThroughCoaxialCircle()
     {

@@ -5,7 +5,7 @@ namespace PartForge.Electrical.Tests.Field;
 
 public class MagnetGradesTests
 {
-    // Source: manufacturer grade tables (REFERENCE.md section 2): N35 1.17-1.22, N42 1.28-1.32, N52 1.42-1.48 T; mid-range used.
+    // Source: manufacturer grade tables (docs/physics.md §3): N35 1.17-1.22, N42 1.28-1.32, N52 1.42-1.48 T; mid-range used.
     [Theory]
     [InlineData("N35", 1.195)]
     [InlineData("N42", 1.30)]

@@ -5,11 +5,11 @@ namespace PartForge.Electrical.Tests.Field;
 
 public class MagneticPullTests
 {
-    // Source: REFERENCE.md section 3 [calc]: simple estimate F = B^2 A/(2 mu0), 1 T over 1 cm^2 -> 39.79 N.
+    // Source: computed from the formula (docs/physics.md §6): simple estimate F = B^2 A/(2 mu0), 1 T over 1 cm^2 -> 39.79 N.
     [Fact]
     public void SimpleEstimate() => Assert.Equal(39.79, MagneticPull.SimpleEstimateN(1.0, 100), 2);
 
-    // Source: REFERENCE.md section 3 [calc]: exact force between two D10 x 3 magnets (Br 1.30) facing each other.
+    // Source: computed from the formula (docs/physics.md §6): exact force between two D10 x 3 magnets (Br 1.30) facing each other.
     [Theory]
     [InlineData(0.5, 15.90)]
     [InlineData(1.0, 12.19)]
@@ -27,7 +27,7 @@ public class MagneticPullTests
         Assert.Equal(-f, MagneticPull.AxialForceN(lower, new[] { upper }, gap), 0.002 * newtons);
     }
 
-    // Source: REFERENCE.md section 3: a magnet on ideal steel at gap g pulls like the magnet pair at 2g (image method).
+    // Source: docs/physics.md §6: a magnet on ideal steel at gap g pulls like the magnet pair at 2g (image method).
     [Fact]
     public void ImageInIronIsThePairAtTwiceTheGap()
     {

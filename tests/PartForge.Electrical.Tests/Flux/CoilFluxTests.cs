@@ -105,7 +105,7 @@ public class CoilFluxTests
 
     // Independent check (flux of a circle from the on-axis field): a tiny coil coaxial with a disc magnet links
     // Int w [B(z) - rho^2/4 B''(z)] dA (the standard off-axis expansion of an axisymmetric field), with B(z) the
-    // on-axis closed form of REFERENCE.md section 2 — plus the far magnet's small share.
+    // on-axis closed form of docs/physics.md §3 — plus the far magnet's small share.
     [Fact]
     public void CoaxialTinyCoilAgainstOnAxisExpansion()
     {

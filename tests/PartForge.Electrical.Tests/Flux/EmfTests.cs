@@ -13,7 +13,7 @@ public class EmfTests
             magnets: new M.Magnets { Shape = "disc", Diameter = 10, Thickness = 4, Grade = "N42", PitchRadius = 40 }, gap: new M.Gap { AirGap = 4 });
     }
 
-    // Source: REFERENCE.md section 3 (Faraday, e = N dPhi/dt; for sinusoidal flux E_rms = 4.4429 f N Phi_max;
+    // Source: docs/physics.md §4 (Faraday, e = N dPhi/dt; for sinusoidal flux E_rms = 4.4429 f N Phi_max;
     // phase EMF = 4.44 f N_ph Phi k_w with the pitch factor NOT applied again when Phi is the flux the coil links).
     [Fact]
     public void FaradayConsistencyNearSinusoidal()
@@ -27,7 +27,7 @@ public class EmfTests
         Assert.Equal(4.4429 * f * r.Phase.CoilsInSeries * r.CoilFluxLinkagePeakWb * kd, r.Phase.EmfRmsV, r.Phase.EmfRmsV * 0.01);
     }
 
-    // Source: REFERENCE.md section 3 worked example [calc]: 12 poles at 500 rpm -> 50 Hz; N 100, Phi_max 2e-5 Wb -> 0.4443 V rms.
+    // Source: worked example computed from the formula (docs/physics.md §4): 12 poles at 500 rpm -> 50 Hz; N 100, Phi_max 2e-5 Wb -> 0.4443 V rms.
     [Fact]
     public void WorkedFrequencyExample()
     {
@@ -54,7 +54,7 @@ public class EmfTests
         }
     }
 
-    // Source: REFERENCE.md section 3: star line voltage = difference of two phase waveforms 120 degrees apart;
+    // Source: docs/physics.md §4: star line voltage = difference of two phase waveforms 120 degrees apart;
     // sqrt(3) x phase only for sinusoids (triplens cancel). Checked on the waveforms here.
     [Fact]
     public void LineFromPhaseWaveforms()

@@ -45,6 +45,30 @@ public class OperatingPointsTests
         Assert.Equal(mp.NoLoadRpm, mh.NoLoadRpm, 6);
     }
 
+    // No-load speed is where the model's own mean torque is zero: with a rippled EMF (six-step-like |sin| profile
+    // and a half-wave pulse profile) and currents that cannot reverse, the torque written out here,
+    // T(w) = mean over samples of max(0, V' - k w) / R x k, is ~0 at the reported speed and positive just below it.
+    // Source: the DC-machine torque relation T = k i per sample (any machine-design text), evaluated independently here.
+    [Theory]
+    [InlineData(false)]
+    [InlineData(true)]
+    public void NoLoadSpeedIsWhereTheTorqueIsZero(bool pulse)
+    {
+        int n = 360;
+        var k = Enumerable.Range(0, n).Select(j => 0.05 * (pulse ? Math.Sin(2 * Math.PI * j / n) : 0.87 + 0.13 * Math.Abs(Math.Cos(6 * Math.PI * j / n)))).ToArray();
+        var on = Enumerable.Range(0, n).Select(j => !pulse || j < n / 2).ToArray();
+        var mp = OperatingPoints.Motor(pulse ? "pulse" : "six-step", 12, 1.4, 2, k, on, 1000, 1, 0.1);
+        double v = 10.6;
+        double Torque(double w) => Enumerable.Range(0, n).Where(j => on[j]).Sum(j => Math.Max(0, (v - k[j] * w) / 2) * k[j]) / n;
+        double w0 = mp.NoLoadRpm * 2 * Math.PI / 60;
+        Assert.True(Math.Abs(Torque(w0)) < 1e-6 * mp.StallTorqueNm, $"torque at the no-load speed {Torque(w0)}");
+        Assert.True(Torque(0.999 * w0) > 0);
+        Assert.Equal(Torque(0), mp.StallTorqueNm, 12);
+        // Above the speed of the mean EMF constant (the old estimate).
+        double kMean = Enumerable.Range(0, n).Where(j => on[j]).Average(j => k[j]);
+        Assert.True(w0 > v / kMean);
+    }
+
     // Engine level: generator power balance and a motor that slows down under the no-load speed.
     [Theory]
     [InlineData("crank")]

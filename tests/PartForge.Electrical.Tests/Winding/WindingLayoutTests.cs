@@ -4,7 +4,7 @@ namespace PartForge.Electrical.Tests.Winding;
 
 public class WindingLayoutTests
 {
-    // Source: REFERENCE.md section 3 [calc, matches Cros and Viarouge 2002 / Bianchi and Dai Pre 2006 tables]:
+    // Source: docs/physics.md §5 [computed, matches Cros and Viarouge 2002 / Bianchi and Dai Pre 2006 tables]:
     // kw1 for concentrated double-layer windings.
     [Theory]
     [InlineData(9, 12, 0.8660)]

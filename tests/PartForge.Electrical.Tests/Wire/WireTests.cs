@@ -4,7 +4,7 @@ namespace PartForge.Electrical.Tests.Wire;
 
 public class WireTests
 {
-    // Source: ASTM B258 (AWG formula d = 0.127 mm x 92^((36 - n)/39)); values from REFERENCE.md section 1, "d formula mm".
+    // Source: ASTM B258 (AWG formula d = 0.127 mm x 92^((36 - n)/39)); values computed from the formula (docs/physics.md §1).
     [Theory]
     [InlineData(20, 0.81182)]
     [InlineData(24, 0.51056)]
@@ -17,7 +17,7 @@ public class WireTests
     public void AwgFormulaDiameter(int awg, double mm) => Assert.Equal(mm, WireGauge.AwgDiameterMm(awg), 5);
 
     // Source: ASTM B258 published tables (d rounded to 0.0001 in) and IEC 60028 resistivity 1/58 ohm mm^2/m:
-    // REFERENCE.md section 1, "ohm/m at 20 C (table d)" and "(formula d)".
+    // docs/physics.md §1, resistance from the table diameter and from the formula diameter.
     [Theory]
     [InlineData(20, 0.0320, 0.03323, 0.03331)]
     [InlineData(24, 0.0201, 0.08422, 0.08422)]
@@ -34,7 +34,7 @@ public class WireTests
         Assert.Equal(ohmFormula, Copper.OhmPerMetre20(WireGauge.AwgDiameterMm(awg)), ohmFormula * 1.5e-3);
     }
 
-    // Source: a NEMA-based magnet-wire table, ohm per 1000 ft at 20 C (REFERENCE.md section 1 cross-check): it
+    // Source: a NEMA-based magnet-wire table, ohm per 1000 ft at 20 C (docs/physics.md §1): it
     // matches the rounded table diameter.
     [Theory]
     [InlineData(20, 10.13)]
@@ -46,12 +46,12 @@ public class WireTests
     public void NemaOhmPer1000Ft(int awg, double ohmPerKft) =>
         Assert.Equal(ohmPerKft, Copper.OhmPerMetre20(WireGauge.AwgTableDiameterMm(awg)) * 304.8, ohmPerKft * 2e-3);
 
-    // Source: IEC 60028 R(T) = R20 (1 + 0.00393 (T - 20)); REFERENCE.md: AWG 30 at 80 C = 0.4205 ohm/m (table diameter).
+    // Source: IEC 60028 R(T) = R20 (1 + 0.00393 (T - 20)); computed: AWG 30 at 80 C = 0.4205 ohm/m (table diameter).
     [Fact]
     public void Awg30At80C() =>
         Assert.Equal(0.4205, Copper.AtTemperature(Copper.OhmPerMetre20(WireGauge.AwgTableDiameterMm(30)), 80), 4);
 
-    // Source: IEC 60028 density 8.89 g/cm^3; REFERENCE.md section 1, g/m column (formula diameter).
+    // Source: IEC 60028 density 8.89 g/cm^3; mass per metre from the formula diameter (docs/physics.md §1).
     [Theory]
     [InlineData(20, 4.602)]
     [InlineData(24, 1.820)]
@@ -60,7 +60,7 @@ public class WireTests
     [InlineData(42, 0.02801)]
     public void GramsPerMetre(int awg, double g) => Assert.Equal(g, Copper.GramsPerMetre(WireGauge.AwgDiameterMm(awg)), g * 1e-3);
 
-    // Source: IEC 60317-0-1 maximum overall diameters, grades 1/2/3 (REFERENCE.md table, via a national adoption table).
+    // Source: IEC 60317-0-1 maximum overall diameters, grades 1/2/3 (via a national adoption table; docs/physics.md §1).
     [Theory]
     [InlineData(0.100, 0.117, 0.125, 0.132)]
     [InlineData(0.125, 0.144, 0.154, 0.163)]
@@ -77,7 +77,7 @@ public class WireTests
         Assert.False(WireSpec.Of(nominal, 2).OverallIsApproximate);
     }
 
-    // Source: IEC 60317-0-1 at 0.200 mm, grade 1 0.226, grade 2 0.239 (REFERENCE.md, from memory): linear interpolation
+    // Source: IEC 60317-0-1 at 0.200 mm, grade 1 0.226, grade 2 0.239 (from memory; docs/physics.md §1): linear interpolation
     // between the 0.160 and 0.254 rows is an approximation, within 0.002 mm of those values.
     [Fact]
     public void InterpolationBetweenRowsIsCloseAndFlagged()
@@ -107,11 +107,11 @@ public class WireTests
         }
     }
 
-    // Fact of the trade (REFERENCE.md): AWG 42 is about a human hair, ~0.063 mm.
+    // Fact of the trade (common practice): AWG 42 is about a human hair, ~0.063 mm.
     [Fact]
     public void Awg42IsAboutAHair() => Assert.InRange(WireGauge.AwgDiameterMm(42), 0.060, 0.066);
 
-    // Geometry: hexagonal packing pi/(2 sqrt 3) = 0.9069 times (d/D)^2 (REFERENCE.md section 3, packing).
+    // Geometry: hexagonal packing pi/(2 sqrt 3) = 0.9069 times (d/D)^2 (docs/physics.md §2).
     [Fact]
     public void HexagonalFillLimit()
     {

@@ -52,15 +52,15 @@ public class BomCsvTests
     [InlineData(4.2, "M3", "coarse or looser")]
     public void Picks_the_largest_bolt_that_passes_the_hole(double hole, string size, string series)
     {
-        var r = ClearanceHoles.ForHole(hole);
+        var r = PartForge.Design.Hardware.MetricThreads.ForHole(hole);
         Assert.NotNull(r);
-        Assert.Equal(size, r.Value.Size);
+        Assert.Equal(size, r.Value.Thread.Size);
         Assert.Equal(series, r.Value.Series);
     }
 
     [Fact]
     public void A_hole_smaller_than_the_smallest_clearance_takes_no_bolt()
     {
-        Assert.Null(ClearanceHoles.ForHole(1.5));
+        Assert.Null(PartForge.Design.Hardware.MetricThreads.ForHole(1.5));
     }
 }

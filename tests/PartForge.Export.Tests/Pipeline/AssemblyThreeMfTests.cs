@@ -87,11 +87,14 @@ public sealed class AssemblyThreeMfTests : IDisposable
         return (meshes, faces, Z("Minimum point"), Z("Maximum point"));
     }
 
+    private static string[] Plates(int n) => Enumerable.Range(1, n).Select(k => $"wind-duo-plate-{k}.3mf").ToArray();
+
     [Fact]
     public void EveryCopyIsItsOwnNamedClosedObject()
     {
         var r = Build(WindDuo(), "a");
-        Assert.Equal(["wind-duo.3mf", "wind-duo-assembly.3mf"], r.Written);
+        // The print plates (four on the default 220 mm bed: each rotor, the stator, the twelve formers) come first.
+        Assert.Equal(["wind-duo.3mf", .. Plates(4), "wind-duo-assembly.3mf", "wind-duo-manifest.json"], r.Written);
         var set = r.Evaluation!.Parts!;
         var (objects, items) = ReadModel(Path.Combine(r.OutputFolder!, "wind-duo-assembly.3mf"));
 
@@ -249,11 +252,11 @@ public sealed class AssemblyThreeMfTests : IDisposable
     {
         // A subset of the parts gives no assembly; naming every part is the whole machine.
         var some = Build(WindDuo(), "some", "3mf,json", "rotor-front,former");
-        Assert.Equal(["wind-duo.3mf", "wind-duo-results.json"], some.Written);
+        Assert.Equal(["wind-duo.3mf", .. Plates(2), "wind-duo-results.json", "wind-duo-manifest.json"], some.Written);
 
         var names = string.Join(",", some.Evaluation!.Parts!.Parts.Select(p => p.Name));
         var all = Build(WindDuo(), "all", "3mf,json", names);
-        Assert.Equal(["wind-duo.3mf", "wind-duo-assembly.3mf", "wind-duo-results.json"], all.Written);
+        Assert.Equal(["wind-duo.3mf", .. Plates(4), "wind-duo-assembly.3mf", "wind-duo-results.json", "wind-duo-manifest.json"], all.Written);
         using var doc = JsonDocument.Parse(File.ReadAllText(Path.Combine(all.OutputFolder!, "wind-duo-results.json")));
         foreach (var p in doc.RootElement.GetProperty("parts").EnumerateArray())
             Assert.Contains("wind-duo-assembly.3mf", p.GetProperty("files").EnumerateArray().Select(f => f.GetString()));

@@ -26,7 +26,7 @@ public sealed class BuildPipelineTests : IDisposable
     {
         var r = Build("wind-duo", "stl", "rotor-front");
         Assert.Equal(PipelineStatus.Ok, r.Status);
-        Assert.Equal(["wind-duo-rotor-front.stl"], r.Written);
+        Assert.Equal(["wind-duo-rotor-front.stl", "wind-duo-manifest.json"], r.Written);
         foreach (var p in r.Evaluation!.Parts!.Parts) Assert.Equal(p.Name == "rotor-front", p.MeshMade);
         // The results document is not written, so it carries no measurements.
         Assert.All(r.Results!.Parts, e => Assert.Equal(0, e.Triangles));
@@ -57,10 +57,10 @@ public sealed class BuildPipelineTests : IDisposable
     }
 
     /// <summary>
-    /// The reference rotor R2 of the shared measurement notes (OD 400, t 10, bore 25, 64 pockets D15.2 x 6 deep
+    /// The reference rotor R2 (docs/physics.md §9) (OD 400, t 10, bore 25, 64 pockets D15.2 x 6 deep
     /// on r 180, 8 holes D6.6 on a 60 circle, e = 0.0005): a general-purpose CSG mesh library gives 82,996
-    /// triangles for it (../shared/MEASURED.md). The whole build of the design around it must not give more,
-    /// and its volume must be the true volume with circles (1,179,311.3 mm^3, same notes) less the chordal
+    /// triangles for it (its result for the same rotor, recorded when the check was written). The whole build of the design around it must not give more,
+    /// and its volume must be the true volume with circles (1,179,311.3 mm^3, computed from the circles) less the chordal
     /// error: outer rim vertices lie on the circle (less material), holes are circumscribed (less material),
     /// so the mesh is below the true volume by at most the polygons' area loss.
     /// </summary>

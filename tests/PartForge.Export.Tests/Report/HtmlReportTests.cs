@@ -161,7 +161,12 @@ public class HtmlReportTests
     {
         var ev = Pipeline.Evaluate("pulse-sculpture");
         string html = HtmlReport.Render(ReportFiles.InputOf(ev, false));
-        Assert.DoesNotContain("<script", html);
+        // Two scripts only: the 3D view's scene data and the project's own viewer code, neither naming a URL.
+        var scripts = Regex.Matches(html, "<script[^>]*>(.*?)</script>", RegexOptions.Singleline).ToList();
+        Assert.Equal(2, scripts.Count);
+        Assert.Equal(Viewer3d.Script, scripts[1].Groups[1].Value.Trim('\n'), StringComparer.Ordinal);
+        Assert.DoesNotMatch("https?:|fetch\\(|XMLHttpRequest|import\\(|WebSocket|EventSource", Viewer3d.Script);
+        Assert.DoesNotMatch("https?:", scripts[0].Groups[1].Value);
         Assert.DoesNotMatch("(src|href)=\"(https?:)?//", html);
         Assert.DoesNotContain("@import", html);
         foreach (var (title, _) in Cautions.All) Assert.Contains(title, html);

@@ -10,7 +10,7 @@ namespace PartForge.Formats.Tests.Stl;
 /// <summary>
 /// Our STL files read by independent readers: Debian's admesh (facet connectivity, "Original" column) and
 /// numpy-stl under /usr/bin/python3 (volume by get_mass_properties). numpy-stl's is_closed() is not used: it
-/// is unreliable on float32 (see the shared measurement notes); closedness is checked by exact edge pairing.
+/// is unreliable on float32 (found when these checks were written); closedness is checked by exact edge pairing.
 /// </summary>
 public class StlReferenceReaderTests
 {

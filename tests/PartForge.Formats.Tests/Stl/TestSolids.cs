@@ -6,7 +6,7 @@ using PartForge.Geometry.Solids;
 
 namespace PartForge.Formats.Tests.Stl;
 
-/// <summary>Solids for the writer tests, built here from profiles (reference rotor R1 of the shared notes, and random plates).</summary>
+/// <summary>Solids for the writer tests, built here from profiles (reference rotor R1, docs/physics.md §9, and random plates).</summary>
 public static class TestSolids
 {
     public static readonly Precision R1Precision = Precision.FromChordalTolerance(0.005);

@@ -236,7 +236,7 @@ public class ThreeMfWriterTests
     [Fact]
     public void AssimpReadsOneMeshPerObject()
     {
-        // Independent reader: assimp-utils (`assimp info`); lenient (see MEASURED.md), hence the XML checks above.
+        // Independent reader: assimp-utils (`assimp info`); lenient (it accepted malformed files when this check was written), hence the XML checks above.
         var objects = new[]
         {
             ThreeMfObject.At("cylinder", SampleMeshes.Cylinder(10, 5, 64)),

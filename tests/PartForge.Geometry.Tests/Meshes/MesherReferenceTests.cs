@@ -3,7 +3,7 @@ using PartForge.Geometry.Meshes;
 namespace PartForge.Geometry.Tests.Meshes;
 
 /// <summary>
-/// Reference rotors R1 and R2 (shared measurement notes): volume against the true-circle geometry,
+/// Reference rotors R1 and R2 (docs/physics.md §9): volume against the true-circle geometry,
 /// V = pi r^2 h per cylinder (Source: volume of a right circular cylinder), and the true volumes listed there
 /// (R1 79,734.25 mm^3, R2 1,179,311.3 mm^3); genus = through holes (Euler-Poincare: chi = 2 - 2g).
 /// </summary>

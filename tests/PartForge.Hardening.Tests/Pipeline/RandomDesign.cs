@@ -13,7 +13,7 @@ public sealed record RandomDesign(string Layout, string MagnetShape, string Coil
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
-    // Coil/pole combinations whose winding factors are published (REFERENCE.md, section on winding factors)
+    // Coil/pole combinations whose winding factors are published (docs/physics.md §5)
     // for three phases; for one phase, coils equal to the poles or half of them (pulse-drive practice).
     private static readonly (int Coils, int Poles)[] ThreePhase = [(9, 12), (12, 16), (12, 10), (12, 14), (9, 8)];
     private static readonly (int Coils, int Poles)[] OnePhase = [(4, 8), (8, 8), (6, 6), (6, 12)];

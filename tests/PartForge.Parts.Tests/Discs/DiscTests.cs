@@ -18,8 +18,9 @@ public class DiscTests
         // Block magnets 20 x 10 on r 60: outer corner at sqrt(70^2 + 5^2); plus max(1, thickness / 2) = 2.5.
         double r = Math.Sqrt(70 * 70 + 5 * 5) + 2.5;
         Assert.Equal(r, bi.Feature("rim").Contour.Circle!.Value.Radius, 9);
-        double v = (Geo.Circle(r) - Geo.Circle(5) - 6 * Geo.Circle(2.25)) * 2;
-        double bound = TestDesigns.Tol * 2 * Math.PI * (r + 5 + 6 * 2.25) * 2;
+        // The bore, 6 bolt holes and 6 jacking-screw clearance holes (the same hole size, between the bolts).
+        double v = (Geo.Circle(r) - Geo.Circle(5) - 12 * Geo.Circle(2.25)) * 2;
+        double bound = TestDesigns.Tol * 2 * Math.PI * (r + 5 + 12 * 2.25) * 2;
         Assert.InRange(bi.VolumeMm3, v - bound, v + bound);
         // Steel 7.85 g/cm^3 (EN 1993-1-1 3.2.6 design density, from memory).
         Assert.Equal(7.85 * bi.VolumeMm3 / 1000, bi.MassG, 9);
@@ -33,7 +34,7 @@ public class DiscTests
         }
         var m = MeshValidator.Validate(bi.Mesh);
         Assert.True(m.IsValid, m.ToString());
-        Assert.Equal(1 + 6, m.Genus);
+        Assert.Equal(1 + 6 + 6, m.Genus); // bore, bolts, jacking-screw holes
     }
 
     [Fact]

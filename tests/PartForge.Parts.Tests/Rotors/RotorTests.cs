@@ -173,7 +173,8 @@ public class RotorTests
     {
         var single = Single().Get(PartForge.Design.Parts.PartId.Rotor);
         Check(single, 1 + 4);                 // bore + 4 bolt holes; pockets and dots are blind
-        foreach (var id in new[] { PartForge.Design.Parts.PartId.RotorFront, PartForge.Design.Parts.PartId.RotorBack }) Check(Dual().Get(id), 1 + 6);
+        Check(Dual().Get(PartForge.Design.Parts.PartId.RotorBack), 1 + 6);
+        Check(Dual().Get(PartForge.Design.Parts.PartId.RotorFront), 1 + 6 + 6); // and a jacking-screw hole between each pair of bolts
         Check(DualStator().Get(PartForge.Design.Parts.PartId.Rotor), 1 + 3 + 8); // through pockets
     }
 
@@ -215,5 +216,46 @@ public class RotorTests
         Assert.Equal(4, rotor.Marks.Count);          // the dots become engraving
         Assert.Single(rotor.Solid.Layers);            // a single-thickness sheet
         Assert.Equal(1180, rotor.Material.DensityKgM3);
+    }
+
+    /// <summary>
+    /// The last rotor of a dual-rotor machine carries a jacking-screw hole and a hex nut trap between each pair of
+    /// bolt holes; the other rotor has none. Trap across flats = ISO 4032 M4 nut s 7 mm (from memory) + print_xy +
+    /// 0.1; depth = nut height m 3.2 mm + 0.2. Checked here: the traps keep a minimum wall from every pocket and bolt
+    /// hole (exact distances between the contours), and the solid's volume falls by exactly the holes and traps
+    /// (hex area (sqrt 3 / 2) s^2, computed here) against the rotor without them.
+    /// </summary>
+    [Fact]
+    public void LastRotorHasJackingHolesAndNutTrapsClearOfPocketsAndBolts()
+    {
+        var d = TestDesigns.DualRotor();
+        var m = PartForge.Design.Machines.MachineModel.From(d);
+        var set = Dual();
+        var front = set.Get(PartForge.Design.Parts.PartId.RotorFront);
+        var back = set.Get(PartForge.Design.Parts.PartId.RotorBack);
+        Assert.Empty(back.FeaturesOf(FeatureKind.JackHole));
+        var holes = front.FeaturesOf(FeatureKind.JackHole).ToList();
+        var traps = front.FeaturesOf(FeatureKind.NutTrap).ToList();
+        var bolts = front.FeaturesOf(FeatureKind.BoltHole).ToList();
+        Assert.Equal(bolts.Count, holes.Count);
+        Assert.Equal(bolts.Count, traps.Count);
+        double s = 7 + m.Tolerances.PrintXyMm + 0.1;
+        double wall = PartForge.Parts.Shapes.DesignGeometry.MinWallMm(m);
+        foreach (var t in traps)
+        {
+            Assert.Equal(m.Rotor.ThicknessMm, t.Z1Mm, 9);
+            Assert.Equal(3.2 + 0.2, t.Z1Mm - t.Z0Mm, 9);
+            var pts = PartForge.Geometry.Exact.Exact2D.SegmentsOf(t.Contour).Select(g => g.Start).ToArray();
+            Assert.Equal(6, pts.Length);
+            Assert.Equal(s / Math.Sqrt(3), (pts[0] - t.Position).Length, 9);
+            foreach (var p in front.FeaturesOf(FeatureKind.MagnetPocket))
+                Assert.True(PartForge.Geometry.Exact.Exact2D.ContourContour(t.Contour, p.Contour) >= wall - 1e-9);
+            foreach (var b in bolts)
+                Assert.True(PartForge.Geometry.Exact.Exact2D.ContourContour(t.Contour, b.Contour) >= wall - 1e-9);
+        }
+        double hole = holes[0].Contour.Circle!.Value.Radius;
+        double removed = holes.Count * (Math.PI * hole * hole * (m.Rotor.ThicknessMm - 3.4) + Math.Sqrt(3) / 2 * s * s * 3.4);
+        double frontMinusBack = back.VolumeMm3 - front.VolumeMm3;
+        Assert.True(Math.Abs(frontMinusBack - removed) < 0.01 * removed, $"{frontMinusBack} vs {removed}");
     }
 }
