@@ -58,9 +58,14 @@ public static class OperatingPoints
         // No-load speed: where this model's mean torque falls to zero. The current of each sample is clamped at 0
         // (no reverse current through the switch), so the torque is not zero at v / mean(k) but later: found by
         // bisection between 0 and v / (smallest positive k), beyond which no sample drives a positive current into a
-        // positive k.
+        // positive k. A conduction window that ends where the EMF crosses zero has samples with k close to 0, which
+        // would put that bound (and the zero) at an absurd speed while their torque is negligible: samples with k
+        // below 0.1 % of the largest are left out of the bound, so the speed found is where the mean torque is zero
+        // or below about 0.1 % of the largest sample's share of the stall torque.
+        double kMax = 0;
+        for (int i = 0; i < n; i++) if (conducting[i]) kMax = Math.Max(kMax, conductingEmfPerRadS[i]);
         double kMinPos = double.PositiveInfinity;
-        for (int i = 0; i < n; i++) if (conducting[i] && conductingEmfPerRadS[i] > 0) kMinPos = Math.Min(kMinPos, conductingEmfPerRadS[i]);
+        for (int i = 0; i < n; i++) if (conducting[i] && conductingEmfPerRadS[i] > 1e-3 * kMax) kMinPos = Math.Min(kMinPos, conductingEmfPerRadS[i]);
         double w0 = 0;
         if (stall.tAvg > 0 && double.IsFinite(kMinPos) && pathOhm > 0)
         {

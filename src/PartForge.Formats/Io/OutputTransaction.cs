@@ -24,8 +24,8 @@ namespace PartForge.Formats.Io;
 /// <see cref="Begin(string, string?, CancellationToken)"/> removes such leftovers of earlier, interrupted runs,
 /// and also those of <see cref="AtomicFile"/> (<c>.&lt;name&gt;.&lt;16 hex digits&gt;.partial</c>); nothing else
 /// in the folder is touched. Two builds into one folder would remove each other's temporaries, so a
-/// transaction holds the folder's lock file <c>.partforge.lock</c> (an advisory lock; the empty file stays
-/// in the folder) from Begin to Commit or Rollback, and a second one is refused with
+/// transaction holds the folder's lock file <c>.partforge.lock</c> (an advisory lock; the file is removed
+/// again when the transaction ends) from Begin to Commit or Rollback, and a second one is refused with
 /// <see cref="OutputProblem.Busy"/>.
 /// </para>
 /// <para>
@@ -434,9 +434,20 @@ public sealed partial class OutputTransaction : IDisposable
     /// Opens the folder's lock file for this transaction alone. FileShare.None is an advisory whole-file lock
     /// on Unix (flock; a held lock fails with EWOULDBLOCK) and a sharing lock on Windows (a sharing
     /// violation); the caller's classifier calls either <see cref="OutputProblem.Busy"/>.
+    /// The lock file is removed again when the transaction ends (unlinked while still held, then closed), so
+    /// a build leaves nothing of its own beside the output set. A second build that opened the file just before
+    /// the unlink finds, once it holds the lock, that its file is gone and takes a fresh one.
     /// </summary>
-    private static FileStream TakeLock(string full) =>
-        new(Path.Combine(full, LockFileName), FileMode.OpenOrCreate, FileAccess.ReadWrite, FileShare.None, 1);
+    private static FileStream TakeLock(string full)
+    {
+        string path = Path.Combine(full, LockFileName);
+        for (int attempt = 0; ; attempt++)
+        {
+            var fs = new FileStream(path, FileMode.OpenOrCreate, FileAccess.ReadWrite, FileShare.None, 1);
+            if (File.Exists(path) || attempt >= 4) return fs;
+            fs.Dispose();
+        }
+    }
 
     /// <summary>Removes leftover temporaries of earlier runs (our names only, plain files and links, this folder only).</summary>
     private static IReadOnlyList<string> RemoveStale(string full, string shown)
@@ -462,6 +473,17 @@ public sealed partial class OutputTransaction : IDisposable
 
     private void ReleaseLock()
     {
+        if (_lock != null)
+        {
+            try
+            {
+                File.Delete(_lock.Name);
+            }
+            catch (Exception ex) when (OutputErrors.IsFileSystem(ex))
+            {
+                // A lock file that cannot be removed (read-only folder after the set was written) stays, empty.
+            }
+        }
         _lock?.Dispose();
         _lock = null;
     }

@@ -20,7 +20,7 @@ public class BuildCommandTests
         Assert.True(r.ExitCode == 0, r.ToString());
         Assert.Matches(@"^timings: load [0-9.]+ ms, budget [0-9.]+ ms, electrical [0-9.]+ ms, parts [0-9.]+ ms, checks [0-9.]+ ms, mesh [0-9.]+ ms, previews [0-9.]+ ms, write [0-9.]+ ms; process [0-9]+ ms so far", r.Stderr.Trim());
         Assert.DoesNotContain("timings", r.Stdout);
-        Assert.Equal([".partforge.lock", "crank-bench-manifest.json", "crank-bench-rotor.stl"], Directory.GetFiles(w.File("out")).Select(Path.GetFileName).Order(StringComparer.Ordinal).ToArray());
+        Assert.Equal(["crank-bench-manifest.json", "crank-bench-rotor.stl"], Directory.GetFiles(w.File("out")).Select(Path.GetFileName).Order(StringComparer.Ordinal).ToArray());
     }
 
     [Fact]
@@ -46,7 +46,7 @@ public class BuildCommandTests
         var root = doc.RootElement;
         Assert.Equal("partforge-results/1", root.GetProperty("format").GetString());
         Assert.Equal("pass", root.GetProperty("summary").GetProperty("status").GetString());
-        var listed = new SortedSet<string>(StringComparer.Ordinal) { "crank-bench-results.json", "crank-bench-report.html", "crank-bench-bom.csv", "crank-bench-assembly.png", "crank-bench-manifest.json", ".partforge.lock", "notes.txt" };
+        var listed = new SortedSet<string>(StringComparer.Ordinal) { "crank-bench-results.json", "crank-bench-report.html", "crank-bench-bom.csv", "crank-bench-assembly.png", "crank-bench-manifest.json", "notes.txt" };
         foreach (var p in root.GetProperty("parts").EnumerateArray())
         {
             Assert.True(p.GetProperty("volume_mm3").GetDouble() > 0);
@@ -114,7 +114,7 @@ public class BuildCommandTests
         w.Write("d.yaml", Crank);
         var r = PartforgeProcess.Run(w.Path, "build", "d.yaml", "-o", "sel", "--formats", "stl", "--parts", "rotor");
         Assert.Equal(0, r.ExitCode);
-        Assert.Equal([".partforge.lock", "crank-bench-manifest.json", "crank-bench-rotor.stl"], Directory.GetFiles(w.File("sel")).Select(Path.GetFileName).Order(StringComparer.Ordinal).ToArray());
+        Assert.Equal(["crank-bench-manifest.json", "crank-bench-rotor.stl"], Directory.GetFiles(w.File("sel")).Select(Path.GetFileName).Order(StringComparer.Ordinal).ToArray());
         var noPart = PartforgeProcess.Run(w.Path, "build", "d.yaml", "-o", "sel", "--parts", "rotor-front");
         Assert.Equal(2, noPart.ExitCode);
         Assert.Contains("no part 'rotor-front'", Assert.Single(noPart.StderrLines));
@@ -129,6 +129,6 @@ public class BuildCommandTests
         Assert.Contains("symbolic link", Assert.Single(link.StderrLines));
         Assert.Equal("precious", File.ReadAllText(outside));
         // Only the link (and the folder's lock file, taken when the build began) are there.
-        Assert.Equal(["crank-bench-rotor.stl"], Directory.GetFileSystemEntries(w.File("linked")).Select(Path.GetFileName).Where(n => n != ".partforge.lock").ToArray());
+        Assert.Equal(["crank-bench-rotor.stl"], Directory.GetFileSystemEntries(w.File("linked")).Select(Path.GetFileName).ToArray());
     }
 }

@@ -69,6 +69,26 @@ public class OperatingPointsTests
         Assert.True(w0 > v / kMean);
     }
 
+    // A window that closes where the EMF crosses zero holds a sample with k near 0; its zero-torque bound v / k is
+    // absurd (it gave 7e17 rpm) while its torque is negligible. The speed reported is finite, the torque there is
+    // below 0.1 % of the stall torque and still positive just below it.
+    [Fact]
+    public void A_sample_at_the_emf_zero_does_not_send_the_no_load_speed_to_infinity()
+    {
+        int n = 360;
+        var k = Enumerable.Range(0, n).Select(j => 0.05 * Math.Sin(2 * Math.PI * j / n)).ToArray();
+        k[1] = 0.05e-12;
+        var on = Enumerable.Range(0, n).Select(j => j < n / 2).ToArray();
+        var mp = OperatingPoints.Motor("pulse", 12, 1.4, 2, k, on, 1000, 1, 0.1);
+        double v = 10.6;
+        double Torque(double w) => Enumerable.Range(0, n).Where(j => on[j]).Sum(j => Math.Max(0, (v - k[j] * w) / 2) * k[j]) / n;
+        double w0 = mp.NoLoadRpm * 2 * Math.PI / 60;
+        double kMean = Enumerable.Range(0, n).Where(j => on[j]).Average(j => k[j]);
+        Assert.InRange(w0, v / kMean, 100 * v / kMean);
+        Assert.True(Torque(w0) < 1e-3 * mp.StallTorqueNm, $"torque at the no-load speed {Torque(w0)}");
+        Assert.True(Torque(0.999 * w0) > 0);
+    }
+
     // Engine level: generator power balance and a motor that slows down under the no-load speed.
     [Theory]
     [InlineData("crank")]

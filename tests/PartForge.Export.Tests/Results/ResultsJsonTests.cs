@@ -30,7 +30,7 @@ public class ResultsJsonTests
     public void Keys_come_in_the_contract_order()
     {
         using var j = JsonDocument.Parse(ResultsJson.Serialize(Doc()));
-        Assert.Equal(["format", "design", "summary", "electrical", "checks", "parts", "operating", "mechanics", "bom"], j.RootElement.EnumerateObject().Select(p => p.Name));
+        Assert.Equal(["format", "design", "summary", "electrical", "checks", "parts", "operating", "mechanics", "bom", "assembly"], j.RootElement.EnumerateObject().Select(p => p.Name));
         // The contract's keys first, in its order; additions after them.
         Assert.Equal(["pole_pairs", "electrical_hz", "magnetic_gap", "winding_factor", "magnet", "coil", "coil_flux_linkage_peak_wb", "phase", "line_emf_rms_v", "ke_v_per_krpm"],
             j.RootElement.GetProperty("electrical").EnumerateObject().Select(p => p.Name).Take(10));
