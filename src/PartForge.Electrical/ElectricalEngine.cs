@@ -6,6 +6,7 @@ using PartForge.Electrical.Field;
 using PartForge.Electrical.Flux;
 using PartForge.Electrical.Operation;
 using PartForge.Electrical.Sensors;
+using PartForge.Electrical.Switching;
 using PartForge.Electrical.Wire;
 using PartForge.Electrical.Winding;
 
@@ -174,6 +175,12 @@ public static class ElectricalEngine
         // Sensor timing: the positive-going zero crossing of each phase's fundamental EMF: p theta + arg K = -90.
         var zeroCross = k.Select(kk => Norm(-90 - kk[0].Phase * 180 / Math.PI)).ToArray();
         var sensors = SensorPlanner.Plan(d.Sensor, d.ElectricalPoles, phases, coil.Outline, coils, zeroCross, diags, !same);
+        var phaseFlux = k.Select((kk, x) => new PhaseFlux(phaseNames[x], series.Orders.Select((n, i) =>
+        {
+            Complex lam = kk[i] / (Complex.ImaginaryOne * n * p);
+            return new FluxTerm(n * p, lam.Real, -lam.Imaginary);
+        }).ToArray())).ToArray();
+        var plan = SwitchingPlanner.Plan(d, field, sensors, phaseFlux, ohmPhHot, lPh * 1e-6);
 
         // Operating points (hot winding).
         var op = d.Operation;
@@ -202,8 +209,22 @@ public static class ElectricalEngine
             double on = zeroCross[0] - d.Sensor.AdvanceElecDeg;
             var kc = HarmonicSynth.Sample(k[0], series.Orders, fine);
             var cond = new bool[fine];
-            for (int i = 0; i < fine; i++) cond[i] = Norm(360.0 * i / fine - on) < 180;
-            mot = OperatingPoints.Motor("pulse", op.SupplyVoltageV, op.SwitchDropV, ohmPhHot, kc, cond, d.RatedRpm, ratio, wire.CopperAreaMm2);
+            if (plan is not null)
+            {
+                // The windows the sensor really gives (SwitchingPlanner): the conducting path's EMF carries the drive's sign.
+                for (int i = 0; i < fine; i++)
+                {
+                    int sg = plan.SignAt(0, 360.0 * i / fine / p);
+                    cond[i] = sg != 0;
+                    kc[i] *= sg;
+                }
+                mot = OperatingPoints.Motor("pulse", plan.SupplyV, plan.SwitchDropsV, plan.PathResistanceOhm, kc, cond, d.RatedRpm, ratio, wire.CopperAreaMm2);
+            }
+            else
+            {
+                for (int i = 0; i < fine; i++) cond[i] = Norm(360.0 * i / fine - on) < 180;
+                mot = OperatingPoints.Motor("pulse", op.SupplyVoltageV, op.SwitchDropV, ohmPhHot, kc, cond, d.RatedRpm, ratio, wire.CopperAreaMm2);
+            }
         }
 
         // Only the role's operating points (machine.role; never inferred from the sensor).
@@ -237,6 +258,8 @@ public static class ElectricalEngine
             FluxLinkage = series,
             Winding = layout,
             Sensors = sensors,
+            Switching = plan,
+            PhaseFlux = phaseFlux,
             Generator = gen,
             Motor = mot,
             Waveforms = waves,

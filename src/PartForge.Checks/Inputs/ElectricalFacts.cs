@@ -42,6 +42,9 @@ public sealed record ElectricalFacts
     /// <summary>Errors and warnings of the electrical engine: (id, error?, key, message).</summary>
     public IReadOnlyList<(string Id, bool IsError, string Key, string Message)> Diagnostics { get; init; } = Array.Empty<(string, bool, string, string)>();
 
+    /// <summary>The drive as the sensors switch it (null: no motor role or no sensor).</summary>
+    public PartForge.Electrical.Switching.SwitchingPlan? Switching { get; init; }
+
     /// <summary>Flux in each steel face behind the magnets (the electrical engine's <c>BackIron</c>).</summary>
     public IReadOnlyList<PartForge.Electrical.Field.BackIronFluxResult> BackIron { get; init; } = Array.Empty<PartForge.Electrical.Field.BackIronFluxResult>();
 }

@@ -151,6 +151,48 @@ internal static class DesignRules
         if (sn.Kind != "none" && sn.Count == 3 && m.Phases != 3)
             ctx.Add(ctx.AtKey("sensor.count", "is not allowed with 1 phase: 3 sensors time 3 phases", "3", "1 (or sensor.kind: none)", fallbacks: "sensor.kind"));
 
+        double op = sn.Operate ?? Machines.SensorSpec.DefaultOperateMt(sn.Kind == "reed" ? Machines.SensorKind.Reed : Machines.SensorKind.Hall);
+        double rel = sn.Release ?? Machines.SensorSpec.DefaultReleaseMt(sn.Kind == "reed" ? Machines.SensorKind.Reed : Machines.SensorKind.Hall);
+        if (sn.Kind != "none" && !(rel < op))
+            ctx.Add(ctx.AtKey(ctx.Has("sensor.release") ? "sensor.release" : "sensor.operate", $"leaves no hysteresis: sensor.release ({F(rel)} mT) must be below sensor.operate ({F(op)} mT)",
+                F(ctx.Has("sensor.release") ? rel : op), "release below operate", "lower sensor.release", "sensor"));
+        if (sn.Kind == "reed" && (op <= 0 || rel < 0))
+            ctx.Add(ctx.AtKey(op <= 0 ? "sensor.operate" : "sensor.release", "must not be negative for a reed: a reed switch closes on the size of the field, either pole", F(op <= 0 ? op : rel), "more than 0 (operate), 0 or more (release)", fallbacks: "sensor"));
+
+        // Drive: switching that fits the phases and the sensor.
+        var dv = d.Drive;
+        string switching = dv.Switching ?? (m.Phases == 3 ? "six-step" : "unipolar");
+        if (switching == "six-step" && m.Phases != 3)
+            ctx.Add(ctx.AtKey("drive.switching", "needs 3 phases", "six-step", "unipolar or bipolar for 1 phase", "set drive.switching: unipolar or bipolar (or machine.phases: 3)"));
+        if (switching != "six-step" && m.Phases == 3 && ctx.Has("drive.switching"))
+            ctx.Add(ctx.AtKey("drive.switching", "does not fit 3 phases", switching, "six-step for 3 phases", "set drive.switching: six-step"));
+        if (switching == "six-step" && sn.Kind != "hall")
+            ctx.Add(ctx.AtKey("sensor.kind", "cannot time a six-step drive: it needs three Hall sensors", sn.Kind, "hall", "set sensor.kind: hall", "drive.switching"));
+        if (switching == "six-step" && dv.Freewheel == "none")
+            ctx.Add(ctx.AtKey("drive.freewheel", "cannot be none with six-step: the bridge's diodes carry the commutating current", "none", "diode", "set drive.freewheel: diode"));
+        if (switching == "bipolar" && sn.Kind != "hall")
+            ctx.Add(ctx.AtKey("drive.switching", $"needs a sensor that tells the poles apart; a {sn.Kind} sensor does not", "bipolar", "unipolar with this sensor, or sensor.kind: hall", "set sensor.kind: hall (a latch: sensor.operate 3, sensor.release -3) or drive.switching: unipolar", "sensor.kind"));
+
+        // Storage and load.
+        var st = d.Storage;
+        if (st.Kind == "capacitor")
+        {
+            if (st.Capacitance is null) ctx.Add(ctx.AtKey("storage.capacitance", "is missing; a capacitor store needs its capacitance (F)", fallbacks: "storage"));
+            if (st.RatedVoltage is null) ctx.Add(ctx.AtKey("storage.rated_voltage", "is missing; a capacitor store needs its rated voltage (V)", fallbacks: "storage"));
+            else if (st.StartVoltage > st.RatedVoltage)
+                ctx.Add(ctx.AtKey("storage.start_voltage", $"is above storage.rated_voltage ({F(st.RatedVoltage.Value)})", F(st.StartVoltage), $"at most {F(st.RatedVoltage.Value)}", $"lower storage.start_voltage to {F(st.RatedVoltage.Value)} or less"));
+        }
+        if (st.Kind == "battery" && st.Voltage is null)
+            ctx.Add(ctx.AtKey("storage.voltage", "is missing; a battery store needs its open-circuit voltage (V)", fallbacks: "storage"));
+        foreach (var (key, storeKind) in new[] { ("storage.capacitance", "capacitor"), ("storage.rated_voltage", "capacitor"), ("storage.start_voltage", "capacitor"), ("storage.esr", "capacitor"), ("storage.voltage", "battery"), ("storage.internal_resistance", "battery") })
+            if (ctx.Has(key) && st.Kind != storeKind)
+                ctx.Add(ctx.AtKey(key, $"applies to a {storeKind} store only (storage.kind is {st.Kind})", suggestion: $"remove it or set storage.kind: {storeKind}", fallbacks: "storage.kind"));
+        string rect = d.Load.Rectifier ?? (st.Kind == "none" ? "none" : "bridge");
+        if (rect != "none" && st.Kind == "none")
+            ctx.Add(ctx.AtKey("load.rectifier", "needs a store to charge (storage.kind is none)", rect, "none without a store", "set storage.kind: capacitor or battery, or load.rectifier: none"));
+        if (rect == "none" && st.Kind != "none" && m.Role != "motor")
+            ctx.Add(ctx.AtKey("load.rectifier", "cannot be none when a generator charges a store: AC does not charge it", "none", "half-wave or bridge", "set load.rectifier: bridge"));
+
         // Printer and cutter: one nozzle and one kerf; sheets that go on the bed; spacing that clears the kerf.
         if (d.Printer.Nozzle is { } pn && ctx.Has("process.nozzle") && pn != d.Process.Nozzle)
             ctx.Add(ctx.AtKey("printer.nozzle", $"differs from process.nozzle ({F(d.Process.Nozzle)})", F(pn), "the same nozzle in both, or only one of them", "remove one of the two keys"));

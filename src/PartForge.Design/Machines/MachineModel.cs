@@ -54,6 +54,18 @@ public sealed class MachineModel
     public required ProcessSpec Process { get; init; }
     public required OperationSpec Operation { get; init; }
 
+    /// <summary>The motor drive (<c>drive.*</c>).</summary>
+    public required DriveSpec Drive { get; init; }
+
+    /// <summary>The energy store (<c>storage.*</c>).</summary>
+    public required StorageSpec Storage { get; init; }
+
+    /// <summary>The generator's rectifier (<c>load.*</c>).</summary>
+    public required LoadSpec Load { get; init; }
+
+    /// <summary>Extra inertia and drag (<c>mechanics.*</c>).</summary>
+    public required MechanicsSpec Mechanics { get; init; }
+
     /// <summary>The printer the printed parts are laid out for (<c>printer.*</c>).</summary>
     public required PrinterSpec Printer { get; init; }
 
@@ -151,7 +163,44 @@ public sealed class MachineModel
 
         var sn = d.Sensor;
         var sensorKind = sn.Kind switch { "none" => SensorKind.None, "hall" => SensorKind.Hall, "reed" => SensorKind.Reed, var o => throw Bad("sensor.kind", o) };
-        var sensor = new SensorSpec(sensorKind, sn.Count ?? (phases == 3 ? 3 : 1), sn.AdvanceElec, new SensorBody(sn.Body.Length, sn.Body.Width, sn.Body.Height));
+        var sensor = new SensorSpec(sensorKind, sn.Count ?? (phases == 3 ? 3 : 1), sn.AdvanceElec, new SensorBody(sn.Body.Length, sn.Body.Width, sn.Body.Height))
+        {
+            OperateTesla = (sn.Operate ?? SensorSpec.DefaultOperateMt(sensorKind)) / 1000,
+            ReleaseTesla = (sn.Release ?? SensorSpec.DefaultReleaseMt(sensorKind)) / 1000,
+        };
+        var dv = d.Drive;
+        bool reed = sensorKind == SensorKind.Reed;
+        var drive = new DriveSpec(
+            dv.Switching switch
+            {
+                null => phases == 3 ? SwitchingKind.SixStep : SwitchingKind.Unipolar,
+                "unipolar" => SwitchingKind.Unipolar,
+                "bipolar" => SwitchingKind.Bipolar,
+                "six-step" => SwitchingKind.SixStep,
+                var o => throw Bad("drive.switching", o),
+            },
+            dv.Freewheel switch { "diode" => true, "none" => false, var o => throw Bad("drive.freewheel", o) },
+            DiodeOf(dv.Diode, "drive.diode"),
+            dv.SwitchCurrentRating ?? (reed ? 0.5 : 1.0),
+            dv.SwitchVoltageRating ?? (reed ? 200 : 40),
+            reed ? dv.SwitchPowerRating ?? 10 : null);
+        var st = d.Storage;
+        StorageSpec storage = st.Kind switch
+        {
+            "none" => StorageSpec.None,
+            "capacitor" => new CapacitorStorage(st.Capacitance ?? throw Bad("storage.capacitance", null), st.RatedVoltage ?? throw Bad("storage.rated_voltage", null), st.Esr, st.StartVoltage),
+            "battery" => new BatteryStorage(st.Voltage ?? throw Bad("storage.voltage", null), st.InternalResistance),
+            var o => throw Bad("storage.kind", o),
+        };
+        var load = new LoadSpec(d.Load.Rectifier switch
+        {
+            null => storage is NoStorage ? RectifierKind.None : RectifierKind.Bridge,
+            "none" => RectifierKind.None,
+            "half-wave" => RectifierKind.HalfWave,
+            "bridge" => RectifierKind.Bridge,
+            var o => throw Bad("load.rectifier", o),
+        }, DiodeOf(d.Load.Diode, "load.diode"));
+        var mech = new MechanicsSpec(d.Mechanics.ExtraInertia, d.Mechanics.FrictionTorque, d.Mechanics.ViscousDrag);
 
         var gap = new GapSpec(d.Gap.AirGap, d.Gap.MinRunningGap);
         var tol = new ToleranceSpec(d.Tolerances.PrintXy, d.Tolerances.PrintZ, d.Tolerances.Runout, d.Tolerances.AxialPlay);
@@ -201,6 +250,10 @@ public sealed class MachineModel
             Tolerances = tol,
             Process = process,
             Operation = operation,
+            Drive = drive,
+            Storage = storage,
+            Load = load,
+            Mechanics = mech,
             Printer = printer,
             Cutter = cutter,
             ChordalToleranceMm = d.Mesh.ChordalTolerance,
@@ -217,6 +270,13 @@ public sealed class MachineModel
         PartRole.Former => o.Former,
         PartRole.Stator => o.Stator,
         _ => o.Spacer,
+    };
+
+    private static DiodeKind DiodeOf(string word, string key) => word switch
+    {
+        "silicon" => DiodeKind.Silicon,
+        "schottky" => DiodeKind.Schottky,
+        var o => throw Bad(key, o),
     };
 
     private static Material MaterialOf(string name, string key) => MaterialTable.Find(name) ?? throw Bad(key, name);
