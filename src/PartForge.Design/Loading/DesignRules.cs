@@ -162,15 +162,16 @@ internal static class DesignRules
         // Drive: switching that fits the phases and the sensor.
         var dv = d.Drive;
         string switching = dv.Switching ?? (m.Phases == 3 ? "six-step" : "unipolar");
-        if (switching == "six-step" && m.Phases != 3)
+        bool driven = m.Role != "generator" && sn.Kind != "none"; // a drive switched by its own sensor
+        if (driven && switching == "six-step" && m.Phases != 3)
             ctx.Add(ctx.AtKey("drive.switching", "needs 3 phases", "six-step", "unipolar or bipolar for 1 phase", "set drive.switching: unipolar or bipolar (or machine.phases: 3)"));
-        if (switching != "six-step" && m.Phases == 3 && ctx.Has("drive.switching"))
+        if (driven && switching != "six-step" && m.Phases == 3 && ctx.Has("drive.switching"))
             ctx.Add(ctx.AtKey("drive.switching", "does not fit 3 phases", switching, "six-step for 3 phases", "set drive.switching: six-step"));
-        if (switching == "six-step" && sn.Kind != "hall")
+        if (driven && switching == "six-step" && sn.Kind != "hall")
             ctx.Add(ctx.AtKey("sensor.kind", "cannot time a six-step drive: it needs three Hall sensors", sn.Kind, "hall", "set sensor.kind: hall", "drive.switching"));
-        if (switching == "six-step" && dv.Freewheel == "none")
+        if (driven && switching == "six-step" && dv.Freewheel == "none")
             ctx.Add(ctx.AtKey("drive.freewheel", "cannot be none with six-step: the bridge's diodes carry the commutating current", "none", "diode", "set drive.freewheel: diode"));
-        if (switching == "bipolar" && sn.Kind != "hall")
+        if (driven && switching == "bipolar" && sn.Kind != "hall")
             ctx.Add(ctx.AtKey("drive.switching", $"needs a sensor that tells the poles apart; a {sn.Kind} sensor does not", "bipolar", "unipolar with this sensor, or sensor.kind: hall", "set sensor.kind: hall (a latch: sensor.operate 3, sensor.release -3) or drive.switching: unipolar", "sensor.kind"));
 
         // Storage and load.
