@@ -7,8 +7,7 @@ namespace PartForge.Design.Machines;
 /// <param name="Body">Body size (radial length, tangential width, axial height), mm.</param>
 public sealed record SensorSpec(SensorKind Kind, int Count, double AdvanceElecDeg, SensorBody Body)
 {
-    /// <summary>Field at which the sensor switches on, T, along the machine axis, positive when the facing magnet shows its
-    /// north pole (a reed: pull-in on |B|).</summary>
+    /// <summary>Field at which the sensor switches on, T, along the machine axis, positive toward +z (a reed: pull-in on |B|).</summary>
     public double OperateTesla { get; init; } = DefaultOperateMt(Kind) / 1000;
 
     /// <summary>Field at which it switches off again, T (below <see cref="OperateTesla"/>; a reed: release on |B|).</summary>

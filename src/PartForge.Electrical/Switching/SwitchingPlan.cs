@@ -42,7 +42,7 @@ public sealed record SwitchingPlan
     public required double SensorZMm { get; init; }
     public required double SensorRadiusMm { get; init; }
 
-    /// <summary>Largest and smallest field the first sensor sees over a revolution, T (positive: a north pole faces it).</summary>
+    /// <summary>Largest and smallest field the first sensor sees over a revolution, T (positive along +z).</summary>
     public required double FieldMaxTesla { get; init; }
     public required double FieldMinTesla { get; init; }
 

@@ -8,8 +8,9 @@ namespace PartForge.Electrical.Switching;
 /// <summary>
 /// When the drive really conducts. Each sensor reads the axial field of the magnets (and their back-iron images)
 /// at its sensing point: the centre of its body, in the pocket of the first stator ring on the face toward the
-/// rotor, at the sensor's radius and angle. The field counts positive when the facing magnet shows its north
-/// pole to the sensor. Turning the rotor counter-clockwise (increasing angle) through one electrical period
+/// rotor, at the sensor's radius and angle. The field counts positive along the machine's +z axis (toward the
+/// front), the direction magnet 0 makes in the stator and the one the sensor planner times on; a Hall is fitted
+/// to switch on that direction. Turning the rotor counter-clockwise (increasing angle) through one electrical period
 /// twice, a reed closes when |B| reaches its pull-in and opens when |B| falls below its release (either pole);
 /// a Hall turns on when B reaches its operate point and off when B falls below its release point (a latch has a
 /// negative release). A sensor the planner placed a pole pitch away with its output inverted reads -B.
@@ -113,7 +114,8 @@ public static class SwitchingPlanner
         _ => d.Operation.SupplyVoltageV,
     };
 
-    /// <summary>The sensing point's z (machine frame, mm) and the sign that makes the field positive for a north pole facing it.</summary>
+    /// <summary>The sensing point's z (machine frame, mm) and the sign of the field it reads: +1, the field along the machine's +z axis
+    /// (a Hall is fitted so that it switches on that direction, the one the sensor planner times on).</summary>
     public static (double ZMm, double Sign) SensingPoint(MachineModel d)
     {
         var stack = d.Stack;
@@ -122,7 +124,7 @@ public static class SwitchingPlanner
         bool above = rotors.Any(x => x.ZMin >= ring.ZMax);
         double h = Math.Min(d.Sensor.Body.HeightMm, ring.Thickness);
         // The pocket is in the face toward the rotor (the +z one when rotors are on both sides), as the stator builder cuts it.
-        return above ? (ring.ZMax - h / 2, -1) : (ring.ZMin + h / 2, 1);
+        return above ? (ring.ZMax - h / 2, 1) : (ring.ZMin + h / 2, 1);
     }
 
     private static double[] FieldAround(RotorField field, double r, double z, double sign, double period)
