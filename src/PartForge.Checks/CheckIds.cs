@@ -74,4 +74,10 @@ public static class CheckIds
     public const string SwitchPower = "switch-power";
     /// <summary>A freewheel path for the coil current when the switch opens (a reed without one arcs).</summary>
     public const string DriveFreewheel = "drive-freewheel";
+    /// <summary>The rectified open-circuit peak at max_rpm against the capacitor's rated voltage.</summary>
+    public const string StorageOvervoltage = "storage-overvoltage";
+    /// <summary>Energy a capacitor store holds at its rated voltage, with the cautions.</summary>
+    public const string StoredEnergy = "stored-energy";
+    /// <summary>The speed at which the generator starts charging its store, against rated and max speed.</summary>
+    public const string ChargeCutIn = "charge-cut-in";
 }

@@ -61,6 +61,7 @@ public static partial class CheckRunner
             PullOnRotorN = pulls,
             BackIron = e.BackIron,
             Switching = e.Switching,
+            Charging = e.Charging,
             ShaftTorqueNm = Finite(motor ? e.Motor!.StallTorqueNm : e.Generator?.ShaftTorqueNm ?? 0),
             MagnetToBackIronN = Finite(e.Pull?.MagnetToBackIronN ?? 0),
             SensorAnglesDeg = e.Sensors?.Sensors.Select(s => s.AngleDeg).ToArray() ?? Array.Empty<double>(),

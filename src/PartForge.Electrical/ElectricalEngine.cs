@@ -227,6 +227,40 @@ public static class ElectricalEngine
             }
         }
 
+        // Charging the store through the rectifier (generator roles).
+        ChargingPoint? charging = null;
+        if (d.RunsAsGenerator && d.Load.Rectifier != RectifierKind.None && d.Storage is not NoStorage)
+        {
+            var rect = new double[fine];
+            double rPath;
+            if (phases == 3)
+            {
+                bool star = conn == Connection.Star;
+                if (d.Load.Rectifier == RectifierKind.Bridge)
+                {
+                    Complex[][] pairs = star
+                        ? new[] { Sub(k[0], k[1]), Sub(k[1], k[2]), Sub(k[2], k[0]) }
+                        : new[] { NoTriplen(k[0], series.Orders), NoTriplen(k[1], series.Orders), NoTriplen(k[2], series.Orders) };
+                    var pw = pairs.Select(pp => HarmonicSynth.Sample(pp, series.Orders, fine)).ToArray();
+                    for (int i = 0; i < fine; i++) rect[i] = Math.Max(Math.Abs(pw[0][i]), Math.Max(Math.Abs(pw[1][i]), Math.Abs(pw[2][i])));
+                    rPath = star ? 2 * ohmPhHot : 2 * ohmPhHot / 3;
+                }
+                else
+                {
+                    var pw = k.Select(kk => HarmonicSynth.Sample(kk, series.Orders, fine)).ToArray();
+                    for (int i = 0; i < fine; i++) rect[i] = Math.Max(0, Math.Max(pw[0][i], Math.Max(pw[1][i], pw[2][i])));
+                    rPath = ohmPhHot;
+                }
+            }
+            else
+            {
+                var w1 = HarmonicSynth.Sample(k[0], series.Orders, fine);
+                for (int i = 0; i < fine; i++) rect[i] = d.Load.Rectifier == RectifierKind.Bridge ? Math.Abs(w1[i]) : Math.Max(0, w1[i]);
+                rPath = ohmPhHot;
+            }
+            charging = Charging.Point(d, rect, rPath);
+        }
+
         // Only the role's operating points (machine.role; never inferred from the sensor).
         if (!d.RunsAsGenerator) gen = null;
         if (!d.RunsAsMotor) mot = null;
@@ -259,6 +293,7 @@ public static class ElectricalEngine
             Winding = layout,
             Sensors = sensors,
             Switching = plan,
+            Charging = charging,
             PhaseFlux = phaseFlux,
             Generator = gen,
             Motor = mot,

@@ -75,6 +75,9 @@ public sealed record ElectricalResult
     public IReadOnlyList<Switching.PhaseFlux> PhaseFlux { get; init; } = Array.Empty<Switching.PhaseFlux>();
     public GeneratorPoint? Generator { get; init; }
     public MotorPoint? Motor { get; init; }
+
+    /// <summary>The generator charging its store through the rectifier (generator roles with a store; null otherwise).</summary>
+    public ChargingPoint? Charging { get; init; }
     public Waveforms? Waveforms { get; init; }
 
     /// <summary>Axial magnetic forces on the rotors (computed where a rotor feels a net pull: dual-rotor); null otherwise.</summary>

@@ -45,6 +45,9 @@ public sealed record ElectricalFacts
     /// <summary>The drive as the sensors switch it (null: no motor role or no sensor).</summary>
     public PartForge.Electrical.Switching.SwitchingPlan? Switching { get; init; }
 
+    /// <summary>The generator charging its store (null: no generator role or no store).</summary>
+    public PartForge.Electrical.Operation.ChargingPoint? Charging { get; init; }
+
     /// <summary>Flux in each steel face behind the magnets (the electrical engine's <c>BackIron</c>).</summary>
     public IReadOnlyList<PartForge.Electrical.Field.BackIronFluxResult> BackIron { get; init; } = Array.Empty<PartForge.Electrical.Field.BackIronFluxResult>();
 }
