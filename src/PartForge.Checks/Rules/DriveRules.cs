@@ -70,17 +70,19 @@ internal static class DriveRules
     {
         double tf = c.D.Mechanics.FrictionTorqueNm;
         double share = plan.SelfStartShare;
-        var status = !(plan.MeanStallTorqueNm > tf) ? CheckStatus.Fail : share < 1 ? CheckStatus.Warn : CheckStatus.Pass;
-        string msg = $"at standstill the drive's torque is above the friction torque (mechanics.friction_torque {Mn(tf)} mN m) at {F(share * 100)} % of rotor angles; mean {Mn(plan.MeanStallTorqueNm)} mN m at {F(plan.PeakCurrentA)} A";
+        var status = !(plan.MeanStallTorqueNm > tf) || share <= 0 ? CheckStatus.Fail : share < 1 ? CheckStatus.Warn : CheckStatus.Pass;
+        string msg = $"from rest the rotor runs up by itself from {F(share * 100)} % of rotor angles (the drive's work less the friction's, mechanics.friction_torque {Mn(tf)} mN m, stays positive along a whole period); mean standstill torque {Mn(plan.MeanStallTorqueNm)} mN m at {F(plan.PeakCurrentA)} A";
         if (status == CheckStatus.Fail)
-            msg += "; the rotor cannot run up: fix drive-pulse-torque first, or raise the supply (operation.supply_voltage or the store's voltage)";
+            msg += plan.MeanStallTorqueNm > tf
+                ? "; from every angle the rotor comes to rest where a pulse holds it (the window runs past the alignment): shorten the pulses (a higher sensor.operate, or sensor.advance_elec), or give it a push"
+                : "; the rotor cannot run up: fix drive-pulse-torque first, or raise the supply (operation.supply_voltage or the store's voltage)";
         else if (status == CheckStatus.Warn)
             msg += "; from the other angles it needs a push to start (a single-phase pulse drive has dead angles; three phases start from any angle)";
         return new CheckResult
         {
             Id = CheckIds.DriveStart, Part = null, Status = status, Value = share * 100, Limit = 0, Unit = "%", Margin = share * 100,
             Message = msg, Where = new CheckLocation("drive"),
-            Basis = "quasi-static standstill torque i d lambda / d theta with i = (V - drops) / R, against the Coulomb friction torque",
+            Basis = "quasi-static work of the torque i d lambda / d theta, i = (V - drops) / R, against the Coulomb friction along the path from rest (energy method)",
         };
     }
 

@@ -73,10 +73,12 @@ public sealed record SwitchingPlan
     /// <summary>Mean torque at standstill over rotor angles (quasi-static, no inductance), N m.</summary>
     public required double MeanStallTorqueNm { get; init; }
 
-    /// <summary>Share of rotor angles at which the standstill torque is above the friction torque (the rotor starts by itself), 0..1.</summary>
+    /// <summary>Share of rotor angles from which the rotor starts by itself, 0..1: the drive's work less the friction's, summed
+    /// along the path from rest (quasi-static, no inductance), stays above zero for a whole electrical period.</summary>
     public required double SelfStartShare { get; init; }
 
-    /// <summary>Rotor angle (mechanical degrees) of the largest standstill torque: where a start from rest is simulated.</summary>
+    /// <summary>Rotor angle (mechanical degrees, first electrical period) from which a start from rest has the largest least
+    /// energy margin (else the largest standstill torque): where a start from rest is simulated.</summary>
     public required double BestStartAngleDeg { get; init; }
 
     /// <summary>Voltage across the opening switch, V: supply plus a diode drop with a freewheel; without one

@@ -56,7 +56,7 @@ public static class SwitchingPlanner
         double friction = d.Mechanics.FrictionTorqueNm;
 
         var sensorAngles = sensors.Sensors.Select(s => (s.AngleDeg, s.Inverted)).ToArray();
-        var main = Evaluate(sensorAngles, 0, g, period, p, reed, op, rel, sw, phases, current, friction);
+        var main = Evaluate(sensorAngles, 0, g, period, p, reed, op, rel, sw, phases, current, friction, full: true);
 
         // The advance with the largest mean torque (single-sensor drives): the sensor moves by -delta / p.
         double? bestAdv = null;
@@ -151,7 +151,7 @@ public static class SwitchingPlanner
     private sealed record Outcome(IReadOnlyList<CircuitPulses> Circuits, int Braking, double MeanTorque, double StartShare, double BestStartDeg);
 
     private static Outcome Evaluate((double AngleDeg, bool Inverted)[] sensors, double shiftDeg, double[] g, double period, int p, bool reed,
-        double op, double rel, SwitchingKind sw, IReadOnlyList<PhaseFlux> phases, double current, double friction)
+        double op, double rel, SwitchingKind sw, IReadOnlyList<PhaseFlux> phases, double current, double friction, bool full = false)
     {
         int m = SamplesPerPeriod;
         double step = period / m;
@@ -251,8 +251,8 @@ public static class SwitchingPlanner
         }
 
         // Standstill torque over the period.
+        var torque = new double[m];
         double sum = 0, best = double.NegativeInfinity, bestDeg = 0;
-        int starts = 0;
         for (int i = 0; i < m; i++)
         {
             double th = i * step * Math.PI / 180, t;
@@ -263,9 +263,32 @@ public static class SwitchingPlanner
                 t = hi >= 0 && lo >= 0 ? current * (phases[hi].Derivative(th) - phases[lo].Derivative(th)) : 0;
             }
             else t = current * sign[0][i] * phases[0].Derivative(th);
+            torque[i] = t;
             sum += t;
-            if (t > friction) starts++;
             if (t > best) { best = t; bestDeg = i * step; }
+        }
+        // Starting from rest (quasi-static, no inductance): from angle i the rotor keeps moving when the work of the drive
+        // less the friction, summed along its path, stays above zero for a whole period (after that the pattern repeats
+        // with more energy when the period's net work is positive). The best start keeps the largest least margin.
+        int starts = 0;
+        double bestMargin = double.NegativeInfinity;
+        if (full && sum / m > friction)
+        {
+            double h = step * Math.PI / 180;
+            for (int i = 0; i < m; i++)
+            {
+                if (!(torque[i] > friction)) continue;
+                double e = 0, least = double.PositiveInfinity;
+                for (int k = 0; k < m; k++)
+                {
+                    e += (torque[(i + k) % m] - friction) * h;
+                    if (e < least) least = e;
+                    if (least <= 0) break;
+                }
+                if (least <= 0) continue;
+                starts++;
+                if (least > bestMargin) { bestMargin = least; bestDeg = i * step; }
+            }
         }
         return new Outcome(circuits, braking, sum / m, (double)starts / m, bestDeg);
     }
