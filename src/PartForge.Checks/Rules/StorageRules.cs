@@ -59,12 +59,16 @@ internal static class StorageRules
         string msg = battery
             ? $"charging the {F(ch.StoreVoltageV)} V battery starts at {F(rpm)} rpm (EMF peak = battery voltage + {F(ch.DropsV)} V of drops); at rated {F(c.D.RatedRpm)} rpm {F(ch.CurrentAtRatedA)} A, {F(ch.PowerAtRatedW)} W"
             : $"charging the capacitor to its rated {F(ch.StoreVoltageV)} V needs {F(rpm)} rpm (EMF peak = rated voltage + {F(ch.DropsV)} V of drops); at rated {F(c.D.RatedRpm)} rpm it charges to at most {F(ch.ReachableAtRatedV)} V";
-        if (ch.TimeToChargeS is { } t && ch.ChargeTargetV is { } tv) msg += $"; the capacitor charges from {F(((CapacitorStorage)c.D.Storage).StartVoltageV)} V to {F(tv)} V in {F(t)} s at rated speed";
+        if (c.D.Storage is CapacitorStorage cs)
+            msg += ch.TimeToChargeS is { } t && ch.ChargeTargetV is { } tv
+                ? $"; the capacitor charges from {F(cs.StartVoltageV)} V to {F(tv)} V in {F(t)} s at rated speed"
+                : $"; at rated speed it cannot be charged above its start voltage {F(cs.StartVoltageV)} V";
         if (status != CheckStatus.Pass && rpm > 0 && c.E.Turns > 0)
         {
             // The EMF is proportional to the turns (same flux per turn): the turns that bring cut-in to 80 % of rated speed.
             int turns = (int)Math.Ceiling(c.E.Turns * rpm / (0.8 * c.D.RatedRpm));
-            msg += $"; raise coils.turns to about {turns} (the EMF grows with the turns; check the fit), use schottky diodes (load.diode), or a lower store voltage";
+            msg += $"; raise coils.turns to about {turns} (the EMF grows with the turns; check the fit)"
+                + (c.D.Load.Diode == DiodeKind.Silicon ? ", use schottky diodes (load.diode)" : "") + ", or a lower store voltage";
         }
         return new CheckResult
         {

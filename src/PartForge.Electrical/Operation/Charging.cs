@@ -63,8 +63,9 @@ public static class Charging
         {
             energy = cap.EnergyAtJ(cap.RatedVoltageV);
             double v0 = cap.StartVoltageV;
-            target = reachable > cap.RatedVoltageV ? cap.RatedVoltageV : v0 + 0.9 * (reachable - v0);
-            if (target > v0)
+            target = reachable > cap.RatedVoltageV ? cap.RatedVoltageV : reachable > v0 ? v0 + 0.9 * (reachable - v0) : null;
+            if (target is null) time = null; // at rated speed the rectifier cannot lift it above its start voltage
+            else if (target > v0)
             {
                 double t = TimeToCharge(x => MeanCurrent(rectifiedEmfPerRadS, W(d.RatedRpm), x, drops, r), cap.CapacitanceF, v0, target.Value);
                 time = double.IsFinite(t) ? t : null;
