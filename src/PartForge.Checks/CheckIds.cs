@@ -69,4 +69,22 @@ public static class CheckIds
     public const string FastenerBearing = "fastener-bearing";
     /// <summary>Jacking screws of the last rotor against the full pull: screw stress and nut bearing on the printed trap, as a utilisation.</summary>
     public const string JackingScrew = "jacking-screw";
+    /// <summary>Torque sign of every pulse of the drive as the sensors really switch it (a pulse whose linkage falls over its window brakes).</summary>
+    public const string DrivePulseTorque = "drive-pulse-torque";
+    /// <summary>Standstill torque of the drive against the friction torque: does the rotor start by itself, from which angles.</summary>
+    public const string DriveStart = "drive-start";
+    /// <summary>Peak coil current the switch carries (standstill) against its current rating.</summary>
+    public const string SwitchCurrent = "switch-current";
+    /// <summary>Voltage across the opening switch (the inductive kick) against its voltage rating.</summary>
+    public const string SwitchVoltage = "switch-voltage";
+    /// <summary>A reed's switched power (peak current x supply voltage) against its contact rating.</summary>
+    public const string SwitchPower = "switch-power";
+    /// <summary>A freewheel path for the coil current when the switch opens (a reed without one arcs).</summary>
+    public const string DriveFreewheel = "drive-freewheel";
+    /// <summary>The rectified open-circuit peak at max_rpm against the capacitor's rated voltage.</summary>
+    public const string StorageOvervoltage = "storage-overvoltage";
+    /// <summary>Energy a capacitor store holds at its rated voltage, with the cautions.</summary>
+    public const string StoredEnergy = "stored-energy";
+    /// <summary>The speed at which the generator starts charging its store, against rated and max speed.</summary>
+    public const string ChargeCutIn = "charge-cut-in";
 }

@@ -42,9 +42,12 @@ public static partial class CheckRunner
     public static ElectricalFacts? FactsFrom(MachineModel design, ElectricalResult e)
     {
         if (e.Coil is not { Outline: { } outline } coil) return null;
-        // Which operating point governs: decided in one place (Electrical.Operation.OperatingChoice).
-        bool motor = Electrical.Operation.OperatingChoice.For(design) == Electrical.Operation.OperatingMode.Motor && e.Motor is not null;
-        double j = motor ? e.Motor!.CurrentDensityAtRatedAPerMm2 : e.Generator?.CurrentDensityAPerMm2 ?? 0;
+        // Which operating point: machine.role, never the sensor. A motor-generator is judged at the harder of its two
+        // points (the higher current density). Both at rated rpm.
+        double jMotor = design.RunsAsMotor && e.Motor is { } mp ? mp.CurrentDensityAtRatedAPerMm2 : double.NaN;
+        double jGen = design.RunsAsGenerator && e.Generator is { } gp ? gp.CurrentDensityAPerMm2 : double.NaN;
+        bool motor = double.IsFinite(jMotor) && !(double.IsFinite(jGen) && jGen > jMotor);
+        double j = motor ? jMotor : double.IsFinite(jGen) ? jGen : 0;
         string point = motor
             ? $"motor operating point (rated {Judge.F(design.RatedRpm)} rpm, operation.supply_voltage {Judge.F(design.Operation.SupplyVoltageV)} V)"
             : $"generator operating point (rated {Judge.F(design.RatedRpm)} rpm into operation.load_resistance {Judge.F(design.Operation.LoadResistanceOhm)} ohm)";
@@ -60,6 +63,8 @@ public static partial class CheckRunner
             OperatingPoint = point,
             PullOnRotorN = pulls,
             BackIron = e.BackIron,
+            Switching = e.Switching,
+            Charging = e.Charging,
             ShaftTorqueNm = Finite(motor ? e.Motor!.StallTorqueNm : e.Generator?.ShaftTorqueNm ?? 0),
             MagnetToBackIronN = Finite(e.Pull?.MagnetToBackIronN ?? 0),
             CoilTemperatureC = e.Thermal?.CoilTemperatureC ?? design.Operation.AmbientC,

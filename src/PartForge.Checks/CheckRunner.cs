@@ -24,6 +24,8 @@ public static partial class CheckRunner
         Collect(results, "coil placement", () => CoilPlacementRules.Run(c));
         Collect(results, "speed", () => SpeedRules.Run(c));
         Collect(results, "electrical", () => ElectricalRules.Run(c));
+        Collect(results, "drive", () => DriveRules.Run(c));
+        Collect(results, "storage", () => StorageRules.Run(c));
         Collect(results, "steel", () => IronRules.Run(c));
         Collect(results, "hardware", () => HardwareRules.Run(c));
         var joints = Hardware.FastenerPlanner.Plan(design, electrical, parts);

@@ -21,6 +21,7 @@ public static class CliApp
         root.Subcommands.Add(SchemaCommand.Create());
         root.Subcommands.Add(SweepCommand.Create());
         root.Subcommands.Add(WatchCommand.Create());
+        root.Subcommands.Add(SimulateCommand.Create());
         root.SetAction(pr =>
         {
             CommandAction.Err.WriteLine("partforge: give a command: check, build, init, presets, schema, sweep, watch (see partforge --help)");

@@ -56,7 +56,12 @@ public static partial class ElectricalEngine
             double Loss(double t)
             {
                 var (g, m) = model.At(BrAt(t) / brBase, ohmPhAt(t));
-                double w = mode == OperatingMode.Motor ? m.CopperLossAtRatedW : g.CopperLossW;
+                double w = mode switch
+                {
+                    OperatingMode.Motor => m.CopperLossAtRatedW,
+                    OperatingMode.Generator => g.CopperLossW,
+                    _ => Math.Max(double.IsFinite(m.CopperLossAtRatedW) ? m.CopperLossAtRatedW : 0, double.IsFinite(g.CopperLossW) ? g.CopperLossW : 0),
+                };
                 return double.IsFinite(w) ? w / coilsInMachine : 0;
             }
             (tc, lossCoil, _) = HeatBalance.Solve(ambient, cooling.ResistanceKPerW, Loss);

@@ -8,6 +8,7 @@ using PartForge.Electrical.Flux;
 using PartForge.Electrical.Operation;
 using PartForge.Electrical.Sensors;
 using PartForge.Electrical.Thermal;
+using PartForge.Electrical.Switching;
 using PartForge.Electrical.Wire;
 using PartForge.Electrical.Winding;
 
@@ -53,7 +54,12 @@ public static partial class ElectricalEngine
         int poles = d.Poles, coils = d.CoilsPerStator, phases = d.Phases;
         var conn = d.Connection;
 
-        var layout = WindingLayout.For(coils, poles, phases);
+        // Winding and sensors are planned in electrical angles: with same-pole magnets one electrical period is one
+        // magnet pitch, as in an alternating machine of twice as many poles (MachineModel.ElectricalPoles).
+        bool same = d.Magnets.Arrangement == MagnetArrangement.Same;
+        var layout = WindingLayout.For(coils, d.ElectricalPoles, phases);
+        if (!layout.IsValid && same)
+            layout = layout with { Reason = SameReason(coils, poles, phases) };
         if (!layout.IsValid)
             diags.Add(new Diagnostic("winding-invalid", DiagnosticSeverity.Error, "machine.coils", layout.Reason!));
 
@@ -66,7 +72,7 @@ public static partial class ElectricalEngine
         var wire = WireSpec.From(d.Coils.Wire, d.Coils.EnamelGrade);
         var spec = CoilSpec.From(d, wire, diags);
 
-        bool fieldOk = gap > 0 && layout.IsValid && poles >= 2 && poles % 2 == 0;
+        bool fieldOk = gap > 0 && layout.IsValid && poles >= 2 && (same || poles % 2 == 0);
         // The magnets at the still air's temperature (the machine at rest): the steel's flux, the pull and the turns
         // solved for a target EMF use this Br; the EMF at the operating point uses the magnets' operating temperature.
         double ambient = d.Operation.AmbientC;
@@ -76,7 +82,7 @@ public static partial class ElectricalEngine
 
         if (spec is null) return Empty(d, diags, layout, gap, field);
 
-        int p = Math.Max(1, poles / 2);
+        int p = Math.Max(1, d.FieldPeriods);
         int statorFactor = d.Layout.Stators.Count;
         bool parallel = phases == 1 && conn == Connection.Parallel;
         int inSeries = (phases == 3 ? coils / 3 : parallel ? 1 : coils) * statorFactor;
@@ -186,11 +192,59 @@ public static partial class ElectricalEngine
 
         // Sensor timing: the positive-going zero crossing of each phase's fundamental EMF: p theta + arg K = -90.
         var zeroCross = k.Select(kk => Norm(-90 - kk[0].Phase * 180 / Math.PI)).ToArray();
-        var sensors = SensorPlanner.Plan(d.Sensor, poles, phases, coil.Outline, coils, zeroCross, diags);
+        var sensors = SensorPlanner.Plan(d.Sensor, d.ElectricalPoles, phases, coil.Outline, coils, zeroCross, diags, !same);
+        var phaseFlux = k.Select((kk, x) => new PhaseFlux(phaseNames[x], series.Orders.Select((n, i) =>
+        {
+            Complex lam = kk[i] / (Complex.ImaginaryOne * n * p);
+            return new FluxTerm(n * p, lam.Real, -lam.Imaginary);
+        }).ToArray())).ToArray();
+        var plan = SwitchingPlanner.Plan(d, field, sensors, phaseFlux, ohmPhHot, lPh * 1e-6);
 
-        // Operating points (the winding at its steady temperature).
-        var (gen, mot) = OperatingModel.Of(d, k, series.Orders, parallel, lPh, wire, p).At(1, ohmPhHot);
+        // Operating points (the winding at its steady temperature; a pulse drive's windows are the ones its sensor
+        // really gives, from the switching plan).
+        var op = d.Operation;
+        const int fine = 720;
+        var (genPoint, motPoint) = OperatingModel.Of(d, k, series.Orders, parallel, lPh, wire, p, plan, ohmPhHot).At(1, ohmPhHot);
+        GeneratorPoint? gen = genPoint;
+        MotorPoint? mot = motPoint;
 
+        // Charging the store through the rectifier (generator roles).
+        ChargingPoint? charging = null;
+        if (d.RunsAsGenerator && d.Load.Rectifier != RectifierKind.None && d.Storage is not NoStorage)
+        {
+            var rect = new double[fine];
+            double rPath;
+            if (phases == 3)
+            {
+                bool star = conn == Connection.Star;
+                if (d.Load.Rectifier == RectifierKind.Bridge)
+                {
+                    Complex[][] pairs = star
+                        ? new[] { Sub(k[0], k[1]), Sub(k[1], k[2]), Sub(k[2], k[0]) }
+                        : new[] { NoTriplen(k[0], series.Orders), NoTriplen(k[1], series.Orders), NoTriplen(k[2], series.Orders) };
+                    var pw = pairs.Select(pp => HarmonicSynth.Sample(pp, series.Orders, fine)).ToArray();
+                    for (int i = 0; i < fine; i++) rect[i] = Math.Max(Math.Abs(pw[0][i]), Math.Max(Math.Abs(pw[1][i]), Math.Abs(pw[2][i])));
+                    rPath = star ? 2 * ohmPhHot : 2 * ohmPhHot / 3;
+                }
+                else
+                {
+                    var pw = k.Select(kk => HarmonicSynth.Sample(kk, series.Orders, fine)).ToArray();
+                    for (int i = 0; i < fine; i++) rect[i] = Math.Max(0, Math.Max(pw[0][i], Math.Max(pw[1][i], pw[2][i])));
+                    rPath = ohmPhHot;
+                }
+            }
+            else
+            {
+                var w1 = HarmonicSynth.Sample(k[0], series.Orders, fine);
+                for (int i = 0; i < fine; i++) rect[i] = d.Load.Rectifier == RectifierKind.Bridge ? Math.Abs(w1[i]) : Math.Max(0, w1[i]);
+                rPath = ohmPhHot;
+            }
+            charging = Charging.Point(d, rect, rPath);
+        }
+
+        // Only the role's operating points (machine.role; never inferred from the sensor).
+        if (!d.RunsAsGenerator) gen = null;
+        if (!d.RunsAsMotor) mot = null;
         double peakLink = series.PeakWb();
         return new ElectricalResult
         {
@@ -224,6 +278,9 @@ public static partial class ElectricalEngine
             FluxLinkage = series,
             Winding = layout,
             Sensors = sensors,
+            Switching = plan,
+            Charging = charging,
+            PhaseFlux = phaseFlux,
             Generator = gen,
             Motor = mot,
             Waveforms = waves,
@@ -387,7 +444,7 @@ public static partial class ElectricalEngine
 
     private static ElectricalResult Empty(MachineModel d, List<Diagnostic> diags, WindingLayout layout, double gap, RotorField? field = null)
     {
-        int p = Math.Max(0, d.Poles / 2);
+        int p = Math.Max(0, d.FieldPeriods);
         return new ElectricalResult
         {
             PolePairs = p, RatedRpm = d.RatedRpm, ElectricalHz = p * d.RatedRpm / 60,
@@ -402,6 +459,11 @@ public static partial class ElectricalEngine
             LineEmfRmsAtMaxRpmV = 0, LineEmfPeakAtMaxRpmV = 0, Harmonics = Array.Empty<Harmonic>(), Winding = layout, Diagnostics = diags,
         };
     }
+
+    /// <summary>Why a same-pole combination gives no winding, in the design's own counts (the planner sees twice the poles).</summary>
+    private static string SameReason(int coils, int magnets, int phases) => phases == 1
+        ? string.Format(Inv, "{0} coils with {1} same-pole magnets are not all in phase for a 1-phase winding (their EMFs would partly cancel); use coils = magnets ({1}), a divisor of 2 x magnets, or 3 phases.", coils, magnets)
+        : string.Format(Inv, "machine.coils {0} with {1} same-pole magnets give no balanced 3-phase winding (coils / (3 x gcd(coils, magnets)) must be a whole number); choose coils and magnets with that ratio, or machine.phases: 1.", coils, magnets);
 
     /// <summary>Phase harmonics per unit shaft speed (V per rad/s): K_n = i n p C_n S_n x mult.</summary>
     private static Complex[] PhaseHarmonics(FluxLinkageSeries s, WindingLayout layout, char phase, double mult)

@@ -67,8 +67,17 @@ public sealed record ElectricalResult
     public required WindingLayout Winding { get; init; }
 
     public SensorLayout? Sensors { get; init; }
+
+    /// <summary>The drive as the sensors switch it (motor roles with a sensor; null otherwise).</summary>
+    public Switching.SwitchingPlan? Switching { get; init; }
+
+    /// <summary>Each phase's flux linkage against the rotor angle (empty when not computed).</summary>
+    public IReadOnlyList<Switching.PhaseFlux> PhaseFlux { get; init; } = Array.Empty<Switching.PhaseFlux>();
     public GeneratorPoint? Generator { get; init; }
     public MotorPoint? Motor { get; init; }
+
+    /// <summary>The generator charging its store through the rectifier (generator roles with a store; null otherwise).</summary>
+    public ChargingPoint? Charging { get; init; }
     public Waveforms? Waveforms { get; init; }
 
     /// <summary>Axial magnetic forces on the rotors (computed where a rotor feels a net pull: dual-rotor); null otherwise.</summary>

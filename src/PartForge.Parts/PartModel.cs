@@ -127,6 +127,9 @@ public sealed record PartModel
     /// <summary>Mass of one copy in grams from <see cref="VolumeMm3"/> and the material density (solid, 100% infill).</summary>
     public double MassG => Material.MassG(VolumeMm3);
 
+    /// <summary>Moment of inertia of one copy about the machine axis (the part's own z axis), kg m^2: density x Int r^2 dV of its regions.</summary>
+    public double InertiaKgM2 => Material.DensityKgM3 * (_solid ?? throw new InvalidOperationException($"{Name}: no solid source")).PolarMomentMm5 * 1e-15;
+
     /// <summary>Features of one kind, in index order.</summary>
     public IEnumerable<PartFeature> FeaturesOf(FeatureKind kind) => Features.Where(f => f.Kind == kind).OrderBy(f => f.Index);
 

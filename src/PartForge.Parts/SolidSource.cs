@@ -14,6 +14,7 @@ internal sealed class SolidSource
     private readonly Lock _lock = new();
     private LayeredSolid? _solid;
     private double? _volume;
+    private double? _polar;
 
     public SolidSource(Func<LayeredSolid> make) => _make = make;
 
@@ -27,6 +28,7 @@ internal sealed class SolidSource
                 {
                     _solid = _make();
                     _volume = _solid.AnalyticVolume;
+                    _polar = _solid.AnalyticPolarMomentMm5;
                 }
                 return _solid;
             }
@@ -43,6 +45,19 @@ internal sealed class SolidSource
                 if (_volume is { } v) return v;
             }
             return Value.AnalyticVolume;
+        }
+    }
+
+    /// <summary>Int r^2 dV about the axis, mm^5, kept when the regions are let go.</summary>
+    public double PolarMomentMm5
+    {
+        get
+        {
+            lock (_lock)
+            {
+                if (_polar is { } v) return v;
+            }
+            return Value.AnalyticPolarMomentMm5;
         }
     }
 

@@ -35,7 +35,7 @@ public static class TestDesigns
     public static D Pulse() => new()
     {
         Name = "test-pulse",
-        Machine = new Machine { Layout = "single-rotor", Poles = 8, Coils = 8, Phases = 1, Connection = "series", RatedRpm = 600, MaxRpm = 1500 },
+        Machine = new Machine { Layout = "single-rotor", Role = "motor-generator", Poles = 8, Coils = 8, Phases = 1, Connection = "series", RatedRpm = 600, MaxRpm = 1500 },
         Magnets = new Magnets { Shape = "disc", Diameter = 10, Thickness = 3, Grade = "N42", PitchRadius = 30 },
         Rotor = new Rotor { OuterDiameter = 80, Thickness = 4, PocketFloor = 1 },
         Coils = new M.Coils { Shape = "round", Wire = new M.Wire { Awg = 30 }, Turns = 200, FillFactor = 0.45, Height = 6, Core = new Core { Diameter = 6 } },

@@ -60,6 +60,12 @@ public sealed record ElectricalFacts
     /// <summary>Errors and warnings of the electrical engine: (id, error?, key, message).</summary>
     public IReadOnlyList<(string Id, bool IsError, string Key, string Message, PartForge.Electrical.DiagnosticMeasure? Measure)> Diagnostics { get; init; } = Array.Empty<(string, bool, string, string, PartForge.Electrical.DiagnosticMeasure?)>();
 
+    /// <summary>The drive as the sensors switch it (null: no motor role or no sensor).</summary>
+    public PartForge.Electrical.Switching.SwitchingPlan? Switching { get; init; }
+
+    /// <summary>The generator charging its store (null: no generator role or no store).</summary>
+    public PartForge.Electrical.Operation.ChargingPoint? Charging { get; init; }
+
     /// <summary>Flux in each steel face behind the magnets (the electrical engine's <c>BackIron</c>).</summary>
     public IReadOnlyList<PartForge.Electrical.Field.BackIronFluxResult> BackIron { get; init; } = Array.Empty<PartForge.Electrical.Field.BackIronFluxResult>();
 }

@@ -47,8 +47,9 @@ internal static class DesignRules
         }
         var m = d.Machine;
         // Machine
-        if (m.Poles % 2 != 0)
-            Add(ctx.AtKey("machine.poles", "is not allowed", m.Poles.ToString(), "an even number (magnets alternate north and south)"));
+        if (m.Poles % 2 != 0 && d.Magnets.Arrangement != "same")
+            Add(ctx.AtKey("machine.poles", "is not allowed", m.Poles.ToString(), "an even number (magnets alternate north and south)",
+                "use an even number, or magnets.arrangement: same (every magnet shows one pole to the coils, any count)"));
         if (m.Phases == 3 && m.Coils % 3 != 0)
             Add(ctx.AtKey("machine.coils", "is not allowed", m.Coils.ToString(), "a multiple of 3 for 3 phases"), "machine.phases");
         string[] conns = m.Phases == 3 ? ["star", "delta"] : ["series", "parallel"];
@@ -179,6 +180,49 @@ internal static class DesignRules
         var sn = d.Sensor;
         if (sn.Kind != "none" && sn.Count == 3 && m.Phases != 3)
             Add(ctx.AtKey("sensor.count", "is not allowed with 1 phase: 3 sensors time 3 phases", "3", "1 (or sensor.kind: none)", fallbacks: "sensor.kind"), "sensor.kind", "machine.phases");
+
+        double op = sn.Operate ?? Machines.SensorSpec.DefaultOperateMt(sn.Kind == "reed" ? Machines.SensorKind.Reed : Machines.SensorKind.Hall);
+        double rel = sn.Release ?? Machines.SensorSpec.DefaultReleaseMt(sn.Kind == "reed" ? Machines.SensorKind.Reed : Machines.SensorKind.Hall);
+        if (sn.Kind != "none" && !(rel < op))
+            Add(ctx.AtKey(ctx.Has("sensor.release") ? "sensor.release" : "sensor.operate", $"leaves no hysteresis: sensor.release ({F(rel)} mT) must be below sensor.operate ({F(op)} mT)",
+                F(ctx.Has("sensor.release") ? rel : op), "release below operate", "lower sensor.release", "sensor"));
+        if (sn.Kind == "reed" && (op <= 0 || rel < 0))
+            Add(ctx.AtKey(op <= 0 ? "sensor.operate" : "sensor.release", "must not be negative for a reed: a reed switch closes on the size of the field, either pole", F(op <= 0 ? op : rel), "more than 0 (operate), 0 or more (release)", fallbacks: "sensor"));
+
+        // Drive: switching that fits the phases and the sensor.
+        var dv = d.Drive;
+        string switching = dv.Switching ?? (m.Phases == 3 ? "six-step" : "unipolar");
+        bool driven = m.Role != "generator" && sn.Kind != "none"; // a drive switched by its own sensor
+        if (driven && switching == "six-step" && m.Phases != 3)
+            Add(ctx.AtKey("drive.switching", "needs 3 phases", "six-step", "unipolar or bipolar for 1 phase", "set drive.switching: unipolar or bipolar (or machine.phases: 3)"));
+        if (driven && switching != "six-step" && m.Phases == 3 && ctx.Has("drive.switching"))
+            Add(ctx.AtKey("drive.switching", "does not fit 3 phases", switching, "six-step for 3 phases", "set drive.switching: six-step"));
+        if (driven && switching == "six-step" && sn.Kind != "hall")
+            Add(ctx.AtKey("sensor.kind", "cannot time a six-step drive: it needs three Hall sensors", sn.Kind, "hall", "set sensor.kind: hall", "drive.switching"));
+        if (driven && switching == "six-step" && dv.Freewheel == "none")
+            Add(ctx.AtKey("drive.freewheel", "cannot be none with six-step: the bridge's diodes carry the commutating current", "none", "diode", "set drive.freewheel: diode"));
+        if (driven && switching == "bipolar" && sn.Kind != "hall")
+            Add(ctx.AtKey("drive.switching", $"needs a sensor that tells the poles apart; a {sn.Kind} sensor does not", "bipolar", "unipolar with this sensor, or sensor.kind: hall", "set sensor.kind: hall (a latch: sensor.operate 3, sensor.release -3) or drive.switching: unipolar", "sensor.kind"));
+
+        // Storage and load.
+        var st = d.Storage;
+        if (st.Kind == "capacitor")
+        {
+            if (st.Capacitance is null) Add(ctx.AtKey("storage.capacitance", "is missing; a capacitor store needs its capacitance (F)", fallbacks: "storage"));
+            if (st.RatedVoltage is null) Add(ctx.AtKey("storage.rated_voltage", "is missing; a capacitor store needs its rated voltage (V)", fallbacks: "storage"));
+            else if (st.StartVoltage > st.RatedVoltage)
+                Add(ctx.AtKey("storage.start_voltage", $"is above storage.rated_voltage ({F(st.RatedVoltage.Value)})", F(st.StartVoltage), $"at most {F(st.RatedVoltage.Value)}", $"lower storage.start_voltage to {F(st.RatedVoltage.Value)} or less"));
+        }
+        if (st.Kind == "battery" && st.Voltage is null)
+            Add(ctx.AtKey("storage.voltage", "is missing; a battery store needs its open-circuit voltage (V)", fallbacks: "storage"));
+        foreach (var (key, storeKind) in new[] { ("storage.capacitance", "capacitor"), ("storage.rated_voltage", "capacitor"), ("storage.start_voltage", "capacitor"), ("storage.esr", "capacitor"), ("storage.voltage", "battery"), ("storage.internal_resistance", "battery") })
+            if (ctx.Has(key) && st.Kind != storeKind)
+                Add(ctx.AtKey(key, $"applies to a {storeKind} store only (storage.kind is {st.Kind})", suggestion: $"remove it or set storage.kind: {storeKind}", fallbacks: "storage.kind"));
+        string rect = d.Load.Rectifier ?? (st.Kind == "none" ? "none" : "bridge");
+        if (rect != "none" && st.Kind == "none")
+            Add(ctx.AtKey("load.rectifier", "needs a store to charge (storage.kind is none)", rect, "none without a store", "set storage.kind: capacitor or battery, or load.rectifier: none"));
+        if (rect == "none" && st.Kind != "none" && m.Role != "motor")
+            Add(ctx.AtKey("load.rectifier", "cannot be none when a generator charges a store: AC does not charge it", "none", "half-wave or bridge", "set load.rectifier: bridge"));
 
         // Printer and cutter: one nozzle and one kerf; sheets that go on the bed; spacing that clears the kerf.
         if (d.Printer.Nozzle is { } pn && ctx.Has("process.nozzle") && pn != d.Process.Nozzle)

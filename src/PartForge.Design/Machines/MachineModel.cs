@@ -31,6 +31,15 @@ public sealed class MachineModel
     public required int Phases { get; init; }
 
     public required Connection Connection { get; init; }
+
+    /// <summary>What the machine is for (<c>machine.role</c>, default generator; never inferred from the sensor).</summary>
+    public required MachineRole Role { get; init; }
+
+    /// <summary>True when the motor operating point and motor checks apply (motor or motor-generator).</summary>
+    public bool RunsAsMotor => Role != MachineRole.Generator;
+
+    /// <summary>True when the generator operating point and generator checks apply (generator or motor-generator).</summary>
+    public bool RunsAsGenerator => Role != MachineRole.Motor;
     public required double RatedRpm { get; init; }
     public required double MaxRpm { get; init; }
 
@@ -44,6 +53,18 @@ public sealed class MachineModel
     public required ToleranceSpec Tolerances { get; init; }
     public required ProcessSpec Process { get; init; }
     public required OperationSpec Operation { get; init; }
+
+    /// <summary>The motor drive (<c>drive.*</c>).</summary>
+    public required DriveSpec Drive { get; init; }
+
+    /// <summary>The energy store (<c>storage.*</c>).</summary>
+    public required StorageSpec Storage { get; init; }
+
+    /// <summary>The generator's rectifier (<c>load.*</c>).</summary>
+    public required LoadSpec Load { get; init; }
+
+    /// <summary>Extra inertia and drag (<c>mechanics.*</c>).</summary>
+    public required MechanicsSpec Mechanics { get; init; }
 
     /// <summary>The printer the printed parts are laid out for (<c>printer.*</c>).</summary>
     public required PrinterSpec Printer { get; init; }
@@ -66,8 +87,16 @@ public sealed class MachineModel
     /// <summary>The grid and chordal tolerance every part is made on.</summary>
     public Precision Precision => Precision.FromChordalTolerance(ChordalToleranceMm);
 
-    /// <summary>Pole pairs p.</summary>
+    /// <summary>Pole pairs p (alternating magnets; with same-pole magnets the field periods are <see cref="FieldPeriods"/>).</summary>
     public int PolePairs => Poles / 2;
+
+    /// <summary>Periods of the rotor field in one revolution: poles / 2 with alternating magnets, poles with same-pole
+    /// magnets. One electrical period is 360 / FieldPeriods mechanical degrees.</summary>
+    public int FieldPeriods => Magnets.Arrangement == MagnetArrangement.Same ? Poles : Poles / 2;
+
+    /// <summary>The pole count of the alternating machine with the same electrical period (2 x FieldPeriods): what
+    /// the winding and sensor planning read.</summary>
+    public int ElectricalPoles => 2 * FieldPeriods;
 
     /// <summary>Coils in the whole machine (every stator).</summary>
     public int CoilsInMachine => CoilsPerStator * Layout.Stators.Count;
@@ -89,7 +118,20 @@ public sealed class MachineModel
             throw new ArgumentException($"magnets.{problems[0].Key} {problems[0].Message}", nameof(d));
         var shape = kind.Make(d.Magnets);
         double br = d.Magnets.Br ?? MagnetGrades.MidRangeBrTesla(d.Magnets.Grade) ?? throw Bad("magnets.grade", d.Magnets.Grade);
-        var magnets = new MagnetSet(shape, d.Magnets.Grade, br, d.Magnets.Br is not null);
+        var arrangement = d.Magnets.Arrangement switch
+        {
+            "alternating" => MagnetArrangement.Alternating,
+            "same" => MagnetArrangement.Same,
+            var o => throw Bad("magnets.arrangement", o),
+        };
+        var magnets = new MagnetSet(shape, d.Magnets.Grade, br, d.Magnets.Br is not null) { Arrangement = arrangement };
+        var machineRole = d.Machine.Role switch
+        {
+            "generator" => MachineRole.Generator,
+            "motor" => MachineRole.Motor,
+            "motor-generator" => MachineRole.MotorGenerator,
+            var o => throw Bad("machine.role", o),
+        };
 
         int phases = d.Machine.Phases;
         var connection = d.Machine.Connection switch
@@ -121,7 +163,44 @@ public sealed class MachineModel
 
         var sn = d.Sensor;
         var sensorKind = sn.Kind switch { "none" => SensorKind.None, "hall" => SensorKind.Hall, "reed" => SensorKind.Reed, var o => throw Bad("sensor.kind", o) };
-        var sensor = new SensorSpec(sensorKind, sn.Count ?? (phases == 3 ? 3 : 1), sn.AdvanceElec, new SensorBody(sn.Body.Length, sn.Body.Width, sn.Body.Height));
+        var sensor = new SensorSpec(sensorKind, sn.Count ?? (phases == 3 ? 3 : 1), sn.AdvanceElec, new SensorBody(sn.Body.Length, sn.Body.Width, sn.Body.Height))
+        {
+            OperateTesla = (sn.Operate ?? SensorSpec.DefaultOperateMt(sensorKind)) / 1000,
+            ReleaseTesla = (sn.Release ?? SensorSpec.DefaultReleaseMt(sensorKind)) / 1000,
+        };
+        var dv = d.Drive;
+        bool reed = sensorKind == SensorKind.Reed;
+        var drive = new DriveSpec(
+            dv.Switching switch
+            {
+                null => phases == 3 ? SwitchingKind.SixStep : SwitchingKind.Unipolar,
+                "unipolar" => SwitchingKind.Unipolar,
+                "bipolar" => SwitchingKind.Bipolar,
+                "six-step" => SwitchingKind.SixStep,
+                var o => throw Bad("drive.switching", o),
+            },
+            dv.Freewheel switch { "diode" => true, "none" => false, var o => throw Bad("drive.freewheel", o) },
+            DiodeOf(dv.Diode, "drive.diode"),
+            dv.SwitchCurrentRating ?? (reed ? 0.5 : 1.0),
+            dv.SwitchVoltageRating ?? (reed ? 200 : 40),
+            reed ? dv.SwitchPowerRating ?? 10 : null);
+        var st = d.Storage;
+        StorageSpec storage = st.Kind switch
+        {
+            "none" => StorageSpec.None,
+            "capacitor" => new CapacitorStorage(st.Capacitance ?? throw Bad("storage.capacitance", null), st.RatedVoltage ?? throw Bad("storage.rated_voltage", null), st.Esr, st.StartVoltage),
+            "battery" => new BatteryStorage(st.Voltage ?? throw Bad("storage.voltage", null), st.InternalResistance),
+            var o => throw Bad("storage.kind", o),
+        };
+        var load = new LoadSpec(d.Load.Rectifier switch
+        {
+            null => storage is NoStorage ? RectifierKind.None : RectifierKind.Bridge,
+            "none" => RectifierKind.None,
+            "half-wave" => RectifierKind.HalfWave,
+            "bridge" => RectifierKind.Bridge,
+            var o => throw Bad("load.rectifier", o),
+        }, DiodeOf(d.Load.Diode, "load.diode"));
+        var mech = new MechanicsSpec(d.Mechanics.ExtraInertia, d.Mechanics.FrictionTorque, d.Mechanics.ViscousDrag);
 
         var gap = new GapSpec(d.Gap.AirGap, d.Gap.MinRunningGap);
         var tol = new ToleranceSpec(d.Tolerances.PrintXy, d.Tolerances.PrintZ, d.Tolerances.Runout, d.Tolerances.AxialPlay);
@@ -158,6 +237,7 @@ public sealed class MachineModel
             CoilsPerStator = d.Machine.Coils,
             Phases = phases,
             Connection = connection,
+            Role = machineRole,
             RatedRpm = d.Machine.RatedRpm,
             MaxRpm = d.Machine.MaxRpm,
             Magnets = magnets,
@@ -170,6 +250,10 @@ public sealed class MachineModel
             Tolerances = tol,
             Process = process,
             Operation = operation,
+            Drive = drive,
+            Storage = storage,
+            Load = load,
+            Mechanics = mech,
             Printer = printer,
             Cutter = cutter,
             ChordalToleranceMm = d.Mesh.ChordalTolerance,
@@ -186,6 +270,13 @@ public sealed class MachineModel
         PartRole.Former => o.Former,
         PartRole.Stator => o.Stator,
         _ => o.Spacer,
+    };
+
+    private static DiodeKind DiodeOf(string word, string key) => word switch
+    {
+        "silicon" => DiodeKind.Silicon,
+        "schottky" => DiodeKind.Schottky,
+        var o => throw Bad(key, o),
     };
 
     private static Material MaterialOf(string name, string key) => MaterialTable.Find(name) ?? throw Bad(key, name);

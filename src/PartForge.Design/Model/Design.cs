@@ -29,6 +29,18 @@ public sealed class Design
     [Doc("Operating points for the electrical results (generator load, motor supply).")]
     public Operation Operation { get; init; } = new();
 
+    [Doc("How the coils are switched from the supply (motor roles).")]
+    public Drive Drive { get; init; } = new();
+
+    [Doc("The energy store: the motor's supply and the generator's load.")]
+    public Storage Storage { get; init; } = new();
+
+    [Doc("How the generator's coils feed the store (rectifier).")]
+    public Load Load { get; init; } = new();
+
+    [Doc("Extra inertia and drag of the rotating assembly.")]
+    public Mechanics Mechanics { get; init; } = new();
+
     [Doc("The 3D printer the printed parts are laid out for and checked against.")]
     public Printer Printer { get; init; } = new();
 

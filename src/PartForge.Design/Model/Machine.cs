@@ -6,7 +6,11 @@ public sealed class Machine
      Doc("single-rotor: one rotor facing one stator; dual-rotor: a stator between two rotors; dual-stator: a rotor between two stators.")]
     public string Layout { get; init; } = "dual-rotor";
 
-    [Range(2, 256), Doc("Magnets per rotor face (even).")]
+    [OneOf("generator", "motor", "motor-generator"),
+     Doc("What the machine is for: generator (driven, into operation.load_resistance), motor (switched from operation.supply_voltage by its timing sensor) or motor-generator (both operating points). Default generator; never inferred from sensor.kind.")]
+    public string Role { get; init; } = "generator";
+
+    [Range(2, 256), Doc("Magnets per rotor face (even with magnets.arrangement: alternating; odd counts allowed with same).")]
     public int Poles { get; init; } = 12;
 
     [Range(1, 192), Doc("Coils per stator.")]

@@ -5,6 +5,10 @@ public sealed class Magnets
     [OneOf("disc", "block", "arc", "sector"), Doc("disc | block | arc (segment of an annulus) | sector (trapezoidal block, wider at its outer edge).")]
     public string Shape { get; init; } = "disc";
 
+    [OneOf("alternating", "same"),
+     Doc("alternating: neighbouring magnets show opposite poles to the coils; same: every magnet shows the same pole to the coils (the flux in a coil has a steady part and pulses once per magnet; any magnet count).")]
+    public string Arrangement { get; init; } = "alternating";
+
     [Range(0, 500, MinExclusive = true), Doc("Disc magnet diameter, mm (shape: disc).")]
     public double? Diameter { get; init; }
 

@@ -11,6 +11,12 @@ public sealed class Sensor
     [Range(-180, 180), Doc("Timing advance, electrical degrees.")]
     public double AdvanceElec { get; init; }
 
+    [Range(-1000, 1000), Doc("Field at which the sensor switches on, mT, along the machine axis (positive toward the front, +z: the direction magnet 0 makes in the stator, which the sensor planner times on; a Hall is fitted to switch on it). Reed: pull-in on the size of B (either pole); Hall: operate point. Default: reed 3, hall 6 (datasheet-typical, from memory).")]
+    public double? Operate { get; init; }
+
+    [Range(-1000, 1000), Doc("Field at which the sensor switches off again, mT (below sensor.operate). Reed: release on the size of B; Hall: release point (negative for a latch). Default: reed 1.5, hall 4 (datasheet-typical, from memory).")]
+    public double? Release { get; init; }
+
     [Doc("Sensor body size, mm.")]
     public SensorBody Body { get; init; } = new();
 }

@@ -12,7 +12,8 @@ namespace PartForge.Electrical.Field;
 /// farther out is left out). Under a pole the flux splits in two and runs tangentially through the steel to the two
 /// neighbouring poles, so the steel's radial section between two poles carries half the pole's flux. The section
 /// counted is the steel thickness times the magnets' radial length only (conservative: flux spreading over a wider
-/// disc is not counted): B = Phi_pole / (2 t L_r).
+/// disc is not counted): B = Phi_pole / (2 t L_r). With same-pole magnets the flux leaves each pole radially
+/// through the arcs of one pole pitch at the track's edges: B = Phi_pole / (t 2 pi (r_in + r_out) / poles).
 ///
 /// Saturation: the steel carries at most B_sat over that section. When the ideal-iron flux asks for more, the image
 /// is weakened (a factor k between 0 and 1 on every image in that face) so that the flux per pole is what the
@@ -47,7 +48,7 @@ public static class BackIronFlux
         var real = new List<MagnetSource>();
         foreach (var m in RotorField.MagnetSlabs(machine))
             for (int k = 0; k < poles; k++)
-                real.Add(new MagnetSource(g, k * 360.0 / poles, m.ZMin, m.ZMax, (k % 2 == 0 ? 1 : -1) * br, farFactor));
+                real.Add(new MagnetSource(g, k * 360.0 / poles, m.ZMin, m.ZMax, machine.Magnets.SignOf(k) * br, farFactor));
         var (rMin, rMax) = g.RadialRangeMm(0);
         double radial = Math.Max(rMax - rMin, 1e-6);
         var results = new List<BackIronFluxResult>();
@@ -85,7 +86,13 @@ public static class BackIronFlux
                 }
             double phiIdeal = Math.Abs(ideal) * 1e-6, phiBare = Math.Abs(bare) * 1e-6;
             double t = p.ThicknessMm;
-            double section = 2 * t * radial * 1e-6; // m^2, both ways out of the pole
+            // Alternating magnets: the pole's flux splits both ways to the neighbouring poles, through two radial
+            // sections t x L_r. Same-pole magnets have no neighbour of the other sign: the flux leaves the pole
+            // radially, inwards and outwards, through the steel's arcs of one pole pitch at the track's inner and
+            // outer edges (t x 2 pi r / poles each; conservative, the disc beyond the track is not counted).
+            double section = machine.Magnets.Arrangement == MagnetArrangement.Same
+                ? t * 2 * Math.PI * (rMin + rMax) / poles * 1e-6
+                : 2 * t * radial * 1e-6; // m^2, both ways out of the pole
             double bIdeal = section > 0 ? phiIdeal / section : double.PositiveInfinity;
             double cap = SaturationTesla * section;
             double k = phiIdeal - phiBare > 1e-15 ? Math.Clamp((cap - phiBare) / (phiIdeal - phiBare), 0, 1) : 1;

@@ -61,7 +61,7 @@ public static class MagneticPull
             .OrderByDescending(p => p.Plane.FaceZMm).ToList();
         bool iron = planes.Count > 0;
         List<MagnetSource> Ring(AxialSlab m) => Enumerable.Range(0, poles)
-            .Select(k => new MagnetSource(g, k * 360.0 / poles, m.ZMin, m.ZMax, (k % 2 == 0 ? 1 : -1) * br, far)).ToList();
+            .Select(k => new MagnetSource(g, k * 360.0 / poles, m.ZMin, m.ZMax, machine.Magnets.SignOf(k) * br, far)).ToList();
         var front = Ring(mags[0]);
         var target = front[0];
         double frontIronPlane = iron ? planes[0].Plane.FaceZMm : 0;

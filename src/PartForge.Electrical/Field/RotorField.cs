@@ -5,7 +5,8 @@ namespace PartForge.Electrical.Field;
 
 /// <summary>
 /// The magnets of the machine as field sources, in the rotor frame at rotor angle 0: magnet k of every rotor
-/// is centred at k x 360/poles degrees and magnetised along +z for even k, -z for odd k. In a dual-rotor
+/// is centred at k x 360/poles degrees and magnetised along +z for even k, -z for odd k (alternating), or along
+/// +z for every k (same-pole arrangement). In a dual-rotor
 /// machine the back rotor's magnet k therefore shows the opposite pole to the front rotor's magnet k across
 /// the stator, so their fields in the copper add.
 ///
@@ -40,11 +41,20 @@ public sealed class RotorField
 
     public int Poles { get; }
 
+    /// <summary>Periods of the field in one revolution: poles / 2 with alternating magnets, poles with same-pole magnets.</summary>
+    public int FieldPeriods { get; }
+
+    /// <summary>True when the field has half-wave symmetry (alternating magnets: only odd harmonics); false for
+    /// same-pole magnets, whose field has a steady part and every harmonic of the magnet pitch.</summary>
+    public bool HalfWaveSymmetric { get; }
+
     /// <summary>Default distance factor beyond which magnets are replaced by dipoles (see MagnetSource).</summary>
     public const double DefaultFarFactor = 2.5;
 
-    private RotorField(IReadOnlyList<MagnetSource> sources, IReadOnlyList<MagnetSource>? half, double c0, double c1, bool iron, int poles)
+    private RotorField(IReadOnlyList<MagnetSource> sources, IReadOnlyList<MagnetSource>? half, double c0, double c1, bool iron, int poles, bool same)
     {
+        FieldPeriods = same ? poles : poles / 2;
+        HalfWaveSymmetric = !same;
         Sources = sources;
         HalfSources = half;
         CopperZMinMm = c0;
@@ -84,7 +94,7 @@ public sealed class RotorField
         bool iron = planes.Count > 0;
 
         List<MagnetSource> Ring(double z0, double z1) =>
-            Enumerable.Range(0, poles).Select(k => new MagnetSource(g, k * 360.0 / poles, z0, z1, (k % 2 == 0 ? 1 : -1) * br, farFactor)).ToList();
+            Enumerable.Range(0, poles).Select(k => new MagnetSource(g, k * 360.0 / poles, z0, z1, machine.Magnets.SignOf(k) * br, farFactor)).ToList();
 
         var rings = magnets.Select(m => (m, ring: Ring(m.ZMin, m.ZMax))).ToList();
         var all = new List<MagnetSource>();
@@ -107,6 +117,6 @@ public sealed class RotorField
             foreach (var i in images) if (i.zPlane > 0) h.Add(i.img);
             half = h;
         }
-        return new RotorField(all, half, copper.ZMin, copper.ZMax, iron, poles);
+        return new RotorField(all, half, copper.ZMin, copper.ZMax, iron, poles, machine.Magnets.Arrangement == MagnetArrangement.Same);
     }
 }

@@ -38,10 +38,14 @@ public static class CoilFlux
     /// <summary>The flux linkage series of coil 0 with <paramref name="turns"/> turns.</summary>
     public static FluxLinkageSeries Compute(RotorField field, CoilOutline outline, int turns, FluxQuadrature q)
     {
-        int p = field.Poles / 2;
+        int p = field.FieldPeriods;
         int m = q.SamplesPerPeriod;
         int quarter = m / 4;
-        var orders = Enumerable.Range(0, quarter).Select(i => 2 * i + 1).ToArray();
+        bool halfWave = field.HalfWaveSymmetric;
+        // Alternating magnets: odd orders, samples over a quarter period (even and half-wave symmetry). Same-pole
+        // magnets: orders 0 (the steady part) .. quarter - 1, samples over half a period (even symmetry only).
+        var orders = halfWave ? Enumerable.Range(0, quarter).Select(i => 2 * i + 1).ToArray() : Enumerable.Range(0, quarter).ToArray();
+        int nSamples = halfWave ? quarter : m / 2 + 1;
 
         // Radial pieces.
         double rMin = Math.Max(1e-9, outline.OuterMinRadiusMm), rMax = outline.OuterMaxRadiusMm;
@@ -92,7 +96,7 @@ public static class CoilFlux
             for (int k = 0; k < nh; k++)
             {
                 double kk = orders[k] * p;
-                double s = winDeg is null ? 0 : Math.Sin(kk * a0) / kk;
+                double s = winDeg is null ? 0 : kk == 0 ? a0 : Math.Sin(kk * a0) / kk;
                 wn[j, k] = 2 * s;
             }
             if (a1 > a0 && build > 0)
@@ -110,20 +114,26 @@ public static class CoilFlux
         }
 
         // Field harmonics along each circle.
-        var cosTab = new double[nh, quarter];
+        // Fold weights: a_n = (4/M) Sum_{s<M/4} w_s f_s cos(...) (half-wave), a_n = (2/M) Sum_{s<=M/2} w_s f_s cos(...)
+        // (even only), w_s = 1 at the ends of the folded range and 2 inside; the steady part a_0 takes 1/M.
+        var cosTab = new double[nh, nSamples];
         for (int k = 0; k < nh; k++)
-            for (int s = 0; s < quarter; s++)
-                cosTab[k, s] = Math.Cos(2 * Math.PI * orders[k] * s / m) * (s == 0 ? 1 : 2);
-        var cs = new double[quarter];
-        var sn = new double[quarter];
-        for (int s = 0; s < quarter; s++)
+            for (int s = 0; s < nSamples; s++)
+            {
+                double ws = s == 0 || (!halfWave && s == m / 2) ? 1 : 2;
+                cosTab[k, s] = Math.Cos(2 * Math.PI * orders[k] * s / m) * ws;
+            }
+        var norm = orders.Select(n => halfWave ? 4.0 / m : n == 0 ? 1.0 / m : 2.0 / m).ToArray();
+        var cs = new double[nSamples];
+        var sn = new double[nSamples];
+        for (int s = 0; s < nSamples; s++)
         {
             double phi = 2 * Math.PI * s / m / p;
             cs[s] = Math.Cos(phi);
             sn[s] = Math.Sin(phi);
         }
         var coef = new double[nh];
-        var f = new double[quarter];
+        var f = new double[nSamples];
         for (int l = 0; l < gz.Length; l++)
         {
             double z = 0.5 * (z0 + z1) + 0.5 * h * gz[l];
@@ -134,7 +144,7 @@ public static class CoilFlux
                 bool any = false;
                 for (int k = 0; k < nh; k++) if (wn[j, k] != 0) { any = true; break; }
                 if (!any) continue;
-                for (int s = 0; s < quarter; s++)
+                for (int s = 0; s < nSamples; s++)
                 {
                     double x = r * cs[s], y = r * sn[s], b = 0;
                     for (int i = 0; i < sources.Count; i++) b += sources[i].Bz(x, y, z);
@@ -144,18 +154,21 @@ public static class CoilFlux
                 for (int k = 0; k < nh; k++)
                 {
                     double a = 0;
-                    for (int s = 0; s < quarter; s++) a += cosTab[k, s] * f[s];
-                    a *= 4.0 / m;
+                    for (int s = 0; s < nSamples; s++) a += cosTab[k, s] * f[s];
+                    a *= norm[k];
                     coef[k] += wgt * a * wn[j, k];
                 }
             }
         }
         double scale = factor * turns / h * 1e-6; // T mm^2 -> Wb
+        if (halfWave)
+            return new FluxLinkageSeries { PolePairs = p, Orders = orders, CoefficientsWb = coef.Select(c => c * scale).ToArray() };
         return new FluxLinkageSeries
         {
             PolePairs = p,
-            Orders = orders,
-            CoefficientsWb = coef.Select(c => c * scale).ToArray(),
+            Orders = orders.Skip(1).ToArray(),
+            CoefficientsWb = coef.Skip(1).Select(c => c * scale).ToArray(),
+            OffsetWb = coef[0] * scale,
         };
     }
 }

@@ -10,15 +10,19 @@ public enum OperatingMode
 
     /// <summary>Motor at rated speed on <c>operation.supply_voltage</c>.</summary>
     Motor,
+
+    /// <summary>A motor-generator: judged at the harder of the two points (the larger copper loss or current density).</summary>
+    Both,
 }
 
 /// <summary>Which operating point governs a machine: decided here only.</summary>
 public static class OperatingChoice
 {
     /// <summary>
-    /// A machine with a timing sensor is driven as a motor (the sensor switches the coils); one without is a generator
-    /// into <c>operation.load_resistance</c>. Both at rated rpm.
+    /// From <c>machine.role</c>, never from the sensor: a motor at rated speed on <c>operation.supply_voltage</c>, a
+    /// generator at rated speed into <c>operation.load_resistance</c>, a motor-generator at the harder of the two.
     /// </summary>
     public static OperatingMode For(MachineModel machine) =>
-        machine.Sensor.Kind != SensorKind.None ? OperatingMode.Motor : OperatingMode.Generator;
+        machine.RunsAsMotor && machine.RunsAsGenerator ? OperatingMode.Both
+        : machine.RunsAsMotor ? OperatingMode.Motor : OperatingMode.Generator;
 }

@@ -1,6 +1,7 @@
 using System.Numerics;
 using PartForge.Design.Machines;
 using PartForge.Electrical.Flux;
+using PartForge.Electrical.Switching;
 using PartForge.Electrical.Wire;
 
 namespace PartForge.Electrical.Operation;
@@ -20,14 +21,22 @@ internal sealed class OperatingModel
     private readonly int _p;
     private readonly double[] _kc;
     private readonly bool[] _cond;
+    private readonly SwitchingPlan? _plan;
+    private readonly double _planOhm;
 
-    private OperatingModel(MachineModel d, bool parallel, double lPh, double lineRmsPerW, double phaseRmsPerW, double areaMm2, int p, double[] kc, bool[] cond)
+    private OperatingModel(MachineModel d, bool parallel, double lPh, double lineRmsPerW, double phaseRmsPerW, double areaMm2, int p, double[] kc, bool[] cond,
+        SwitchingPlan? plan, double planOhm)
     {
         (_d, _parallel, _lPh, _lineRmsPerW, _phaseRmsPerW, _areaMm2, _p, _kc, _cond) = (d, parallel, lPh, lineRmsPerW, phaseRmsPerW, areaMm2, p, kc, cond);
+        (_plan, _planOhm) = (plan, planOhm);
     }
 
-    /// <summary>The model from the phase harmonics <paramref name="k"/> (one array per phase, V per rad/s).</summary>
-    public static OperatingModel Of(MachineModel d, Complex[][] k, IReadOnlyList<int> orders, bool parallel, double lPhUh, WireSpec wire, int polePairs)
+    /// <summary>The model from the phase harmonics <paramref name="k"/> (one array per phase, V per rad/s). With a
+    /// switching <paramref name="plan"/> (made with the phase resistance <paramref name="planOhm"/>), a one-phase pulse
+    /// drive conducts in the windows its sensor really gives, each with the drive's sign, on the plan's supply and
+    /// drops; without one, from the fundamental's positive-going zero crossing for half a period (an estimate).</summary>
+    public static OperatingModel Of(MachineModel d, Complex[][] k, IReadOnlyList<int> orders, bool parallel, double lPhUh, WireSpec wire, int polePairs,
+        SwitchingPlan? plan = null, double planOhm = 0)
     {
         double phaseRmsPerW = Rms(k[0]);
         double[] kc;
@@ -53,9 +62,22 @@ internal sealed class OperatingModel
             double on = Norm(-90 - k[0][0].Phase * 180 / Math.PI) - d.Sensor.AdvanceElecDeg;
             kc = HarmonicSynth.Sample(k[0], orders, Fine);
             cond = new bool[Fine];
-            for (int i = 0; i < Fine; i++) cond[i] = Norm(360.0 * i / Fine - on) < 180;
+            if (plan is not null)
+            {
+                // The windows the sensor really gives (SwitchingPlanner): the conducting path's EMF carries the drive's sign.
+                for (int i = 0; i < Fine; i++)
+                {
+                    int sg = plan.SignAt(0, 360.0 * i / Fine / polePairs);
+                    cond[i] = sg != 0;
+                    kc[i] *= sg;
+                }
+            }
+            else
+            {
+                for (int i = 0; i < Fine; i++) cond[i] = Norm(360.0 * i / Fine - on) < 180;
+            }
         }
-        return new OperatingModel(d, parallel, lPhUh, lineRmsPerW, phaseRmsPerW, wire.CopperAreaMm2, polePairs, kc, cond);
+        return new OperatingModel(d, parallel, lPhUh, lineRmsPerW, phaseRmsPerW, wire.CopperAreaMm2, polePairs, kc, cond, d.Phases == 3 ? null : plan, planOhm);
     }
 
     /// <summary>The generator and motor points with every EMF times <paramref name="emfFactor"/> and the phase at <paramref name="ohmPhHot"/>.</summary>
@@ -76,7 +98,10 @@ internal sealed class OperatingModel
         }
         double ratio = _parallel ? 1.0 / d.CoilsPerStator : 1;
         var g1 = OperatingPoints.Generator(1, emfFactor * w * _phaseRmsPerW, ohmPhHot, _lPh, op.LoadResistanceOhm, d.RatedRpm, _p, ratio, _areaMm2);
-        var m1 = OperatingPoints.Motor("pulse", op.SupplyVoltageV, op.SwitchDropV, ohmPhHot, Scale(_kc, emfFactor), _cond, d.RatedRpm, ratio, _areaMm2);
+        // With a plan, its path resistance holds the phase at the plan's resistance: the phase's change is carried over.
+        var m1 = _plan is { } pl
+            ? OperatingPoints.Motor("pulse", pl.SupplyV, pl.SwitchDropsV, pl.PathResistanceOhm - _planOhm + ohmPhHot, Scale(_kc, emfFactor), _cond, d.RatedRpm, ratio, _areaMm2)
+            : OperatingPoints.Motor("pulse", op.SupplyVoltageV, op.SwitchDropV, ohmPhHot, Scale(_kc, emfFactor), _cond, d.RatedRpm, ratio, _areaMm2);
         return (g1, m1);
     }
 

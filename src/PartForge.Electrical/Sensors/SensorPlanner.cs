@@ -22,13 +22,21 @@ namespace PartForge.Electrical.Sensors;
 /// sees changes sign, so p phi = p theta_on + 90 (+ multiples of 180 with inversion). A reed switch closes on
 /// either pole at a field-strength threshold: the same angle is reported, but the edge then depends on the
 /// reed's pull-in distance (not modelled) and it fires once per magnet, i.e. twice per electrical period.
+///
+/// Same-pole magnets: one electrical period is one magnet pitch (the caller passes twice the magnet count as
+/// poles). The field a sensor sees peaks over each magnet (the same pole every time), so the sensor is centred on a passing
+/// magnet at the middle of the conduction half-period (p phi = theta_on + 90, the same angle); a threshold sensor
+/// (reed, unipolar Hall) closes once per magnet, every closure in the driving half.
 /// </summary>
 public static class SensorPlanner
 {
     /// <summary>Plans the sensors. <paramref name="phaseZeroCrossElecDeg"/>: per phase, the electrical angle of its positive-going EMF zero crossing (fundamental).</summary>
     public static SensorLayout Plan(SensorSpec sensor, int poles, int phases, CoilOutline outline, int coils,
-        IReadOnlyList<double> phaseZeroCrossElecDeg, List<Diagnostic> diagnostics)
+        IReadOnlyList<double> phaseZeroCrossElecDeg, List<Diagnostic> diagnostics, bool fieldReverses = true)
     {
+        // Same-pole magnets (fieldReverses false): the field a sensor sees never changes sign, so a sensor cannot be
+        // moved half an electrical period with its output inverted; only whole periods (step 2 in j below).
+        int step = fieldReverses ? 1 : 2;
         int p = poles / 2;
         double r = outline.PitchRadiusMm;
         if (sensor.Kind == SensorKind.None)
@@ -45,7 +53,7 @@ public static class SensorPlanner
             {
                 double nominalElec = phaseZeroCrossElecDeg[x] + 120 - adv;
                 SensorPlacement? best = null;
-                for (int j = 0; j < 2 * p; j++)
+                for (int j = 0; j < 2 * p; j += step)
                 {
                     double ang = Norm((nominalElec + 180.0 * j) / p);
                     if (placed.Any(s => AngleDist(s.AngleDeg, ang) < 1e-6)) continue;
@@ -71,7 +79,7 @@ public static class SensorPlanner
         if (count != 1)
             diagnostics.Add(new Diagnostic("sensor-count-1phase", DiagnosticSeverity.Warning, "sensor.count",
                 "a 1-phase pulse drive needs one timing sensor; set sensor.count: 1 (one sensor is reported)."));
-        for (int j = 0; j < 2 * p; j++)
+        for (int j = 0; j < 2 * p; j += step)
         {
             double ang = Norm((nominal + 180.0 * j) / p);
             var cand = Make("S", ang, r, p, j % 2 == 1, outline, coils, sensor.Body);
@@ -83,7 +91,9 @@ public static class SensorPlanner
         return new SensorLayout
         {
             Kind = sensor.Kind, Sensors = new[] { b1 }, SwitchOnElecDeg = NormSigned(on),
-            Rule = sensor.Kind == SensorKind.Reed
+            Rule = !fieldReverses
+                ? "sensor centred on a passing magnet at mid-conduction (same-pole magnets: the field it sees peaks once per magnet, one closure per magnet, so every pulse drives; EMF zero crossing going positive, minus the advance, to half a period later)."
+                : sensor.Kind == SensorKind.Reed
                 ? "reed centred where the field changes sign when the coil must switch on (EMF zero crossing going positive, minus the advance); the real edge depends on the reed's pull-in distance."
                 : "hall where the field it sees changes sign at the instant the coil must switch on (EMF zero crossing going positive, minus the advance).",
         };

@@ -23,7 +23,8 @@ public static class BomBuilder
 
         string grade = m.BrGiven ? $"NdFeB, Br {F(m.BrTesla)} T" : $"NdFeB {m.Grade}";
         lines.Add(new BomLine("magnets", $"{m.Shape.Kind.Word} magnet", $"{m.Shape.Describe()}, {grade}, magnetised through the thickness",
-            d.Poles * rotors, "pcs", $"{d.Poles} per rotor x {rotors} rotor{(rotors > 1 ? "s" : "")}"));
+            d.Poles * rotors, "pcs", $"{d.Poles} per rotor x {rotors} rotor{(rotors > 1 ? "s" : "")}"
+                + (m.Arrangement == MagnetArrangement.Same ? "; all with the same pole toward the coils (magnets.arrangement: same), not alternating" : "")));
 
         string wire = d.Coils.Wire.Awg is { } awg ? $"AWG {awg}" : $"bare D{F(d.Coils.Wire.BareDiameterMm ?? 0)} mm";
         double buy = WireSpare.ToBuyM(electricalWireTotalM);
@@ -65,9 +66,36 @@ public static class BomBuilder
         {
             string kind = d.Sensor.Kind == SensorKind.Hall ? "Hall-effect switch or latch" : "reed switch";
             var b = d.Sensor.Body;
-            lines.Add(new BomLine("sensors", kind, $"body about {F(b.LengthMm)} x {F(b.WidthMm)} x {F(b.HeightMm)} mm", d.Sensor.Count, "pcs",
+            lines.Add(new BomLine("sensors", kind, $"body about {F(b.LengthMm)} x {F(b.WidthMm)} x {F(b.HeightMm)} mm; switches on at {F(d.Sensor.OperateTesla * 1000)} mT, off at {F(d.Sensor.ReleaseTesla * 1000)} mT", d.Sensor.Count, "pcs",
                 "timing sensor(s) seated in the stator ring"));
         }
+        if (d.RunsAsMotor)
+        {
+            var dv = d.Drive;
+            int circuits = d.Phases;
+            (int switches, int diodes) = dv.Switching switch
+            {
+                SwitchingKind.SixStep => (6, 6),
+                SwitchingKind.Bipolar => (4 * circuits, 4 * circuits),
+                _ => (circuits, circuits),
+            };
+            bool reedSwitches = d.Sensor.Kind == SensorKind.Reed && dv.Switching == SwitchingKind.Unipolar;
+            if (!reedSwitches)
+                lines.Add(new BomLine("drive", dv.Switching == SwitchingKind.Unipolar ? "switching transistor" : "bridge transistor",
+                    $"rated at least {F(dv.SwitchCurrentRatingA)} A and {F(dv.SwitchVoltageRatingV)} V", switches, "pcs", $"{Words.Of(dv.Switching)} drive, switched by the timing sensor"));
+            if (dv.HasFreewheel)
+                lines.Add(new BomLine("drive", $"{Words.Of(dv.Diode)} freewheel diode", $"rated at least {F(dv.SwitchCurrentRatingA)} A and {F(dv.SwitchVoltageRatingV)} V",
+                    diodes, "pcs", dv.Switching == SwitchingKind.Unipolar ? "across each coil circuit, cathode to the supply's + (flyback)" : "across each bridge transistor"));
+        }
+        if (d.RunsAsGenerator && d.Load.Rectifier != RectifierKind.None)
+            lines.Add(new BomLine("load", $"{Words.Of(d.Load.Diode)} rectifier diode", $"{Words.Of(d.Load.Rectifier)} rectifier, rated above the open-circuit peak at machine.max_rpm",
+                (d.Load.Rectifier == RectifierKind.Bridge ? 4 : 1) * d.Phases, "pcs", "one rectifier per phase circuit"));
+        if (d.Storage is CapacitorStorage cap)
+            lines.Add(new BomLine("storage", "capacitor", $"{F(cap.CapacitanceF)} F, rated {F(cap.RatedVoltageV)} V, ESR about {F(cap.EsrOhm)} ohm", 1, "pcs",
+                "observe its polarity; never charge it above its rated voltage"));
+        else if (d.Storage is BatteryStorage bat)
+            lines.Add(new BomLine("storage", "battery", $"{F(bat.VoltageV)} V, internal resistance about {F(bat.InternalResistanceOhm)} ohm", 1, "pcs",
+                "fuse it close to its terminals; follow the maker's charging limits"));
         return new BillOfMaterials(d.Name, lines);
     }
 

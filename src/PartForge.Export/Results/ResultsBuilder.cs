@@ -55,7 +55,11 @@ public static class ResultsBuilder
                 g.CopperLossW, g.Efficiency, g.ShaftTorqueNm, g.CurrentDensityAPerMm2),
             m is null ? null : new MotorEntry(m.Drive, m.SupplyVoltageV, m.SwitchDropV, m.PathResistanceOhm, m.NoLoadRpm, m.StallTorqueNm,
                 m.StallCurrentA, m.RatedRpm, m.CurrentAtRatedA, m.TorqueAtRatedNm, m.OutputPowerAtRatedW, m.InputPowerAtRatedW, m.EfficiencyAtRated,
-                m.CurrentDensityAtRatedAPerMm2, m.CurrentDensityAtStallAPerMm2));
+                m.CurrentDensityAtRatedAPerMm2, m.CurrentDensityAtStallAPerMm2))
+        {
+            Charging = e.Charging,
+            Drive = e.Switching,
+        };
     }
 
     /// <summary>The heat balance's figures (null when no EMF was computed).</summary>
@@ -73,15 +77,19 @@ public static class ResultsBuilder
     {
         var d = ev.Machine;
         double magnetG = d.Magnets.Shape.MassKg * 1000;
-        double rotatingKg = 0;
+        double rotatingKg = 0, inertia = 0;
         if (measured && ev.Parts is { } ps)
+        {
             rotatingKg = ps.Parts.Where(p => p.Rotating).Sum(p => p.MassG * p.Quantity) / 1000 + d.Poles * d.Layout.Rotors.Count * magnetG / 1000;
+            inertia = PartForge.Parts.Mechanics.RotatingAssembly.Of(d, ps).InertiaKgM2;
+        }
         var pull = ev.Electrical.Pull;
         var perRotor = d.Layout.Rotors.Select(r => (r.Name, pull?.RotorToRotorN ?? 0)).ToArray();
         string method = pull?.Method ?? "no net axial pull on a rotor: a coreless stator holds no iron, and a rotor's pull on its own back iron is internal to it";
         return new MechanicsSection(rotatingKg, magnetG, perRotor, method)
         {
             PullCurve = pull?.AssemblyCurve.Select(c => (c.FaceToFaceMm, c.PullN)).ToArray() ?? Array.Empty<(double, double)>(),
+            RotatingInertiaKgM2 = inertia,
         };
     }
 

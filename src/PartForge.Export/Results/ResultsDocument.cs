@@ -139,7 +139,14 @@ public sealed record ThermalSection(string Point, double AmbientC, double CoilTe
     double FormerConductivityWPerMK, double ConvectionWPerM2K, int FieldPasses);
 
 /// <summary>The operating points at rated speed: as a generator into the load, and as a motor on the supply (null when not computed).</summary>
-public sealed record OperatingSection(double Rpm, GeneratorEntry? Generator, MotorEntry? Motor);
+public sealed record OperatingSection(double Rpm, GeneratorEntry? Generator, MotorEntry? Motor)
+{
+    /// <summary>The generator charging its store through the rectifier (<c>operating.charging</c>; null without one).</summary>
+    public PartForge.Electrical.Operation.ChargingPoint? Charging { get; init; }
+
+    /// <summary>The drive as the sensors switch it (<c>operating.drive</c>; null without one).</summary>
+    public PartForge.Electrical.Switching.SwitchingPlan? Drive { get; init; }
+}
 
 public sealed record GeneratorEntry(double Rpm, double LoadResistanceOhm, double CurrentA, double CoilCurrentA, double TerminalVoltageV,
     double OutputPowerW, double CopperLossW, double Efficiency, double ShaftTorqueNm, double CurrentDensityAPerMm2);
@@ -157,6 +164,9 @@ public sealed record MechanicsSection(double RotatingMassKg, double MagnetMassG,
     /// <summary>The pull between the rotors against the face-to-face gap of their magnets while they are brought
     /// together (<c>pull_curve</c>; empty unless dual-rotor), first point at the running gap.</summary>
     public IReadOnlyList<(double FaceToFaceMm, double PullN)> PullCurve { get; init; } = Array.Empty<(double, double)>();
+
+    /// <summary>Moment of inertia of everything that turns about the axis, kg m^2 (<c>rotating_inertia_kg_m2</c>; 0 when the parts were not measured).</summary>
+    public double RotatingInertiaKgM2 { get; init; }
 }
 
 /// <summary>One line of the bill of materials.</summary>

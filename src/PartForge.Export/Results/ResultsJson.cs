@@ -1,3 +1,4 @@
+using PartForge.Design.Machines;
 using System.Globalization;
 using System.Text;
 using System.Text.Json;
@@ -280,6 +281,63 @@ public static class ResultsJson
             w.WriteEndObject();
         }
         else w.WriteNull("motor");
+        if (o.Charging is { } c)
+        {
+            w.WriteStartObject("charging");
+            w.WriteString("rectifier", Words.Of(c.Rectifier));
+            Num(w, "store_voltage_v", c.StoreVoltageV, "operating.charging.store_voltage_v");
+            Num(w, "drops_v", c.DropsV, "operating.charging.drops_v");
+            Num(w, "path_resistance_ohm", c.PathResistanceOhm, "operating.charging.path_resistance_ohm");
+            Num(w, "cut_in_rpm", c.CutInRpm, "operating.charging.cut_in_rpm");
+            Num(w, "current_at_rated_a", c.CurrentAtRatedA, "operating.charging.current_at_rated_a");
+            Num(w, "power_at_rated_w", c.PowerAtRatedW, "operating.charging.power_at_rated_w");
+            Num(w, "open_circuit_peak_at_max_rpm_v", c.OpenCircuitPeakAtMaxRpmV, "operating.charging.open_circuit_peak_at_max_rpm_v");
+            Num(w, "reachable_at_rated_v", c.ReachableAtRatedV, "operating.charging.reachable_at_rated_v");
+            if (c.ChargeTargetV is { } tv) Num(w, "charge_target_v", tv, "operating.charging.charge_target_v"); else w.WriteNull("charge_target_v");
+            if (c.TimeToChargeS is { } ts) Num(w, "time_to_charge_s", ts, "operating.charging.time_to_charge_s"); else w.WriteNull("time_to_charge_s");
+            w.WriteStartArray("curve");
+            foreach (var p in c.Curve)
+            {
+                w.WriteStartObject();
+                Num(w, "rpm", p.Rpm, "operating.charging.curve.rpm");
+                Num(w, "current_a", p.CurrentA, "operating.charging.curve.current_a");
+                Num(w, "power_w", p.PowerW, "operating.charging.curve.power_w");
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
+        if (o.Drive is { } dr)
+        {
+            w.WriteStartObject("drive");
+            w.WriteString("switching", Words.Of(dr.Switching));
+            w.WriteString("sensor", Words.Of(dr.Sensor));
+            Num(w, "operate_mt", dr.OperateTesla * 1000, "operating.drive.operate_mt");
+            Num(w, "release_mt", dr.ReleaseTesla * 1000, "operating.drive.release_mt");
+            Num(w, "sensor_field_min_mt", dr.FieldMinTesla * 1000, "operating.drive.sensor_field_min_mt");
+            Num(w, "sensor_field_max_mt", dr.FieldMaxTesla * 1000, "operating.drive.sensor_field_max_mt");
+            w.WriteNumber("driving_pulses", dr.DrivingPulses);
+            w.WriteNumber("braking_pulses", dr.BrakingPulses);
+            Num(w, "peak_current_a", dr.PeakCurrentA, "operating.drive.peak_current_a");
+            Num(w, "turn_off_voltage_v", dr.TurnOffVoltageV, "operating.drive.turn_off_voltage_v");
+            Num(w, "mean_stall_torque_nm", dr.MeanStallTorqueNm, "operating.drive.mean_stall_torque_nm");
+            Num(w, "self_start_share", dr.SelfStartShare, "operating.drive.self_start_share");
+            w.WriteStartArray("windows");
+            for (int ci = 0; ci < dr.Circuits.Count; ci++)
+                foreach (var win in dr.Circuits[ci].Windows)
+                {
+                    w.WriteStartObject();
+                    w.WriteString("phase", dr.Circuits[ci].Phase.ToString());
+                    Num(w, "on_deg", win.OnDeg, "operating.drive.windows.on_deg");
+                    Num(w, "off_deg", win.OffDeg, "operating.drive.windows.off_deg");
+                    w.WriteNumber("sign", win.Sign);
+                    Num(w, "flux_change_wb", win.FluxChangeWb, "operating.drive.windows.flux_change_wb");
+                    w.WriteBoolean("brakes", win.Brakes);
+                    w.WriteEndObject();
+                }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
         w.WriteEndObject();
     }
 
@@ -287,6 +345,7 @@ public static class ResultsJson
     {
         w.WriteStartObject("mechanics");
         Num(w, "rotating_mass_kg", m.RotatingMassKg, "mechanics.rotating_mass_kg");
+        Num(w, "rotating_inertia_kg_m2", m.RotatingInertiaKgM2, "mechanics.rotating_inertia_kg_m2");
         Num(w, "magnet_mass_g", m.MagnetMassG, "mechanics.magnet_mass_g");
         w.WriteStartObject("pull_n");
         foreach (var (part, n) in m.PullN) Num(w, part, n, "mechanics.pull_n." + part);

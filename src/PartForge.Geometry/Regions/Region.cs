@@ -56,6 +56,36 @@ public sealed class Region
         }
     }
 
+    /// <summary>
+    /// Polar second moment of the region about the origin, Int (x^2 + y^2) dA, mm^4: each ring's exact polygon
+    /// formula (Green's theorem), J = 1/12 Sum (x_i y_(i+1) - x_(i+1) y_i)(x_i^2 + x_i x_(i+1) + x_(i+1)^2 + y_i^2 + y_i y_(i+1) + y_(i+1)^2),
+    /// the shell's counted positive and each hole's negative.
+    /// </summary>
+    public double PolarMomentMm4
+    {
+        get
+        {
+            double j = 0;
+            foreach (var poly in Polygons)
+            {
+                j += Math.Abs(RingMoment(poly.ExteriorRing.Coordinates));
+                foreach (var hole in poly.InteriorRings) j -= Math.Abs(RingMoment(hole.Coordinates));
+            }
+            return j;
+        }
+    }
+
+    private static double RingMoment(Coordinate[] c)
+    {
+        double s = 0;
+        for (int i = 0; i + 1 < c.Length; i++)
+        {
+            double x0 = c[i].X, y0 = c[i].Y, x1 = c[i + 1].X, y1 = c[i + 1].Y;
+            s += (x0 * y1 - x1 * y0) * (x0 * x0 + x0 * x1 + x1 * x1 + y0 * y0 + y0 * y1 + y1 * y1);
+        }
+        return s / 12;
+    }
+
     /// <summary>The polygons of the region (each with outer CCW and holes CW).</summary>
     public IReadOnlyList<Polygon> Polygons
     {

@@ -34,6 +34,10 @@ public sealed class LayeredSolid
     /// <summary>Sum over layers of region area x height (mm^3): the exact volume of the discretised solid.</summary>
     public double AnalyticVolume => Layers.Sum(l => l.Volume);
 
+    /// <summary>Int (x^2 + y^2) dV about the z axis, mm^5: each layer's polar second moment times its height (times a
+    /// density, the moment of inertia about the axis).</summary>
+    public double AnalyticPolarMomentMm5 => Layers.Sum(l => l.Region.PolarMomentMm4 * l.HeightMm);
+
     public bool IsEmpty => Layers.All(l => l.Region.IsEmpty);
 
     /// <summary>Lowest and highest z of any non-empty layer, or (0, 0) when empty.</summary>

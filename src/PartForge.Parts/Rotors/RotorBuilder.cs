@@ -29,6 +29,9 @@ namespace PartForge.Parts.Rotors;
 /// dual-rotor machine has the same pockets (the mirror of the front's pattern, which is symmetric) and its dots at
 /// the odd pockets: assembled with both index notches on the same side, every front magnet presents the opposite
 /// pole to the back magnet facing it, so they attract across the stator (the field runs straight through the coils).</item>
+/// <item>Same-pole magnets (<c>magnets.arrangement: same</c>): every pocket is marked like pocket 0, so the front (or
+/// only) rotor has a dot at every pocket and the back rotor none (all its magnets south pole up, facing the front's
+/// north poles across the stator).</item>
 /// <item>Bolt hole j at j x 360 / count on the bolt circle; bore centred.</item>
 /// </list>
 /// </summary>
@@ -122,11 +125,14 @@ internal static class RotorBuilder
         if (notch > 0) features.Add(new("index-notch", FeatureKind.IndexNotch, 0, Contour.FullCircle(new Vec2(R, 0), notch), 0, t, 0, R));
 
         double pitch = d.Magnets.Shape.PitchRadiusMm;
+        bool same = d.Magnets.Arrangement == MagnetArrangement.Same;
+        string countHint = same ? "every magnet the same way up as pocket 0's" : "count north-up magnets from pocket 0 (even pockets on the front rotor)";
         var dots = new List<Contour>();
         for (int i = 0; i < poles; i++)
         {
             double a = DesignGeometry.PoleAngleDeg(d, i);
-            bool northUp = (i % 2 == 0) == evenNorthUp;
+            // Same-pole magnets: every pocket as pocket 0 (all north-up on the front rotor, all south-up on the back).
+            bool northUp = (same || i % 2 == 0) == evenNorthUp;
             features.Add(new($"pocket-{i}", FeatureKind.MagnetPocket, i, pockets[i], pocketZ0, t, a, pitch) { NorthUp = northUp });
             if (northUp && dotRadius is { } rDot)
             {
@@ -136,13 +142,17 @@ internal static class RotorBuilder
             }
         }
         if (dotRadius is null && !rd.PolarityDots)
-            notes.Add("no polarity dots (rotor.marks: none): mark each magnet's north pole yourself, and count north-up magnets from pocket 0 (even pockets on the front rotor)");
+            notes.Add("no polarity dots (rotor.marks: none): mark each magnet's north pole yourself, and " + countHint);
         else if (dotRadius is null)
         {
-            notes.Add("no polarity dots: there is no room beside the pockets; count north-up magnets from pocket 0 (even pockets on the front rotor)");
+            notes.Add("no polarity dots: there is no room beside the pockets; " + countHint);
             diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, id, "no-polarity-marks", $"{name}: no room beside the pockets for polarity dots; left out"));
         }
 
+        if (same)
+            notes.Add(evenNorthUp
+                ? "same-pole magnets (magnets.arrangement: same): every magnet north pole up (toward the top face), a dot beside every pocket"
+                : "same-pole magnets (magnets.arrangement: same): every magnet south pole up (toward the top face), so this disc has no dots; each magnet attracts the front-rotor magnet facing it");
 
         var st = new PrismaticStack(t).Outer(rim);
         if (bore is not null) st.Through(bore);

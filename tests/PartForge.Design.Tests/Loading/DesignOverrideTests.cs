@@ -19,7 +19,7 @@ public class DesignOverrideTests
         Assert.Equal("machine.poles", e.KeyPath);
         Assert.True(e.FromOverride);
         Assert.Equal(0, e.Line);
-        Assert.Equal("c.yaml: machine.poles (override): 13 is not allowed; allowed: an even number (magnets alternate north and south)", e.ToString());
+        Assert.Equal("c.yaml: machine.poles (override): 13 is not allowed; allowed: an even number (magnets alternate north and south); use an even number, or magnets.arrangement: same (every magnet shows one pole to the coils, any count)", e.ToString());
     }
 
     [Fact]

@@ -69,10 +69,10 @@ public class HtmlReportTests
                     Assert.Equal(bc.Count, dims["bolt_count"]);
                     Assert.Equal(bc.Hole, dims["bolt_hole"]);
                 }
-                // One polarity badge per pocket, alternating N/S around the rotor.
+                // One polarity badge per pocket, alternating N/S around the rotor (all N with same-pole magnets).
                 var poles = svg.Descendants().Where(e => e.Attribute("data-pole") != null).Select(e => e.Attribute("data-pole")!.Value).ToList();
                 Assert.Equal(d.Machine.Poles, poles.Count);
-                Assert.Equal(d.Machine.Poles / 2, poles.Count(p => p == "N"));
+                Assert.Equal(d.Magnets.Arrangement == "same" ? d.Machine.Poles : d.Machine.Poles / 2, poles.Count(p => p == "N"));
             }
             else if (name.StartsWith("stator", StringComparison.Ordinal))
             {

@@ -12,4 +12,11 @@ public sealed record MagnetSet(MagnetShape Shape, string Grade, double BrTesla, 
 
     /// <summary>Maximum working temperature of the grade's suffix, C (<see cref="Materials.MagnetGrades.MaxWorkingTemperatureC"/>; used even when <c>magnets.br</c> is given).</summary>
     public double MaxWorkingTemperatureC => Materials.MagnetGrades.MaxWorkingTemperatureC(Grade);
+
+    /// <summary>How the poles face the coils (<c>magnets.arrangement</c>).</summary>
+    public MagnetArrangement Arrangement { get; init; } = MagnetArrangement.Alternating;
+
+    /// <summary>The sign of magnet k's magnetisation along +z on the front (or only) rotor: alternating +1, -1, ...,
+    /// or +1 for every magnet when they all show the same pole.</summary>
+    public int SignOf(int k) => Arrangement == MagnetArrangement.Same || k % 2 == 0 ? 1 : -1;
 }
