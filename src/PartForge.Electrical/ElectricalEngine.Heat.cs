@@ -33,7 +33,7 @@ public static partial class ElectricalEngine
     /// </summary>
     private static HeatOutcome Heat(MachineModel d, FluxQuadrature q, CoilWinding coil, FluxLinkageSeries seriesAmbient, double brAmbient,
         IReadOnlyList<BackIronFluxResult> ironAmbient, WindingLayout layout, char[] phaseNames, double mult, bool parallel,
-        Func<double, double> ohmPhAt, double lPh, WireSpec wire, int p)
+        Func<double, double> ohmPhAt, double lPh, WireSpec wire, int p, Switching.SwitchingPlan? plan, double planOhm)
     {
         double br20 = d.Magnets.BrTesla, ambient = d.Operation.AmbientC;
         // The reversible coefficient holds up to the grade's maximum working temperature; beyond it the loss is not
@@ -51,7 +51,7 @@ public static partial class ElectricalEngine
         {
             passes++;
             var k = phaseNames.Select(x => PhaseHarmonics(series, layout, x, mult)).ToArray();
-            var model = OperatingModel.Of(d, k, series.Orders, parallel, lPh, wire, p);
+            var model = OperatingModel.Of(d, k, series.Orders, parallel, lPh, wire, p, plan, planOhm);
             double brBase = brField;
             double Loss(double t)
             {

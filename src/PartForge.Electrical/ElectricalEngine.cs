@@ -133,7 +133,20 @@ public static partial class ElectricalEngine
 
         var seriesAmbient = CoilFlux.Compute(field, coil.Outline, turns, q);
         var phaseNames = phases == 3 ? new[] { 'A', 'B', 'C' } : new[] { 'A' };
-        var heat = Heat(d, q, coil, seriesAmbient, brAmbient, ironFlux, layout, phaseNames, mult, parallel, OhmPhAt, lPh, wire, p);
+        // The switching plan with the magnets and the winding at the air's temperature: the heat balance's motor loss
+        // flows in the windows the sensor really gives (the plan is made again at the hot resistance for the results;
+        // its windows are taken from the cool field).
+        double planColdOhm = OhmPhAt(ambient);
+        var kCold = phaseNames.Select(x => PhaseHarmonics(seriesAmbient, layout, x, mult)).ToArray();
+        var sensorsCold = SensorPlanner.Plan(d.Sensor, d.ElectricalPoles, phases, coil.Outline, coils,
+            kCold.Select(kk => Norm(-90 - kk[0].Phase * 180 / Math.PI)).ToArray(), new List<Diagnostic>(), !same);
+        var phaseFluxCold = kCold.Select((kk, x) => new PhaseFlux(phaseNames[x], seriesAmbient.Orders.Select((n, i) =>
+        {
+            Complex lam = kk[i] / (Complex.ImaginaryOne * n * p);
+            return new FluxTerm(n * p, lam.Real, -lam.Imaginary);
+        }).ToArray())).ToArray();
+        var planCold = SwitchingPlanner.Plan(d, field, sensorsCold, phaseFluxCold, planColdOhm, lPh * 1e-6);
+        var heat = Heat(d, q, coil, seriesAmbient, brAmbient, ironFlux, layout, phaseNames, mult, parallel, OhmPhAt, lPh, wire, p, planCold, planColdOhm);
         var series = heat.Series;
         double tCoil = heat.Thermal.CoilTemperatureC;
         double ohmPhHot = OhmPhAt(tCoil);
@@ -239,7 +252,7 @@ public static partial class ElectricalEngine
                 for (int i = 0; i < fine; i++) rect[i] = d.Load.Rectifier == RectifierKind.Bridge ? Math.Abs(w1[i]) : Math.Max(0, w1[i]);
                 rPath = ohmPhHot;
             }
-            charging = Charging.Point(d, rect, rPath);
+            charging = Charging.Point(d, rect, rPath, coldFactor);
         }
 
         // Only the role's operating points (machine.role; never inferred from the sensor).

@@ -42,8 +42,9 @@ public sealed record FluxLinkageSeries
         return s;
     }
 
-    /// <summary>The series of sources <paramref name="factor"/> times as strong (the field is linear in the magnets' Br while no steel saturates).</summary>
-    public FluxLinkageSeries Scaled(double factor) => this with { CoefficientsWb = CoefficientsWb.Select(c => c * factor).ToArray() };
+    /// <summary>The series of sources <paramref name="factor"/> times as strong (the field is linear in the magnets' Br while no steel saturates).
+    /// The steady part (same-pole magnets) scales with the rest.</summary>
+    public FluxLinkageSeries Scaled(double factor) => this with { OffsetWb = OffsetWb * factor, CoefficientsWb = CoefficientsWb.Select(c => c * factor).ToArray() };
 
     /// <summary>Largest |lambda| over one electrical period, Wb-turns (sampled, then refined; see HarmonicSynth.Peak).</summary>
     public double PeakWb() => OffsetWb == 0

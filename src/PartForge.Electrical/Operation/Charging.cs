@@ -34,8 +34,10 @@ public static class Charging
     }
 
     /// <summary>The charging point of a machine, or null without a store and rectifier.
-    /// <paramref name="rectifiedEmfPerRadS"/>: the rectified EMF per unit speed over one electrical period.</summary>
-    public static ChargingPoint? Point(MachineModel d, IReadOnlyList<double> rectifiedEmfPerRadS, double pathWindingOhm)
+    /// <paramref name="rectifiedEmfPerRadS"/>: the rectified EMF per unit speed over one electrical period (magnets at their
+    /// operating temperature); <paramref name="coldFactor"/>: the EMF of cool magnets (at the air's temperature) over
+    /// that, for the open-circuit peak at max_rpm: a machine just started has cool magnets and the higher voltage.</summary>
+    public static ChargingPoint? Point(MachineModel d, IReadOnlyList<double> rectifiedEmfPerRadS, double pathWindingOhm, double coldFactor = 1)
     {
         if (d.Load.Rectifier == RectifierKind.None || d.Storage is NoStorage) return null;
         double drops = d.Load.DropsInPath * DriveSpec.DropOf(d.Load.Diode);
@@ -76,7 +78,7 @@ public static class Charging
         {
             Rectifier = d.Load.Rectifier, StoreVoltageV = v, DropsV = drops, PathResistanceOhm = r,
             CutInRpm = double.IsFinite(cutIn) ? cutIn : 0, CurrentAtRatedA = iRated, PowerAtRatedW = iRated * v, Curve = curve,
-            OpenCircuitPeakAtMaxRpmV = Math.Max(0, kPeak * W(d.MaxRpm) - drops), ReachableAtRatedV = reachable,
+            OpenCircuitPeakAtMaxRpmV = Math.Max(0, kPeak * coldFactor * W(d.MaxRpm) - drops), ReachableAtRatedV = reachable,
             ChargeTargetV = target, TimeToChargeS = time, StoredEnergyAtRatedJ = energy,
         };
     }

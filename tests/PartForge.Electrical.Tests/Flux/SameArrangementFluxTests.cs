@@ -82,6 +82,10 @@ public class SameArrangementFluxTests
         double xi = shape.PitchRadiusMm - shape.LengthMm / 2;
         var s = Rule(0, 1, 12);
         var t = Rule(0, 1, 8);
+        // The engine evaluates the magnets at their operating temperature (the heat balance; Br's fall with temperature is
+        // tested in Thermal/): the integration takes the Br the engine reports for it.
+        double br = e.Magnet.BrOperatingTesla;
+        Assert.True(br > 0.5 * m.Magnets.BrTesla && br <= m.Magnets.BrTesla, $"Br at the operating temperature {br} T ({e.Thermal!.MagnetTemperatureC} C)");
         double Bz(double x, double y, double z, double theta)
         {
             double b = 0;
@@ -89,7 +93,7 @@ public class SameArrangementFluxTests
             {
                 double a = -(k * 2 * Math.PI / m.Poles + theta), ca = Math.Cos(a), sa = Math.Sin(a);
                 double u = x * ca - y * sa, v = x * sa + y * ca;
-                b += m.Magnets.BrTesla * (FaceBz(xi, shape.InnerWidthMm, shape.OuterWidthMm, shape.LengthMm, magnet.ZMax, u, v, z, s, t)
+                b += br * (FaceBz(xi, shape.InnerWidthMm, shape.OuterWidthMm, shape.LengthMm, magnet.ZMax, u, v, z, s, t)
                                         - FaceBz(xi, shape.InnerWidthMm, shape.OuterWidthMm, shape.LengthMm, magnet.ZMin, u, v, z, s, t));
             }
             return b;

@@ -109,12 +109,13 @@ public class CoilHeatTests
     // The motor's copper loss is its path current's mean square times the path resistance, and it heats the coils when the
     // machine has a sensor (driven as a motor).
     [Fact]
-    public void Motor_point_heats_a_sensored_machine()
+    public void A_motor_generator_heats_at_the_harder_of_its_two_points()
     {
+        // machine.role decides (never the sensor): a motor-generator is judged at the larger copper loss.
         var r = ElectricalEngine.Evaluate(MachineModel.From(TestDesigns.Pulse()));
         var t = r.Thermal!;
-        Assert.Equal(PartForge.Electrical.Operation.OperatingMode.Motor, t.Point);
-        Assert.Equal(r.Motor!.CopperLossAtRatedW, t.CopperLossW, 9);
+        Assert.Equal(PartForge.Electrical.Operation.OperatingMode.Both, t.Point);
+        Assert.Equal(Math.Max(r.Motor!.CopperLossAtRatedW, r.Generator!.CopperLossW), t.CopperLossW, 9);
         Assert.True(t.CopperLossW > 0);
     }
 
