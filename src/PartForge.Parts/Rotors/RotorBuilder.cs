@@ -74,7 +74,12 @@ internal static class RotorBuilder
         string whyNot = through ? "" : "its magnet pockets are blind (rotor.pocket_floor > 0)";
         var (process, material) = ProcessChoice.Resolve(id, d.Parts.For(PartRole.Rotor), through, whyNot, diags);
         var pocket0 = DesignGeometry.RelievedPocketOutline(d, process);
-        if (pocket0.Circle is null && pocket0.Segments.Count > DesignGeometry.PocketOutline(d).Segments.Count)
+        if (!DesignGeometry.PocketReliefFits(d, process))
+        {
+            notes.Add($"{name}: no corner reliefs in the magnet pockets: a side of the pocket is too short for them; a magnet of the nominal size may not seat in the corners");
+            diags.Add(new PartDiagnostic(DiagnosticSeverity.Note, id, "no-corner-relief", $"{name}: the magnet pockets are too small for corner reliefs; left out"));
+        }
+        else if (pocket0.Circle is null && pocket0.Segments.Count > DesignGeometry.PocketOutline(d).Segments.Count)
             notes.Add(process == PartProcess.Print
                 ? $"{name}: each magnet pocket corner has a relief circle (radius from printer.nozzle {d.Printer.NozzleMm.ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)} mm) so a magnet of the nominal size seats in the corners"
                 : $"{name}: each magnet pocket corner has a dog-bone notch (radius kerf/2 + 0.02 mm, kerf {d.Cutter.KerfMm.ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)} mm) so a magnet of the nominal size seats in the corners");

@@ -45,18 +45,24 @@ public static class DesignGeometry
         : m.Cutter.KerfMm > 0 ? new DogBoneRelief(m.Cutter.KerfMm / 2) : null;
 
     /// <summary>Magnet pocket 0 as made: <see cref="PocketOutline"/> with its unreachable corners relieved (<see cref="PocketRelief"/>);
-    /// a pocket without corners (a disc's) is unchanged.</summary>
-    public static Contour RelievedPocketOutline(MachineModel m, PartProcess process)
+    /// a pocket without corners (a disc's) is unchanged, and so is one too small for the reliefs (<see cref="PocketReliefFits"/>).</summary>
+    public static Contour RelievedPocketOutline(MachineModel m, PartProcess process) => Relieved(m, process).Pocket;
+
+    /// <summary>False when the pocket has corners to relieve but is too small for the reliefs (a side shorter than two notches):
+    /// then it is left as drawn, and the rotor builder says so.</summary>
+    public static bool PocketReliefFits(MachineModel m, PartProcess process) => Relieved(m, process).Fits;
+
+    private static (Contour Pocket, bool Fits) Relieved(MachineModel m, PartProcess process)
     {
         var pocket = PocketOutline(m);
-        if (PocketRelief(m, process) is not { } rule) return pocket;
+        if (PocketRelief(m, process) is not { } rule) return (pocket, true);
         try
         {
-            return CornerRelief.RelieveHole(pocket, rule, m.Precision);
+            return (CornerRelief.RelieveHole(pocket, rule, m.Precision), true);
         }
-        catch (ArgumentException e)
+        catch (ArgumentException)
         {
-            throw new PartsException($"the magnet pocket's corner reliefs do not fit the pocket ({e.Message}); make the magnet larger or the nozzle (printer.nozzle) or kerf (cutter.kerf) smaller");
+            return (pocket, false);
         }
     }
 
