@@ -13,14 +13,14 @@ namespace PartForge.Hardening.Tests.Pipeline;
 /// stable across runs), so a failure reproduces; the message carries the design.
 /// The default suite runs <see cref="DefaultCases"/> designs; the long run of 1,000 is
 /// <c>PF_AGREEMENT_CASES=1000 dotnet test tests/PartForge.Hardening.Tests --filter CheckBuildAgreement</c>
-/// (about 15 minutes on 2 cores).
+/// (measured: 2 min 35 s on 2 shared cores; 443 passed check and built watertight, 505 failed a check, 52 refused).
 /// </summary>
 public sealed class CheckBuildAgreementTests(Xunit.Abstractions.ITestOutputHelper output)
 {
     private const int Seed = 20261203;
 
-    /// <summary>Designs in the default suite (about a minute on 2 cores).</summary>
-    public const int DefaultCases = 80;
+    /// <summary>Designs in the default suite (about 50 s on 2 shared cores; the long run takes 1,000).</summary>
+    public const int DefaultCases = 300;
 
     private static int Cases =>
         int.TryParse(Environment.GetEnvironmentVariable("PF_AGREEMENT_CASES"), NumberStyles.Integer, CultureInfo.InvariantCulture, out int n) && n > 0 ? n : DefaultCases;
