@@ -114,7 +114,9 @@ internal static class HeatRules
             var fixes = new List<string>();
             if (next.Suffix is { Length: > 0 } sfx && number is { } nb)
                 fixes.Add($"a grade for higher temperatures: magnets.grade N{I(nb)}{sfx} (works to about {F(next.MaxC)} C)");
-            fixes.Add("or a cooler coil (see coil-temperature: thicker wire, fewer turns, less current)");
+            fixes.Add(c.E.MotorGoverns
+                ? "or cooler coils (see coil-temperature: a lower operation.supply_voltage or more coils.turns)"
+                : "or cooler coils (see coil-temperature: thicker wire, fewer turns, a larger operation.load_resistance)");
             msg += "; " + string.Join(" ", fixes);
         }
         return new CheckResult

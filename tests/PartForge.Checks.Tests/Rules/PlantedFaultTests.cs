@@ -241,6 +241,8 @@ public class PlantedFaultTests
         Assert.Equal(80, c.Limit, 12);
         Assert.Equal(CheckStatus.Fail, c.Status);
         Assert.Contains("magnets.grade N42M", c.Message);   // the first suffix rated for 85 + 10 C (M, 100 C)
+        Assert.Contains("thicker wire", c.Message);           // a generator's coils cool with thicker wire
+        Assert.Contains("operation.supply_voltage", One(Base.With(m => { m.MagnetTemp = 85; m.Motor = true; }).Check(), CheckIds.MagnetTemperature).Message);
         Assert.Equal(CheckStatus.Warn, One(Base.With(m => m.MagnetTemp = 75).Check(), CheckIds.MagnetTemperature).Status);
         var h = Base.With(m => { m.MagnetTemp = 85; m.Grade = "N42H"; }).Check();
         Assert.Equal(120, One(h, CheckIds.MagnetTemperature).Limit, 12);
