@@ -72,6 +72,7 @@ public static partial class CheckRunner
             CopperLossPerCoilW = e.Thermal?.CopperLossPerCoilW ?? 0,
             CoilThermalResistanceKPerW = e.Thermal?.Cooling.ResistanceKPerW ?? 0,
             MotorGoverns = motor,
+            GeneratorSource = e.Generator is { } g ? (g.SourceEmfRmsV, g.SourceResistanceOhm, g.SourceReactanceOhm, g.SourcePhases, design.CoilsInMachine) : null,
             MagnetTemperatureC = e.Thermal?.MagnetTemperatureC ?? design.Operation.AmbientC,
             SensorAnglesDeg = e.Sensors?.Sensors.Select(s => s.AngleDeg).ToArray() ?? Array.Empty<double>(),
             Diagnostics = e.Diagnostics.Select(d => (d.Id, d.Severity == Electrical.DiagnosticSeverity.Error, d.Key, d.Message, d.Measure)).ToArray(),

@@ -42,6 +42,10 @@ public sealed record ElectricalFacts
     /// <summary>True when the motor point governs (its current heats the coils), false for the generator point.</summary>
     public bool MotorGoverns { get; init; }
 
+    /// <summary>The generator's source per phase at the coils' temperature (null when not computed): EMF V rms, resistance and
+    /// reactance ohm, phases; with the coils in the machine, what the coil-temperature fix recomputes the loss from.</summary>
+    public (double EmfV, double ROhm, double XOhm, int Phases, int Coils)? GeneratorSource { get; init; }
+
     /// <summary>The magnets' estimated operating temperature, C.</summary>
     public double MagnetTemperatureC { get; init; } = 25;
 

@@ -31,6 +31,13 @@ public sealed record GeneratorPoint
     /// <summary>Shaft torque needed, N m (electromagnetic: output + copper loss over the shaft speed).</summary>
     public required double ShaftTorqueNm { get; init; }
 
+    /// <summary>The source the load sees, per phase of the star equivalent (3-phase) or the winding (1-phase): EMF (V rms),
+    /// hot resistance and reactance (ohm), and the phases m: I = E / sqrt((R + R_load)^2 + X^2), copper loss m I^2 R.</summary>
+    public double SourceEmfRmsV { get; init; }
+    public double SourceResistanceOhm { get; init; }
+    public double SourceReactanceOhm { get; init; }
+    public int SourcePhases { get; init; } = 1;
+
     /// <summary>Current density in the copper, A/mm^2 (rms).</summary>
     public required double CurrentDensityAPerMm2 { get; init; }
 }

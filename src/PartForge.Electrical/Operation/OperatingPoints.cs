@@ -25,6 +25,7 @@ public static class OperatingPoints
             Rpm = rpm, LoadResistanceOhm = loadOhm, CurrentA = i, CoilCurrentA = ic, TerminalVoltageV = vt,
             OutputPowerW = pout, CopperLossW = pcu, Efficiency = pout + pcu > 0 ? pout / (pout + pcu) : 0,
             ShaftTorqueNm = wm > 0 ? (pout + pcu) / wm : 0, CurrentDensityAPerMm2 = ic / wireAreaMm2,
+            SourceEmfRmsV = emfRmsV, SourceResistanceOhm = rOhm, SourceReactanceOhm = x, SourcePhases = m,
         };
     }
 

@@ -9,7 +9,9 @@ namespace PartForge.Electrical.Thermal;
 ///
 /// Magnet temperature: taken equal to the coil's steady temperature. The magnets carry no loss of their own in this
 /// model (eddy currents in them are neglected), so in steady state they sit between the air and the hottest surface
-/// they exchange heat with, the coil faces: the coil's temperature bounds them from above (conservative).
+/// they exchange heat with, the coil faces: the coil's temperature bounds them from above (conservative). Their Br
+/// follows the reversible coefficient up to the grade's maximum working temperature and is held there beyond it (the
+/// loss is then not reversible, which the model does not follow; the magnet-temperature check fails).
 /// </summary>
 public sealed record ThermalResult
 {

@@ -50,4 +50,30 @@ public class HeatResultsTests
         Assert.Equal(CheckStatus.Pass, c.Status);
         Assert.Contains("PLA", c.Message);
     }
+
+    // The generator's fixes actually help: each value the coil-temperature check offers for wind-duo (which warns: 38.9 C
+    // against its own 45 C limit), put back into the design, gives a coil that passes, by the whole engine.
+    [Fact]
+    public void Generator_fixes_bring_the_coil_below_the_warning_band()
+    {
+        var preset = PresetLibrary.Find("wind-duo")!;
+        var loaded = DesignLoader.LoadText(preset.Text, "wind-duo.yaml");
+        var c = BuildPipeline.Evaluate(loaded.Machine!).Checks.Checks.Single(x => x.Id == CheckIds.CoilTemperature);
+        Assert.Equal(CheckStatus.Warn, c.Status);
+        var offers = new List<(string Key, string Value)>();
+        foreach (var (key, pattern) in new[] { ("coils.wire.awg", @"coils\.wire\.awg (\d+)"), ("coils.turns", @"coils\.turns (\d+)"),
+                     ("operation.load_resistance", @"operation\.load_resistance ([0-9.]+)") })
+        {
+            var m = Regex.Match(c.Message, pattern);
+            Assert.True(m.Success, $"no {key} in: {c.Message}");
+            offers.Add((key, m.Groups[1].Value));
+        }
+        foreach (var (key, value) in offers)
+        {
+            var fixedDesign = DesignLoader.LoadText(preset.Text, "wind-duo.yaml", new[] { (key, value) });
+            Assert.True(fixedDesign.Success, string.Join("; ", fixedDesign.Errors));
+            var after = BuildPipeline.Evaluate(fixedDesign.Machine!).Checks.Checks.Single(x => x.Id == CheckIds.CoilTemperature);
+            Assert.True(after.Status == CheckStatus.Pass, $"{key} {value}: {after.Value} C against {after.Limit} C: {after.Message}");
+        }
+    }
 }
