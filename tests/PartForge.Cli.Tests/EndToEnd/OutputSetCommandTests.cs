@@ -83,12 +83,16 @@ public class OutputSetCommandTests
         if (!OperatingSystem.IsLinux()) return;
         using var w = new WorkDir();
         w.Write("d.yaml", Crank);
+        var clock = Stopwatch.StartNew();
         var first = PartforgeProcess.Run(w.Path, "build", "d.yaml", "-o", "out", "--quiet");
+        double buildMs = clock.Elapsed.TotalMilliseconds;
         Assert.True(first.ExitCode == 0, first.ToString());
         var before = Read(w.File("out"));
         w.Write("d.yaml", Crank.Replace("turns: 120", "turns: 110"));
         int signalled = 0, spoke = 0;
-        foreach (int delayMs in new[] { 400, 700, 1000, 1400 })
+        // Signals spread over the time a whole build took here (the native executable builds in a fraction of the
+        // framework-dependent one's time), so some land while the set is being written.
+        foreach (int delayMs in new[] { 0.2, 0.35, 0.5, 0.65, 0.8 }.Select(f => Math.Max(5, (int)(f * buildMs))))
         {
             var psi = new ProcessStartInfo(PartforgeProcess.ExePath ?? "dotnet") { WorkingDirectory = w.Path, RedirectStandardError = true, RedirectStandardOutput = true, UseShellExecute = false };
             if (PartforgeProcess.ExePath == null) psi.ArgumentList.Add(PartforgeProcess.DllPath);
