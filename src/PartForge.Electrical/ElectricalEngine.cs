@@ -140,12 +140,7 @@ public static partial class ElectricalEngine
         var kCold = phaseNames.Select(x => PhaseHarmonics(seriesAmbient, layout, x, mult)).ToArray();
         var sensorsCold = SensorPlanner.Plan(d.Sensor, d.ElectricalPoles, phases, coil.Outline, coils,
             kCold.Select(kk => Norm(-90 - kk[0].Phase * 180 / Math.PI)).ToArray(), new List<Diagnostic>(), !same);
-        var phaseFluxCold = kCold.Select((kk, x) => new PhaseFlux(phaseNames[x], seriesAmbient.Orders.Select((n, i) =>
-        {
-            Complex lam = kk[i] / (Complex.ImaginaryOne * n * p);
-            return new FluxTerm(n * p, lam.Real, -lam.Imaginary);
-        }).ToArray())).ToArray();
-        var planCold = SwitchingPlanner.Plan(d, field, sensorsCold, phaseFluxCold, planColdOhm, lPh * 1e-6);
+        var planCold = SwitchingPlanner.Plan(d, field, sensorsCold, PhaseFluxOf(kCold, seriesAmbient.Orders, phaseNames, p), planColdOhm, lPh * 1e-6);
         var heat = Heat(d, q, coil, seriesAmbient, brAmbient, ironFlux, layout, phaseNames, mult, parallel, OhmPhAt, lPh, wire, p, planCold, planColdOhm);
         var series = heat.Series;
         double tCoil = heat.Thermal.CoilTemperatureC;
@@ -206,11 +201,7 @@ public static partial class ElectricalEngine
         // Sensor timing: the positive-going zero crossing of each phase's fundamental EMF: p theta + arg K = -90.
         var zeroCross = k.Select(kk => Norm(-90 - kk[0].Phase * 180 / Math.PI)).ToArray();
         var sensors = SensorPlanner.Plan(d.Sensor, d.ElectricalPoles, phases, coil.Outline, coils, zeroCross, diags, !same);
-        var phaseFlux = k.Select((kk, x) => new PhaseFlux(phaseNames[x], series.Orders.Select((n, i) =>
-        {
-            Complex lam = kk[i] / (Complex.ImaginaryOne * n * p);
-            return new FluxTerm(n * p, lam.Real, -lam.Imaginary);
-        }).ToArray())).ToArray();
+        var phaseFlux = PhaseFluxOf(k, series.Orders, phaseNames, p);
         var plan = SwitchingPlanner.Plan(d, field, sensors, phaseFlux, ohmPhHot, lPh * 1e-6);
 
         // Operating points (the winding at its steady temperature; a pulse drive's windows are the ones its sensor
@@ -503,6 +494,15 @@ public static partial class ElectricalEngine
     private static double Rms(Complex[] k) => Math.Sqrt(k.Sum(c => c.Magnitude * c.Magnitude) / 2);
 
     private static double Peak(Complex[] k, IReadOnlyList<int> orders) => HarmonicSynth.Peak(k, orders);
+
+    /// <summary>Each phase's flux linkage as terms of the mechanical angle, from its EMF harmonics per rad/s
+    /// (lambda_n = K_n / (j n p)).</summary>
+    private static PhaseFlux[] PhaseFluxOf(Complex[][] k, IReadOnlyList<int> orders, char[] phaseNames, int p) =>
+        k.Select((kk, x) => new PhaseFlux(phaseNames[x], orders.Select((n, i) =>
+        {
+            Complex lam = kk[i] / (Complex.ImaginaryOne * n * p);
+            return new FluxTerm(n * p, lam.Real, -lam.Imaginary);
+        }).ToArray())).ToArray();
 
     private static double Norm(double deg)
     {
